@@ -1,0 +1,103 @@
+// Linear elastic analysis of a uniform straight beam between two vertical
+// supports, each end restrained by a rotational spring (pin, spring or rigid).
+//
+// Method (docs/method/beam-model.md):
+//  1. Euler-Bernoulli cubic (Hermite) elements with a node at each end, at every
+//     point load or point moment and at every boundary of a distributed load, so
+//     the nodal values are exact for the load kinds supported. Consistent nodal
+//     loads; the deflected shape inside an element is the Hermite interpolation
+//     plus the element's fixed-fixed particular solution, which is exact.
+//  2. The supports prevent deflection at both ends. The system is solved once
+//     for the loads and once for a unit couple at each end rotation. This is a
+//     static condensation onto the two end rotations: any pair of end springs is
+//     then a 2x2 solve, and a rigid end is the exact constraint rotation = 0,
+//     not a large spring number.
+//  3. Every state is checked for equilibrium of vertical forces and of moments
+//     about the start; a residual above 1e-9 of the load scale throws
+//     internal_error.
+// Signs: sign_conventions.hpp. Units: SI base units.
+#pragma once
+
+#include <array>
+#include <vector>
+
+#include "pinproof/loads.hpp"
+#include "pinproof/sign_conventions.hpp"
+#include "pinproof/stiffness.hpp"
+
+namespace pinproof {
+
+struct beam_state {
+    stiffness stiffness_start = stiffness::pinned();
+    stiffness stiffness_end = stiffness::pinned();
+    double reaction_start = 0;      // N, upward positive
+    double reaction_end = 0;        // N, upward positive
+    double moment_start = 0;        // N*m, hogging positive
+    double moment_end = 0;          // N*m, hogging positive
+    double max_sagging_moment = 0;  // N*m, largest M(x) over the span (may be negative)
+    double max_sagging_at = 0;      // m from the start
+    double max_deflection = 0;      // m, downward positive: w(x) of largest magnitude
+    double max_deflection_at = 0;   // m from the start
+    double rotation_start = 0;      // rad, positive as a simply supported beam under gravity
+    double rotation_end = 0;        // rad, same sense
+};
+
+// Polynomial in the local coordinate s of one element: c[0] + c[1] s + ... + c[5] s^5.
+using element_polynomial = std::array<double, 6>;
+
+class beam_model {
+public:
+    // Throws std::invalid_argument for span <= 0, EI <= 0, non-finite values or
+    // a load outside [0, span] (the project loader reports these to the user
+    // with field names before a model is built).
+    beam_model(double span, double EI, std::vector<load> loads);
+
+    double span() const noexcept { return span_; }
+    double EI() const noexcept { return EI_; }
+    const std::vector<double>& nodes() const noexcept { return nodes_; }
+
+    // The full linear state for a pair of end joints.
+    beam_state solve(stiffness start, stiffness end) const;
+
+    // The state for given hogging end moments (N*m), whatever joint produced
+    // them. Used by non-linear joint models (gap closure) that iterate on the
+    // end moments.
+    beam_state state_for_end_moments(double moment_start, double moment_end) const;
+
+    // The condensed form: end rotations are
+    //   rotation = pinned_rotations() - flexibility() * {moment_start, moment_end}
+    // with rotations and hogging moments in the sign convention.
+    std::array<double, 2> pinned_rotations() const noexcept { return rot0_; }
+    std::array<std::array<double, 2>, 2> flexibility() const noexcept { return flex_; }
+
+    // Hogging end moments for a pair of joints from the condensed 2x2 system.
+    std::array<double, 2> end_moments(stiffness start, stiffness end) const;
+
+    // Deflection (m, downward) and bending moment (N*m, sagging) at x for the
+    // state with the given hogging end moments.
+    double deflection_at(double x, double moment_start, double moment_end) const;
+    double moment_at(double x, double moment_start, double moment_end) const;
+
+private:
+    struct element {
+        double x0 = 0, length = 0;
+        // Deflection polynomials for the load state and for unit hogging end
+        // moments at the start and at the end.
+        element_polynomial w_load{}, w_start{}, w_end{};
+    };
+    element_polynomial combined(const element& e, double m_start, double m_end) const;
+    std::size_t element_index(double x) const;
+    void check_equilibrium(const beam_state& s) const;
+
+    double span_ = 0, EI_ = 0;
+    std::vector<load> loads_;
+    std::vector<double> nodes_;
+    std::vector<element> elements_;
+    std::array<double, 2> rot0_{};                 // pinned end rotations
+    std::array<std::array<double, 2>, 2> flex_{};  // d(rotation)/d(-moment)
+    // Reactions (upward) of the load state and per unit hogging end moment.
+    std::array<double, 2> reaction0_{}, reaction_per_start_{}, reaction_per_end_{};
+    double total_force_ = 0, total_moment_about_start_ = 0, load_scale_ = 0;
+};
+
+}  // namespace pinproof

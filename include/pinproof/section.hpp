@@ -1,0 +1,49 @@
+// Cross-sections of beams.
+//
+// Standard hot-rolled I sections are stored as their dimensions (h, b, tw, tf, r)
+// and their properties are computed from them, including the four root fillets.
+// A user may instead give the properties directly (at least I and depth).
+// All values in SI base units (m, m^2, m^3, m^4).
+#pragma once
+
+#include <optional>
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace pinproof {
+
+struct section_dimensions {
+    std::string name;          // as listed in the catalogue, e.g. "IPE 300"
+    double h = 0;              // overall depth
+    double b = 0;              // flange width
+    double tw = 0;             // web thickness
+    double tf = 0;             // flange thickness
+    double r = 0;              // root radius
+};
+
+struct section {
+    std::string name;          // catalogue name, or "user-defined"
+    double I = 0;              // second moment of area about the major axis
+    double depth = 0;          // overall depth
+    std::optional<double> area;
+    std::optional<double> flange_width;
+    std::optional<double> flange_thickness;
+    std::optional<double> web_thickness;
+    std::optional<double> root_radius;
+    std::optional<double> W_el;  // elastic section modulus, major axis
+    std::optional<double> W_pl;  // plastic section modulus, major axis
+};
+
+// Properties of a doubly symmetric rolled I section with four root fillets.
+section rolled_i_section(const section_dimensions& d);
+
+// Looks a section up in the built-in catalogue. Matching ignores case and
+// spaces and accepts common spellings ("IPE300", "HE 300 A", "HEA300",
+// "W18x35", "W 18 X 35"). Returns nullopt when the name is not listed.
+std::optional<section> find_catalogue_section(std::string_view name);
+
+// Every catalogue entry, as stored.
+const std::vector<section_dimensions>& catalogue();
+
+}  // namespace pinproof

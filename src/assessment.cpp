@@ -1,0 +1,359 @@
+#include "pinproof/assessment.hpp"
+
+#include <algorithm>
+#include <cmath>
+
+#include "pinproof/errors.hpp"
+#include "pinproof/result_fields.hpp"
+
+namespace pinproof {
+
+std::string to_string(check_status s)
+{
+    switch (s) {
+    case check_status::pass: return "pass";
+    case check_status::fail: return "fail";
+    case check_status::warn: return "warn";
+    case check_status::not_applicable: return "not-applicable";
+    }
+    return "unknown";
+}
+
+const value_range& state_envelope::of(double beam_state::*member) const
+{
+    const auto& f = result_fields();
+    for (std::size_t i = 0; i < f.size(); ++i)
+        if (f[i].member == member) return ranges.at(i);
+    throw internal_error("unknown result field");
+}
+
+bool beam_assessment::holds() const
+{
+    return std::none_of(checks.begin(), checks.end(), [](const check& c) { return c.status == check_status::fail; });
+}
+
+bool project_assessment::all_hold() const
+{
+    return std::all_of(beams.begin(), beams.end(), [](const beam_assessment& b) { return b.holds(); });
+}
+
+namespace {
+
+void include(state_envelope& env, const beam_state& s, bool first)
+{
+    const auto& f = result_fields();
+    env.ranges.resize(f.size());
+    for (std::size_t i = 0; i < f.size(); ++i) {
+        const double v = s.*(f[i].member);
+        if (first) env.ranges[i] = {v, v};
+        env.ranges[i].min = std::min(env.ranges[i].min, v);
+        env.ranges[i].max = std::max(env.ranges[i].max, v);
+    }
+}
+
+// Stiffness of fixity factor r (Monforton and Wu, 1963): r = 1/(1 + 3EI/(S L)).
+stiffness from_fixity(double r, double EI, double span)
+{
+    if (r >= 1.0) return stiffness::rigid();
+    return stiffness::spring(3.0 * r * EI / (span * (1.0 - r)));
+}
+
+double fixity(stiffness s, double EI, double span)
+{
+    if (s.is_rigid()) return 1.0;
+    const double k = s.ratio(EI, span);
+    return k / (k + 3.0);
+}
+
+combination_result analyse_combination(const beam& b, const combination& c)
+{
+    combination_result out;
+    out.comb = c;
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c));
+    out.pinned = model.solve(stiffness::pinned(), stiffness::pinned());
+    out.fixed = model.solve(stiffness::rigid(), stiffness::rigid());
+    const auto& rs = b.start.range;
+    const auto& re = b.end.range;
+    out.corners = {model.solve(rs.min, re.min), model.solve(rs.min, re.max), model.solve(rs.max, re.min),
+                   model.solve(rs.max, re.max)};
+    bool first = true;
+    for (const auto& s : out.corners) {
+        include(out.envelope, s, first);
+        first = false;
+    }
+    // Every result of a state is linear in the two end moments, and for a fixed
+    // stiffness at one end the end moments move monotonically along a line as
+    // the other end's stiffness grows, so each pointwise result is monotone in
+    // each stiffness and takes its extremes at the corners. The maximum sagging
+    // moment and the largest deflection are maxima over x of such results: their
+    // largest values are at the corners too, but their smallest may lie inside
+    // the box. A grid in fixity-factor space finds those (range-envelope.md).
+    const bool degenerate = rs.min == rs.max && re.min == re.max;
+    if (!degenerate) {
+        const int n = 9;
+        const double EI = b.EI();
+        const double r0s = fixity(rs.min, EI, b.span), r1s = fixity(rs.max, EI, b.span);
+        const double r0e = fixity(re.min, EI, b.span), r1e = fixity(re.max, EI, b.span);
+        for (int i = 0; i < n; ++i)
+            for (int j = 0; j < n; ++j) {
+                const double fs = r0s + (r1s - r0s) * i / (n - 1.0);
+                const double fe = r0e + (r1e - r0e) * j / (n - 1.0);
+                const beam_state s = model.solve(i == 0 ? rs.min : i == n - 1 ? rs.max : from_fixity(fs, EI, b.span),
+                                                 j == 0 ? re.min : j == n - 1 ? re.max : from_fixity(fe, EI, b.span));
+                const auto& f = result_fields();
+                for (std::size_t k = 0; k < f.size(); ++k) {
+                    const bool searched = f[k].member == &beam_state::max_sagging_moment ||
+                                          f[k].member == &beam_state::max_deflection ||
+                                          f[k].member == &beam_state::max_sagging_at ||
+                                          f[k].member == &beam_state::max_deflection_at;
+                    if (!searched) continue;
+                    const double v = s.*(f[k].member);
+                    out.envelope.ranges[k].min = std::min(out.envelope.ranges[k].min, v);
+                    out.envelope.ranges[k].max = std::max(out.envelope.ranges[k].max, v);
+                }
+                ++out.interior_points;
+            }
+    }
+    return out;
+}
+
+joint_assessment assess_joint(const project& p, const beam& b, beam_end e)
+{
+    joint_assessment j;
+    j.end = e;
+    j.range = b.at(e).range;
+    const double EI = b.EI();
+    if (!j.range.min.is_rigid()) j.ratio_lower = j.range.min.ratio(EI, b.span);
+    if (!j.range.max.is_rigid()) j.ratio_upper = j.range.max.ratio(EI, b.span);
+    j.fixity_lower = fixity(j.range.min, EI, b.span);
+    j.fixity_upper = fixity(j.range.max, EI, b.span);
+    j.en_lower = classify_en(j.range.min, EI, b.span, p.frame);
+    j.en_upper = classify_en(j.range.max, EI, b.span, p.frame);
+    j.aisc_lower = classify_aisc(j.range.min, EI, b.span);
+    j.aisc_upper = classify_aisc(j.range.max, EI, b.span);
+    return j;
+}
+
+struct formatter {
+    unit_system system;
+    std::string operator()(double v, dimension d) const { return format_quantity(v, d, system); }
+};
+
+std::string stiffness_text(stiffness s, const formatter& fmt)
+{
+    return s.is_rigid() ? std::string("rigid") : fmt(s.value(), dims::rotational_stiffness);
+}
+
+check stiffness_class_check(const project& p, const joint_assessment& j)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "stiffness-class-" + to_string(j.end);
+    c.dim = dims::dimensionless;
+    c.limit = pinned_limit(p.standard);
+    const bool en = p.standard == design_standard::en1993_1_8;
+    const std::string clause = en ? "EN 1993-1-8 5.2.2.5(1)" : "AISC 360-16 Commentary B3.4";
+    const std::string pinned_word = en ? "nominally pinned" : "simple";
+    const std::string cls = en ? to_string(j.en_upper) : to_string(j.aisc_upper);
+    const std::string upper = "The upper-bound stiffness " + stiffness_text(j.range.max, fmt);
+    if (!j.ratio_upper) {
+        c.status = check_status::fail;
+        c.message = upper + " is a rigid joint, not " + pinned_word + " under " + clause +
+                    ": the beam end is fixed and the pinned assumption does not hold.";
+        return c;
+    }
+    c.value = *j.ratio_upper;
+    const std::string ratio = "S*L/EI = " + format_number(*j.ratio_upper, 3);
+    if (*j.ratio_upper <= *c.limit) {
+        c.status = check_status::pass;
+        c.message = upper + " gives " + ratio + " <= " + format_number(*c.limit, 2) + ": " + pinned_word +
+                    " under " + clause + ".";
+    } else {
+        c.status = check_status::fail;
+        c.message = upper + " gives " + ratio + " > " + format_number(*c.limit, 2) + ": " + cls + " under " + clause +
+                    ", so the joint may not be idealised as " + pinned_word +
+                    ". Design the beam with the semi-rigid joint, or use a more flexible detail.";
+    }
+    return c;
+}
+
+struct governing {
+    double value = 0;
+    std::string combination;
+    bool found = false;
+};
+
+check joint_moment_check(const project& p, const beam& b, const std::vector<combination_result>& combos, beam_end e)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "joint-moment-" + to_string(e);
+    c.dim = dims::moment;
+    double beam_state::*member = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
+    governing g;
+    for (const auto& r : combos) {
+        if (r.comb.use != limit_state::strength) continue;
+        const auto& range = r.envelope.of(member);
+        const double m = std::max(std::abs(range.min), std::abs(range.max));
+        if (!g.found || m > g.value) g = {m, r.comb.name, true};
+    }
+    const auto& mrd = b.at(e).moment_resistance;
+    if (!g.found) {
+        c.status = check_status::not_applicable;
+        c.message = "No strength combination is given, so the moment the joint attracts under design loads is not checked.";
+        return c;
+    }
+    c.value = g.value;
+    const std::string attracted = "Under strength combinations the joint attracts up to " + fmt(g.value, dims::moment) +
+                                  " (combination " + g.combination + ", over the stiffness range)";
+    if (!mrd) {
+        c.status = check_status::not_applicable;
+        c.message = attracted + "; no moment resistance is declared for the joint, so this is not checked.";
+        return c;
+    }
+    c.limit = *mrd;
+    if (g.value <= *mrd) {
+        c.status = check_status::pass;
+        c.message = attracted + ", within its declared moment resistance " + fmt(*mrd, dims::moment) + ".";
+    } else {
+        c.status = check_status::fail;
+        c.message = attracted + ", more than its declared moment resistance " + fmt(*mrd, dims::moment) +
+                    ": the joint would have to yield to behave as a pin. Design it for the moment, or use a more "
+                    "flexible detail.";
+    }
+    return c;
+}
+
+check support_moment_check(const project& p, const std::vector<combination_result>& combos, beam_end e)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "support-moment-" + to_string(e);
+    c.dim = dims::moment;
+    double beam_state::*member = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
+    governing g;
+    for (const auto& r : combos) {
+        if (r.comb.use != limit_state::strength) continue;
+        const auto& range = r.envelope.of(member);
+        const double m = std::max(std::abs(range.min), std::abs(range.max));
+        if (!g.found || m > g.value) g = {m, r.comb.name, true};
+    }
+    if (!g.found) {
+        c.status = check_status::not_applicable;
+        c.message = "No strength combination is given, so no support moment is reported.";
+        return c;
+    }
+    c.value = g.value;
+    c.status = check_status::pass;
+    if (g.value == 0.0) {
+        c.message = "For the supporting member: the joint transfers no moment (its upper-bound stiffness is a pin).";
+    } else {
+        c.message = "For the supporting member: up to " + fmt(g.value, dims::moment) +
+                    " is transferred into the support at the upper-bound stiffness (combination " + g.combination +
+                    "), in addition to any moment from the eccentricity of the reaction. Reported, not checked here.";
+    }
+    return c;
+}
+
+check rotation_demand_check(const project& p, const std::vector<combination_result>& combos, beam_end e)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "rotation-demand-" + to_string(e);
+    c.dim = dims::angle;
+    double beam_state::*member = e == beam_end::start ? &beam_state::rotation_start : &beam_state::rotation_end;
+    governing g;
+    for (const auto& r : combos) {
+        const auto& range = r.envelope.of(member);
+        const double m = std::max(std::abs(range.min), std::abs(range.max));
+        if (!g.found || m > g.value) g = {m, r.comb.name, true};
+    }
+    c.value = g.value;
+    c.limit = simple_connection_rotation_rule_of_thumb;
+    const std::string demand = "The end rotation demand is up to " + fmt(g.value, dims::angle) + " (combination " +
+                               g.combination + ", at the lower-bound stiffness)";
+    if (g.value <= simple_connection_rotation_rule_of_thumb) {
+        c.status = check_status::pass;
+        c.message = demand + ", within the about 30 mrad a simple connection is commonly expected to accommodate "
+                             "(rule of thumb, not a check of the detail; check the end gap and the connection's "
+                             "rotation capacity).";
+    } else {
+        c.status = check_status::warn;
+        c.message = demand + ", more than the about 30 mrad a simple connection is commonly expected to accommodate "
+                             "(rule of thumb): confirm the connection's rotation capacity and the end gap.";
+    }
+    return c;
+}
+
+check deflection_check(const project& p, const beam& b, const std::vector<combination_result>& combos)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "deflection";
+    c.dim = dims::length;
+    governing g;
+    double pinned = 0;
+    for (const auto& r : combos) {
+        if (r.comb.use != limit_state::service) continue;
+        const auto& range = r.envelope.of(&beam_state::max_deflection);
+        const double d = std::max(std::abs(range.min), std::abs(range.max));
+        if (!g.found || d > g.value) {
+            g = {d, r.comb.name, true};
+            pinned = std::abs(r.pinned.max_deflection);
+        }
+    }
+    if (!b.deflection) {
+        c.status = check_status::not_applicable;
+        c.message = "No deflection limit is given (limits.deflection), so service deflection is not checked.";
+        if (g.found) c.value = g.value;
+        return c;
+    }
+    c.limit = b.deflection->value(b.span);
+    if (!g.found) {
+        c.status = check_status::not_applicable;
+        c.message = "No service combination is given, so the deflection limit " + b.deflection->text + " is not checked.";
+        return c;
+    }
+    c.value = g.value;
+    const std::string text = "The service deflection is up to " + fmt(g.value, dims::length) + " over the stiffness range (" +
+                             fmt(pinned, dims::length) + " with ideal pins), combination " + g.combination +
+                             ", against the limit " + b.deflection->text + " = " + fmt(*c.limit, dims::length);
+    c.status = g.value <= *c.limit ? check_status::pass : check_status::fail;
+    c.message = text + (c.status == check_status::pass ? "." : ": the beam is too flexible.");
+    return c;
+}
+
+}  // namespace
+
+beam_assessment assess_beam(const project& p, const beam& b)
+{
+    beam_assessment a;
+    a.id = b.id;
+    a.input = &b;
+    for (const auto& c : b.combinations) a.combinations.push_back(analyse_combination(b, c));
+    a.start = assess_joint(p, b, beam_end::start);
+    a.end = assess_joint(p, b, beam_end::end);
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(stiffness_class_check(p, a.joint_at(e)));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(joint_moment_check(p, b, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
+    a.checks.push_back(deflection_check(p, b, a.combinations));
+    if (b.E_is_default)
+        a.notes.push_back(p.standard == design_standard::en1993_1_8
+                              ? "E not given: 210 000 MPa is used (EN 1993-1-1 3.2.6(1))."
+                              : "E not given: 29 000 ksi is used (AISC 360-16, Section B2 / Symbols).");
+    if (p.frame == frame_bracing::unbraced && p.standard == design_standard::en1993_1_8)
+        a.notes.push_back("Unbraced frame: the EN 1993-1-8 rigid boundary k_b = 25 applies only where K_b/K_c >= 0.1 in "
+                          "every storey; otherwise joints are semi-rigid (5.2.2.5(1)).");
+    return a;
+}
+
+project_assessment assess_project(const project& p)
+{
+    project_assessment out;
+    out.input = &p;
+    for (const auto& b : p.beams) out.beams.push_back(assess_beam(p, b));
+    return out;
+}
+
+}  // namespace pinproof

@@ -1,0 +1,65 @@
+// Reading typed fields out of a project file's JSON, at the input edge.
+//
+// Every reader takes the JSON pointer of the object it reads from and adds a
+// problem (pointer of the field, what was expected, what was found) to the
+// problem_list instead of throwing, so that one run reports every mistake.
+// A reader that could not produce a value returns nullopt.
+#pragma once
+
+#include <nlohmann/json.hpp>
+
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "pinproof/errors.hpp"
+#include "pinproof/units.hpp"
+
+namespace pinproof::json_fields {
+
+using json = nlohmann::json;
+
+// "/beams/0" + "span" -> "/beams/0/span" (escaping '~' and '/' per RFC 6901).
+std::string child(const std::string& pointer, const std::string& key);
+std::string child(const std::string& pointer, std::size_t index);
+
+// Short rendering of a JSON value for messages: "\"25 kN\"", "12", "an object".
+std::string shown(const json& value);
+
+// A quantity of the expected dimension: a bare number in SI base units or a
+// "number unit" string. Must be finite. `system` (if given) is updated with the
+// unit system the text used.
+std::optional<double> quantity(const json& value, const std::string& pointer, dimension expected,
+                               problem_list& problems, unit_system* system = nullptr);
+
+// Field `key` of object `obj` (at `pointer`) read as a quantity. Missing:
+// nullopt and, if `required`, a problem "missing required field".
+std::optional<double> quantity_field(const json& obj, const std::string& pointer, const std::string& key,
+                                     dimension expected, bool required, problem_list& problems,
+                                     unit_system* system = nullptr);
+
+std::optional<std::string> string_field(const json& obj, const std::string& pointer, const std::string& key,
+                                        bool required, problem_list& problems);
+
+// A string that must be one of `allowed`; the message lists them.
+std::optional<std::string> choice_field(const json& obj, const std::string& pointer, const std::string& key,
+                                        const std::vector<std::string>& allowed, bool required,
+                                        problem_list& problems);
+
+std::optional<double> number_field(const json& obj, const std::string& pointer, const std::string& key,
+                                   bool required, problem_list& problems);
+
+std::optional<long long> integer_field(const json& obj, const std::string& pointer, const std::string& key,
+                                       bool required, problem_list& problems);
+
+std::optional<bool> bool_field(const json& obj, const std::string& pointer, const std::string& key,
+                               bool required, problem_list& problems);
+
+// Checks that `value` is a JSON object; adds a problem if not.
+bool expect_object(const json& value, const std::string& pointer, problem_list& problems);
+
+// Adds a problem for every key of `obj` not in `known` ("unknown field ...; known fields are ...").
+void reject_unknown_keys(const json& obj, const std::string& pointer, const std::vector<std::string>& known,
+                         problem_list& problems);
+
+}  // namespace pinproof::json_fields

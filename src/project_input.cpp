@@ -1,0 +1,494 @@
+// Reading a project file (docs/file-format.md). Every problem is collected
+// with its JSON pointer so that one run reports all of them.
+#include <nlohmann/json.hpp>
+
+#include <cctype>
+#include <cmath>
+#include <fstream>
+#include <set>
+#include <sstream>
+
+#include "json_fields.hpp"
+#include "pinproof/project.hpp"
+
+namespace pinproof {
+namespace {
+
+using json = nlohmann::json;
+using namespace json_fields;
+
+// Default moduli when a beam gives no E: EN 1993-1-1 3.2.6(1) E = 210 000 MPa;
+// AISC 360-16 Symbols / B2: E = 29 000 ksi.
+constexpr double default_E_en = 210e9;
+constexpr double default_E_aisc = 29000.0 * 6894757.293168361;
+
+struct reader {
+    problem_list& problems;
+    unit_system system = unit_system::neutral;
+
+    std::optional<double> q(const json& obj, const std::string& ptr, const std::string& key, dimension d,
+                            bool required)
+    {
+        return quantity_field(obj, ptr, key, d, required, problems, &system);
+    }
+
+    std::optional<double> positive(const json& obj, const std::string& ptr, const std::string& key, dimension d,
+                                   bool required)
+    {
+        auto v = q(obj, ptr, key, d, required);
+        if (v && !(*v > 0)) {
+            problems.add(child(ptr, key), "expected a positive " + describe(d) + ", found " + shown(obj.at(key)));
+            return std::nullopt;
+        }
+        return v;
+    }
+
+    std::optional<section> read_section(const json& b, const std::string& ptr)
+    {
+        auto it = b.find("section");
+        const std::string sp = child(ptr, "section");
+        if (it == b.end()) {
+            problems.add(sp, "missing required field \"section\" (a catalogue name such as \"IPE 300\", or an "
+                             "object with at least I and depth)");
+            return std::nullopt;
+        }
+        if (it->is_string()) {
+            const auto name = it->get<std::string>();
+            auto s = find_catalogue_section(name);
+            if (!s) {
+                problems.add(sp, "expected a section name from the built-in catalogue (IPE 80 to IPE 600, HE 100 A "
+                                 "to HE 600 A, HE 100 B to HE 600 B, W shapes such as W18x35) or an object with I "
+                                 "and depth, found \"" + name + "\", which is not in the catalogue (pinproof "
+                                 "sections lists it)");
+            }
+            return s;
+        }
+        if (!it->is_object()) {
+            problems.add(sp, "expected a section name or an object with I and depth, found " + shown(*it));
+            return std::nullopt;
+        }
+        const json& o = *it;
+        reject_unknown_keys(o, sp, {"name", "I", "depth", "area", "flange_width", "flange_thickness",
+                                    "web_thickness", "root_radius"},
+                            problems);
+        section s;
+        s.name = string_field(o, sp, "name", false, problems).value_or("user-defined");
+        auto I = positive(o, sp, "I", dims::second_moment, true);
+        auto depth = positive(o, sp, "depth", dims::length, true);
+        s.area = positive(o, sp, "area", dims::area, false);
+        s.flange_width = positive(o, sp, "flange_width", dims::length, false);
+        s.flange_thickness = positive(o, sp, "flange_thickness", dims::length, false);
+        s.web_thickness = positive(o, sp, "web_thickness", dims::length, false);
+        s.root_radius = q(o, sp, "root_radius", dims::length, false);
+        if (s.root_radius && *s.root_radius < 0) {
+            problems.add(child(sp, "root_radius"), "expected a root radius of zero or more, found " +
+                                                       shown(o.at("root_radius")));
+        }
+        if (depth && s.flange_thickness && 2 * *s.flange_thickness >= *depth)
+            problems.add(child(sp, "flange_thickness"), "expected two flange thicknesses to be less than the depth");
+        if (!I || !depth) return std::nullopt;
+        s.I = *I;
+        s.depth = *depth;
+        return s;
+    }
+
+    // "rigid", a rotational stiffness, or a multiple of EI/L such as "0.5 EI/L".
+    std::optional<stiffness> read_stiffness(const json& v, const std::string& ptr, std::optional<double> EI_over_L)
+    {
+        if (v.is_string()) {
+            std::string t = v.get<std::string>();
+            while (!t.empty() && std::isspace(static_cast<unsigned char>(t.back()))) t.pop_back();
+            std::size_t b = 0;
+            while (b < t.size() && std::isspace(static_cast<unsigned char>(t[b]))) ++b;
+            t = t.substr(b);
+            if (t == "rigid") return stiffness::rigid();
+            const std::string rel = "EI/L";
+            if (t.size() >= rel.size() && t.compare(t.size() - rel.size(), rel.size(), rel) == 0) {
+                const std::string num = t.substr(0, t.size() - rel.size());
+                char* end = nullptr;
+                const double k = std::strtod(num.c_str(), &end);
+                bool ok = end != num.c_str() && std::isfinite(k);
+                while (ok && end && *end) ok = std::isspace(static_cast<unsigned char>(*end++));
+                if (!ok || k < 0) {
+                    problems.add(ptr, "expected a non-negative multiple of EI/L such as \"0.5 EI/L\", found \"" +
+                                          v.get<std::string>() + "\"");
+                    return std::nullopt;
+                }
+                if (!EI_over_L) return std::nullopt;  // span, E or I already reported
+                return stiffness::spring(k * *EI_over_L);
+            }
+        }
+        problem_list local;
+        auto s = json_fields::quantity(v, ptr, dims::rotational_stiffness, local, &system);
+        if (!s) {
+            // The message also names the two other accepted forms.
+            for (const auto& pr : local.problems())
+                problems.add(pr.where, pr.message + " (\"rigid\" and multiples such as \"0.5 EI/L\" are accepted too)");
+            return std::nullopt;
+        }
+        if (*s < 0) {
+            problems.add(ptr, "expected a rotational stiffness of zero or more, found " + shown(v));
+            return std::nullopt;
+        }
+        return stiffness::spring(*s);
+    }
+
+    std::optional<joint> read_joint(const json& j, const std::string& ptr, std::optional<double> EI_over_L)
+    {
+        if (!expect_object(j, ptr, problems)) return std::nullopt;
+        reject_unknown_keys(j, ptr, {"stiffness", "moment_resistance", "description"}, problems);
+        joint out;
+        const std::string sp = child(ptr, "stiffness");
+        auto it = j.find("stiffness");
+        bool ok = true;
+        if (it == j.end()) {
+            problems.add(sp, "missing required field \"stiffness\" (an object {\"min\": ..., \"max\": ...} of "
+                             "rotational stiffnesses, \"rigid\" or multiples of EI/L)");
+            ok = false;
+        } else if (it->is_object()) {
+            reject_unknown_keys(*it, sp, {"min", "max"}, problems);
+            std::optional<stiffness> lo, hi;
+            if (!it->contains("min")) problems.add(child(sp, "min"), "missing required field \"min\"");
+            else lo = read_stiffness(it->at("min"), child(sp, "min"), EI_over_L);
+            if (!it->contains("max")) problems.add(child(sp, "max"), "missing required field \"max\"");
+            else hi = read_stiffness(it->at("max"), child(sp, "max"), EI_over_L);
+            if (lo && hi && *hi < *lo) {
+                problems.add(child(sp, "min"), "expected min not above max, found min " + shown(it->at("min")) +
+                                                   " above max " + shown(it->at("max")));
+                ok = false;
+            }
+            ok = ok && lo && hi;
+            if (ok) out.range = {*lo, *hi};
+        } else {
+            // A single value: the stiffness is known exactly.
+            auto s = read_stiffness(*it, sp, EI_over_L);
+            ok = s.has_value();
+            if (ok) out.range = {*s, *s};
+        }
+        auto mr = q(j, ptr, "moment_resistance", dims::moment, false);
+        if (mr && *mr < 0)
+            problems.add(child(ptr, "moment_resistance"), "expected a moment resistance of zero or more, found " +
+                                                              shown(j.at("moment_resistance")));
+        else out.moment_resistance = mr;
+        if (!ok) return std::nullopt;
+        return out;
+    }
+
+    std::vector<load> read_loads(const json& b, const std::string& ptr, std::optional<double> span)
+    {
+        std::vector<load> out;
+        const std::string lp = child(ptr, "loads");
+        auto it = b.find("loads");
+        if (it == b.end()) {
+            problems.add(lp, "missing required field \"loads\" (an array of loads)");
+            return out;
+        }
+        if (!it->is_array() || it->empty()) {
+            problems.add(lp, "expected a non-empty array of loads, found " + shown(*it));
+            return out;
+        }
+        for (std::size_t i = 0; i < it->size(); ++i) {
+            const json& l = (*it)[i];
+            const std::string p = child(lp, i);
+            if (!expect_object(l, p, problems)) continue;
+            auto c = string_field(l, p, "case", true, problems);
+            auto kind = choice_field(l, p, "kind", {"point", "udl", "linear", "moment"}, true, problems);
+            if (c && c->empty()) problems.add(child(p, "case"), "expected a load case name, found an empty string");
+            if (!kind) continue;
+            load ld;
+            ld.load_case = c.value_or("");
+            bool ok = c.has_value();
+            const auto position = [&](const std::string& key, bool required, double fallback) -> std::optional<double> {
+                auto x = q(l, p, key, dims::length, required);
+                if (!x) return l.contains(key) || required ? std::nullopt : std::optional<double>(fallback);
+                if (span && (*x < 0 || *x > *span)) {
+                    problems.add(child(p, key), "expected a position within the span, 0 to " +
+                                                    format_quantity(*span, dims::length, system) + " from the start, found " +
+                                                    shown(l.at(key)));
+                    return std::nullopt;
+                }
+                return x;
+            };
+            if (*kind == "point" || *kind == "moment") {
+                const bool point = *kind == "point";
+                reject_unknown_keys(l, p, {"case", "kind", point ? "P" : "M", "at"}, problems);
+                ld.kind = point ? load_kind::point : load_kind::moment;
+                auto v = q(l, p, point ? "P" : "M", point ? dims::force : dims::moment, true);
+                auto at = position("at", true, 0.0);
+                ok = ok && v && at;
+                if (ok) {
+                    ld.value = *v;
+                    ld.from = ld.to = *at;
+                }
+            } else {
+                const bool udl = *kind == "udl";
+                if (udl) reject_unknown_keys(l, p, {"case", "kind", "w", "from", "to"}, problems);
+                else reject_unknown_keys(l, p, {"case", "kind", "w_start", "w_end", "from", "to"}, problems);
+                ld.kind = udl ? load_kind::udl : load_kind::linear;
+                auto w0 = q(l, p, udl ? "w" : "w_start", dims::line_load, true);
+                auto w1 = udl ? w0 : q(l, p, "w_end", dims::line_load, true);
+                auto from = position("from", false, 0.0);
+                auto to = position("to", false, span.value_or(0.0));
+                if (from && to && !(*to > *from)) {
+                    problems.add(child(p, l.contains("to") ? "to" : "from"),
+                                 "expected \"to\" to lie beyond \"from\" (a distributed load needs a length), found from " +
+                                     format_quantity(*from, dims::length, system) + " and to " +
+                                     format_quantity(*to, dims::length, system));
+                    ok = false;
+                }
+                ok = ok && w0 && w1 && from && to && span;
+                if (ok) {
+                    ld.value = *w0;
+                    ld.value_end = *w1;
+                    ld.from = *from;
+                    ld.to = *to;
+                }
+            }
+            if (ok) out.push_back(ld);
+        }
+        return out;
+    }
+
+    std::vector<combination> read_combinations(const json& b, const std::string& ptr, const std::set<std::string>& cases)
+    {
+        std::vector<combination> out;
+        const std::string cp = child(ptr, "combinations");
+        auto it = b.find("combinations");
+        if (it == b.end()) {
+            problems.add(cp, "missing required field \"combinations\" (an array of named load combinations)");
+            return out;
+        }
+        if (!it->is_array() || it->empty()) {
+            problems.add(cp, "expected a non-empty array of combinations, found " + shown(*it));
+            return out;
+        }
+        std::set<std::string> names;
+        for (std::size_t i = 0; i < it->size(); ++i) {
+            const json& c = (*it)[i];
+            const std::string p = child(cp, i);
+            if (!expect_object(c, p, problems)) continue;
+            reject_unknown_keys(c, p, {"name", "use", "factors"}, problems);
+            combination out_c;
+            auto name = string_field(c, p, "name", true, problems);
+            auto use = choice_field(c, p, "use", {"strength", "service"}, true, problems);
+            if (name && name->empty()) problems.add(child(p, "name"), "expected a combination name, found an empty string");
+            if (name && !names.insert(*name).second)
+                problems.add(child(p, "name"), "expected a unique combination name, found \"" + *name +
+                                                   "\" a second time");
+            bool ok = name && use;
+            const std::string fp = child(p, "factors");
+            auto f = c.find("factors");
+            if (f == c.end()) {
+                problems.add(fp, "missing required field \"factors\" (an object such as {\"G\": 1.35, \"Q\": 1.5})");
+                ok = false;
+            } else if (!f->is_object() || f->empty()) {
+                problems.add(fp, "expected an object of load-case factors such as {\"G\": 1.35, \"Q\": 1.5}, found " +
+                                     shown(*f));
+                ok = false;
+            } else {
+                for (auto e = f->begin(); e != f->end(); ++e) {
+                    if (!e->is_number() || !std::isfinite(e->get<double>())) {
+                        problems.add(child(fp, e.key()), "expected a finite number, found " + shown(*e));
+                        ok = false;
+                        continue;
+                    }
+                    if (!cases.count(e.key())) {
+                        std::string list;
+                        for (const auto& k : cases) list += (list.empty() ? "\"" : ", \"") + k + "\"";
+                        problems.add(child(fp, e.key()), "expected a load case used by this beam's loads (" + list +
+                                                             "), found \"" + e.key() + "\"");
+                        ok = false;
+                        continue;
+                    }
+                    out_c.factors[e.key()] = e->get<double>();
+                }
+            }
+            if (!ok) continue;
+            out_c.name = *name;
+            out_c.use = *use == "strength" ? limit_state::strength : limit_state::service;
+            out.push_back(out_c);
+        }
+        return out;
+    }
+
+    std::optional<deflection_limit> read_deflection_limit(const json& lim, const std::string& ptr)
+    {
+        const std::string p = child(ptr, "deflection");
+        auto it = lim.find("deflection");
+        if (it == lim.end()) return std::nullopt;
+        deflection_limit out;
+        if (it->is_string()) {
+            std::string t = it->get<std::string>();
+            out.text = t;
+            std::string compact;
+            for (char ch : t)
+                if (!std::isspace(static_cast<unsigned char>(ch))) compact += ch;
+            for (const std::string prefix : {"span/", "L/"}) {
+                if (compact.rfind(prefix, 0) == 0) {
+                    const std::string num = compact.substr(prefix.size());
+                    char* end = nullptr;
+                    const double r = std::strtod(num.c_str(), &end);
+                    if (end == num.c_str() || *end != '\0' || !std::isfinite(r) || r <= 0) {
+                        problems.add(p, "expected a deflection limit such as \"span/360\" or \"20 mm\", found \"" + t + "\"");
+                        return std::nullopt;
+                    }
+                    out.span_ratio = r;
+                    return out;
+                }
+            }
+        }
+        auto v = json_fields::quantity(*it, p, dims::length, problems, &system);
+        if (!v) return std::nullopt;
+        if (!(*v > 0)) {
+            problems.add(p, "expected a positive deflection limit, found " + shown(*it));
+            return std::nullopt;
+        }
+        out.absolute = *v;
+        if (out.text.empty()) out.text = format_quantity(*v, dims::length, unit_system::si);
+        return out;
+    }
+
+    std::optional<beam> read_beam(const json& b, const std::string& ptr, design_standard standard)
+    {
+        if (!expect_object(b, ptr, problems)) return std::nullopt;
+        reject_unknown_keys(b, ptr, {"id", "description", "span", "E", "section", "loads", "combinations", "joints",
+                                     "limits"},
+                            problems);
+        beam out;
+        out.pointer = ptr;
+        auto id = string_field(b, ptr, "id", true, problems);
+        if (id && id->empty()) problems.add(child(ptr, "id"), "expected a beam id, found an empty string");
+        out.description = string_field(b, ptr, "description", false, problems).value_or("");
+        auto span = positive(b, ptr, "span", dims::length, true);
+        auto E = positive(b, ptr, "E", dims::pressure, false);
+        if (!b.contains("E")) E = standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
+        auto sec = read_section(b, ptr);
+        std::optional<double> EI_over_L;
+        if (span && E && sec) EI_over_L = *E * sec->I / *span;
+
+        auto loads = read_loads(b, ptr, span);
+        std::set<std::string> cases;
+        for (const auto& l : loads) cases.insert(l.load_case);
+        if (b.contains("loads") && b["loads"].is_array())
+            for (const auto& l : b["loads"])
+                if (l.is_object() && l.contains("case") && l["case"].is_string()) cases.insert(l["case"].get<std::string>());
+        auto combos = read_combinations(b, ptr, cases);
+
+        const std::string jp = child(ptr, "joints");
+        std::optional<joint> js, je;
+        auto jit = b.find("joints");
+        if (jit == b.end()) {
+            problems.add(jp, "missing required field \"joints\" (an object with \"start\" and \"end\")");
+        } else if (expect_object(*jit, jp, problems)) {
+            reject_unknown_keys(*jit, jp, {"start", "end"}, problems);
+            for (const char* e : {"start", "end"}) {
+                if (!jit->contains(e)) {
+                    problems.add(child(jp, e), std::string("missing required field \"") + e + "\"");
+                    continue;
+                }
+                (std::string(e) == "start" ? js : je) = read_joint(jit->at(e), child(jp, e), EI_over_L);
+            }
+        }
+        auto lim = b.find("limits");
+        if (lim != b.end() && expect_object(*lim, child(ptr, "limits"), problems)) {
+            reject_unknown_keys(*lim, child(ptr, "limits"), {"deflection"}, problems);
+            out.deflection = read_deflection_limit(*lim, child(ptr, "limits"));
+        }
+        if (!id || !span || !E || !sec || !js || !je) return std::nullopt;
+        out.id = *id;
+        out.span = *span;
+        out.E = *E;
+        out.E_is_default = !b.contains("E");
+        out.sec = *sec;
+        out.loads = std::move(loads);
+        out.combinations = std::move(combos);
+        out.start = *js;
+        out.end = *je;
+        return out;
+    }
+};
+
+std::string line_column(std::string_view text, std::size_t byte)
+{
+    std::size_t line = 1, col = 1;
+    for (std::size_t i = 0; i < byte && i < text.size(); ++i) {
+        if (text[i] == '\n') {
+            ++line;
+            col = 1;
+        } else {
+            ++col;
+        }
+    }
+    return "line " + std::to_string(line) + ", column " + std::to_string(col);
+}
+
+}  // namespace
+
+project read_project(const json& doc)
+{
+    problem_list problems;
+    reader r{problems};
+    project out;
+    if (!expect_object(doc, "", problems)) problems.throw_if_any();
+    reject_unknown_keys(doc, "", {"format", "title", "standard", "frame", "units", "beams", "$schema"}, problems);
+    auto format = string_field(doc, "", "format", true, problems);
+    if (format && *format != project_format)
+        problems.add("/format", std::string("expected \"") + project_format + "\", found \"" + *format + "\"");
+    out.format = project_format;
+    out.title = string_field(doc, "", "title", true, problems).value_or("");
+    auto standard = choice_field(doc, "", "standard", {"EN1993-1-8", "AISC360"}, true, problems);
+    auto frame = choice_field(doc, "", "frame", {"braced", "unbraced"}, true, problems);
+    auto units = choice_field(doc, "", "units", {"SI", "US"}, false, problems);
+    if (standard) out.standard = parse_design_standard(*standard);
+    if (frame) out.frame = parse_frame_bracing(*frame);
+
+    auto bit = doc.find("beams");
+    if (bit == doc.end()) {
+        problems.add("/beams", "missing required field \"beams\" (an array of beams)");
+    } else if (!bit->is_array() || bit->empty()) {
+        problems.add("/beams", "expected a non-empty array of beams, found " + shown(*bit));
+    } else {
+        std::set<std::string> ids;
+        for (std::size_t i = 0; i < bit->size(); ++i) {
+            const std::string p = child("/beams", i);
+            auto b = r.read_beam((*bit)[i], p, out.standard);
+            const json& bj = (*bit)[i];
+            if (bj.is_object() && bj.contains("id") && bj["id"].is_string()) {
+                const auto id = bj["id"].get<std::string>();
+                if (!id.empty() && !ids.insert(id).second)
+                    problems.add(child(p, "id"), "expected a unique beam id, found \"" + id + "\" a second time");
+            }
+            if (b) out.beams.push_back(std::move(*b));
+        }
+    }
+    problems.throw_if_any();
+    if (units) out.units = *units == "US" ? unit_system::us_customary : unit_system::si;
+    else out.units = r.system == unit_system::us_customary ? unit_system::us_customary : unit_system::si;
+    return out;
+}
+
+project parse_project(std::string_view text)
+{
+    json doc;
+    try {
+        doc = json::parse(text.begin(), text.end());
+    } catch (const json::parse_error& e) {
+        const std::string what = e.what();
+        const auto pos = what.find("syntax error");
+        throw input_error(line_column(text, e.byte > 0 ? e.byte - 1 : 0),
+                          "the file is not valid JSON: " + (pos == std::string::npos ? what : what.substr(pos)));
+    }
+    return read_project(doc);
+}
+
+project load_project_file(const std::string& path)
+{
+    std::ifstream in(path, std::ios::binary);
+    if (!in) throw input_error(path, "cannot open the project file for reading");
+    std::ostringstream buf;
+    buf << in.rdbuf();
+    if (in.bad()) throw input_error(path, "cannot read the project file");
+    return parse_project(buf.str());
+}
+
+}  // namespace pinproof
