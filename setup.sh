@@ -12,7 +12,7 @@ build=${PINPROOF_BUILD_DIR:-build}
 packages=(g++ cmake make libeigen3-dev libboost-math-dev libcli11-dev nlohmann-json3-dev doctest-dev)
 if [ "$mode" = test ]; then
   # Independent solvers used by some tests (python3-sympy, python3-scipy).
-  packages+=(python3 python3-sympy python3-scipy python3-numpy)
+  packages+=(python3 python3-sympy python3-scipy python3-numpy python3-jsonschema)
 fi
 
 missing=()

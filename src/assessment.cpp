@@ -65,7 +65,7 @@ double fixity(stiffness s, double EI, double span)
     return k / (k + 3.0);
 }
 
-combination_result analyse_combination(const beam& b, const combination& c)
+combination_result analyse_combination(const beam& b, const combination& c, bool search_interior)
 {
     combination_result out;
     out.comb = c;
@@ -89,7 +89,7 @@ combination_result analyse_combination(const beam& b, const combination& c)
     // largest values are at the corners too, but their smallest may lie inside
     // the box. A grid in fixity-factor space finds those (range-envelope.md).
     const bool degenerate = rs.min == rs.max && re.min == re.max;
-    if (!degenerate) {
+    if (!degenerate && search_interior) {
         const int n = 9;
         const double EI = b.EI();
         const double r0s = fixity(rs.min, EI, b.span), r1s = fixity(rs.max, EI, b.span);
@@ -325,12 +325,12 @@ check deflection_check(const project& p, const beam& b, const std::vector<combin
 
 }  // namespace
 
-beam_assessment assess_beam(const project& p, const beam& b)
+beam_assessment assess_beam(const project& p, const beam& b, const assessment_options& options)
 {
     beam_assessment a;
     a.id = b.id;
     a.input = &b;
-    for (const auto& c : b.combinations) a.combinations.push_back(analyse_combination(b, c));
+    for (const auto& c : b.combinations) a.combinations.push_back(analyse_combination(b, c, options.search_interior));
     a.start = assess_joint(p, b, beam_end::start);
     a.end = assess_joint(p, b, beam_end::end);
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(stiffness_class_check(p, a.joint_at(e)));
@@ -348,11 +348,11 @@ beam_assessment assess_beam(const project& p, const beam& b)
     return a;
 }
 
-project_assessment assess_project(const project& p)
+project_assessment assess_project(const project& p, const assessment_options& options)
 {
     project_assessment out;
     out.input = &p;
-    for (const auto& b : p.beams) out.beams.push_back(assess_beam(p, b));
+    for (const auto& b : p.beams) out.beams.push_back(assess_beam(p, b, options));
     return out;
 }
 

@@ -82,7 +82,14 @@ struct project_assessment {
 // from memory).
 inline constexpr double simple_connection_rotation_rule_of_thumb = 0.03;
 
-beam_assessment assess_beam(const project& p, const beam& b);
-project_assessment assess_project(const project& p);
+struct assessment_options {
+    // Search inside the range box for the smallest maximum sagging moment and
+    // deflection (range-envelope.md). The checks never need it: a schedule of
+    // many beams may switch it off.
+    bool search_interior = true;
+};
+
+beam_assessment assess_beam(const project& p, const beam& b, const assessment_options& options = {});
+project_assessment assess_project(const project& p, const assessment_options& options = {});
 
 }  // namespace pinproof
