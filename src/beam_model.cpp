@@ -1,7 +1,5 @@
 #include "pinproof/beam_model.hpp"
 
-#include <Eigen/Dense>
-
 #include <algorithm>
 #include <cmath>
 #include <sstream>
@@ -12,66 +10,6 @@
 
 namespace pinproof {
 namespace {
-
-using element_vector = std::array<double, 4>;  // (w1, theta1, w2, theta2)
-
-// Hermite cubic shape functions of an element of length l in power form,
-// N[k][i] = coefficient of s^i (standard Euler-Bernoulli beam element,
-// e.g. Przemieniecki, Theory of Matrix Structural Analysis, 1968, ch. 5).
-std::array<std::array<double, 4>, 4> hermite(double l)
-{
-    const double l2 = l * l, l3 = l2 * l;
-    return {{{1.0, 0.0, -3.0 / l2, 2.0 / l3},
-             {0.0, 1.0, -2.0 / l, 1.0 / l2},
-             {0.0, 0.0, 3.0 / l2, -2.0 / l3},
-             {0.0, 0.0, -1.0 / l, 1.0 / l2}}};
-}
-
-// Element stiffness for dofs (w1, theta1, w2, theta2), theta = dw/dx.
-Eigen::Matrix4d element_stiffness(double EI, double l)
-{
-    const double k = EI / (l * l * l);
-    Eigen::Matrix4d m;
-    m << 12, 6 * l, -12, 6 * l,
-         6 * l, 4 * l * l, -6 * l, 2 * l * l,
-         -12, -6 * l, 12, -6 * l,
-         6 * l, 2 * l * l, -6 * l, 4 * l * l;
-    return k * m;
-}
-
-// Consistent nodal loads of a line load varying linearly from qa to qb over
-// the element: integral of q(s) N_k(s) ds, in closed form.
-element_vector consistent_loads(double qa, double qb, double l)
-{
-    const double t = qb - qa;  // triangular part, zero at s = 0
-    return {qa * l / 2 + 3 * t * l / 20, qa * l * l / 12 + t * l * l / 30,
-            qa * l / 2 + 7 * t * l / 20, -qa * l * l / 12 - t * l * l / 20};
-}
-
-// Deflection of the element, both ends clamped, under the same line load:
-// EI w'''' = q(s) with w = w' = 0 at s = 0 and s = l. Added to the Hermite
-// interpolation of the nodal values it gives the exact deflected shape.
-polynomial::coefficients clamped_particular(double qa, double qb, double l, double EI)
-{
-    const double t = qb - qa;
-    const double A = (qa * std::pow(l, 4) / 24 + t * std::pow(l, 4) / 120) / EI;  // w_q(l)
-    const double B = (qa * std::pow(l, 3) / 6 + t * std::pow(l, 3) / 24) / EI;    // w_q'(l)
-    polynomial::coefficients c{};
-    c[2] = (-3 * A + B * l) / (l * l);
-    c[3] = (2 * A / l - B) / (l * l);
-    c[4] = qa / (24 * EI);
-    c[5] = t / (120 * l * EI);
-    return c;
-}
-
-element_polynomial interpolate(const element_vector& u, double l)
-{
-    const auto N = hermite(l);
-    element_polynomial c{};
-    for (int k = 0; k < 4; ++k)
-        for (int i = 0; i < 4; ++i) c[i] += u[k] * N[k][i];
-    return c;
-}
 
 bool finite(double v) { return std::isfinite(v); }
 
@@ -104,102 +42,129 @@ beam_model::beam_model(double span, double EI, std::vector<load> loads)
         if (nodes_.empty() || v - nodes_.back() > merge) nodes_.push_back(v);
     nodes_.back() = span;
     nodes_.front() = 0.0;
-    const auto nearest_node = [&](double v) {
-        auto it = std::lower_bound(nodes_.begin(), nodes_.end(), v - merge);
-        return static_cast<std::size_t>(std::min<std::ptrdiff_t>(it - nodes_.begin(), nodes_.size() - 1));
-    };
 
-    const std::size_t n_nodes = nodes_.size();
-    const std::size_t n_dof = 2 * n_nodes;
-    Eigen::MatrixXd K = Eigen::MatrixXd::Zero(n_dof, n_dof);
-    Eigen::VectorXd f = Eigen::VectorXd::Zero(n_dof);
-
-    elements_.resize(n_nodes - 1);
-    std::vector<std::array<double, 2>> element_q(n_nodes - 1);
-    for (std::size_t e = 0; e + 1 < n_nodes; ++e) {
-        const double xa = nodes_[e], xb = nodes_[e + 1];
-        elements_[e].x0 = xa;
-        elements_[e].length = xb - xa;
-        double qa = 0, qb = 0;
+    elements_.resize(nodes_.size() - 1);
+    for (std::size_t e = 0; e + 1 < nodes_.size(); ++e) {
+        auto& el = elements_[e];
+        el.x0 = nodes_[e];
+        el.length = nodes_[e + 1] - nodes_[e];
+        const double mid = 0.5 * (nodes_[e] + nodes_[e + 1]);
         for (const auto& l : loads_) {
             if (l.kind != load_kind::udl && l.kind != load_kind::linear) continue;
-            const double mid = 0.5 * (xa + xb);
             if (mid <= l.from || mid >= l.to) continue;
-            qa += intensity_at(l, std::clamp(xa, l.from, l.to));
-            qb += intensity_at(l, std::clamp(xb, l.from, l.to));
-        }
-        element_q[e] = {qa, qb};
-        const Eigen::Matrix4d ke = element_stiffness(EI_, xb - xa);
-        const element_vector fe = consistent_loads(qa, qb, xb - xa);
-        for (int i = 0; i < 4; ++i) {
-            f(2 * e + i) += fe[i];
-            for (int j = 0; j < 4; ++j) K(2 * e + i, 2 * e + j) += ke(i, j);
+            el.qa += intensity_at(l, std::clamp(nodes_[e], l.from, l.to));
+            el.qb += intensity_at(l, std::clamp(nodes_[e + 1], l.from, l.to));
         }
     }
-    for (const auto& l : loads_) {
-        if (l.kind == load_kind::point) f(2 * nearest_node(l.from)) += l.value;
-        if (l.kind == load_kind::moment) f(2 * nearest_node(l.from) + 1) += l.value;
+
+    // The load state, and the states of a unit hogging moment at each end
+    // (a unit anticlockwise couple at the start, a unit clockwise couple at the end).
+    const load_state s0 = integrate(loads_, 0.0, 0.0);
+    const load_state sa = integrate({}, -1.0, 0.0);
+    const load_state sb = integrate({}, 0.0, 1.0);
+    for (const load_state* st : {&s0, &sa, &sb})
+        for (const auto& c : st->w)
+            for (double v : c)
+                if (!finite(v)) throw internal_error("beam solution is not finite");
+    for (std::size_t e = 0; e < elements_.size(); ++e) {
+        elements_[e].w_load = s0.w[e];
+        elements_[e].w_start = sa.w[e];
+        elements_[e].w_end = sb.w[e];
     }
-
-    // Free dofs: everything except the deflection at the two supports.
-    std::vector<Eigen::Index> free;
-    for (std::size_t d = 0; d < n_dof; ++d)
-        if (d != 0 && d != n_dof - 2) free.push_back(static_cast<Eigen::Index>(d));
-    const Eigen::Index nf = static_cast<Eigen::Index>(free.size());
-    Eigen::MatrixXd Kff(nf, nf);
-    Eigen::MatrixXd rhs = Eigen::MatrixXd::Zero(nf, 3);
-    for (Eigen::Index i = 0; i < nf; ++i) {
-        for (Eigen::Index j = 0; j < nf; ++j) Kff(i, j) = K(free[i], free[j]);
-        rhs(i, 0) = f(free[i]);
-    }
-    // A unit hogging moment at the start is a unit anticlockwise couple on the
-    // beam there; at the end it is a unit clockwise couple.
-    rhs(0, 1) = -1.0;       // theta at node 0 is the first free dof
-    rhs(nf - 1, 2) = 1.0;   // theta at the last node is the last free dof
-    const Eigen::LDLT<Eigen::MatrixXd> ldlt(Kff);
-    if (ldlt.info() != Eigen::Success) throw internal_error("beam stiffness matrix could not be factorised");
-    const Eigen::MatrixXd sol = ldlt.solve(rhs);
-
-    Eigen::MatrixXd u = Eigen::MatrixXd::Zero(n_dof, 3);
-    for (Eigen::Index i = 0; i < nf; ++i) u.row(free[i]) = sol.row(i);
-    for (Eigen::Index k = 0; k < 3; ++k)
-        for (Eigen::Index d = 0; d < static_cast<Eigen::Index>(n_dof); ++d)
-            if (!finite(u(d, k))) throw internal_error("beam solution is not finite");
-
-    // Upward support reactions: the out-of-balance of the support dofs, f - K u.
-    const Eigen::MatrixXd Ku = K * u;
-    const auto reaction = [&](Eigen::Index d, int state) { return (state == 0 ? f(d) : 0.0) - Ku(d, state); };
-    const Eigen::Index d_start = 0, d_end = static_cast<Eigen::Index>(n_dof) - 2;
-    reaction0_ = {reaction(d_start, 0), reaction(d_end, 0)};
-    reaction_per_start_ = {reaction(d_start, 1), reaction(d_end, 1)};
-    reaction_per_end_ = {reaction(d_start, 2), reaction(d_end, 2)};
-
-    const Eigen::Index th_start = 1, th_end = static_cast<Eigen::Index>(n_dof) - 1;
-    rot0_ = {u(th_start, 0), -u(th_end, 0)};
-    flex_ = {{{-u(th_start, 1), -u(th_start, 2)}, {u(th_end, 1), u(th_end, 2)}}};
-
-    for (std::size_t e = 0; e + 1 < n_nodes; ++e) {
-        const double l = elements_[e].length;
-        for (int state = 0; state < 3; ++state) {
-            const element_vector ue{u(2 * e, state), u(2 * e + 1, state), u(2 * e + 2, state), u(2 * e + 3, state)};
-            element_polynomial c = interpolate(ue, l);
-            if (state == 0) {
-                const auto p = clamped_particular(element_q[e][0], element_q[e][1], l, EI_);
-                for (int i = 0; i < 6; ++i) c[i] += p[i];
-                elements_[e].w_load = c;
-            } else if (state == 1) {
-                elements_[e].w_start = c;
-            } else {
-                elements_[e].w_end = c;
-            }
-        }
-    }
+    reaction0_ = {s0.reaction_start, s0.reaction_end};
+    reaction_per_start_ = {sa.reaction_start, sa.reaction_end};
+    reaction_per_end_ = {sb.reaction_start, sb.reaction_end};
+    rot0_ = {s0.rotation_start, s0.rotation_end};
+    flex_ = {{{-sa.rotation_start, -sb.rotation_start}, {-sa.rotation_end, -sb.rotation_end}}};
+    closure_ = {s0.closure_shear, s0.closure_moment, sa.closure_shear, sa.closure_moment, sb.closure_shear,
+                sb.closure_moment};
 
     for (const auto& l : loads_) {
         total_force_ += total_force(l);
         total_moment_about_start_ += moment_about_start(l);
         load_scale_ += std::abs(total_force(l)) + std::abs(moment_about_start(l)) / span_;
     }
+}
+
+std::size_t beam_model::nearest_node(double v) const
+{
+    auto it = std::lower_bound(nodes_.begin(), nodes_.end(), v - 1e-12 * span_);
+    return static_cast<std::size_t>(
+        std::min<std::ptrdiff_t>(it - nodes_.begin(), static_cast<std::ptrdiff_t>(nodes_.size()) - 1));
+}
+
+// Exact deflection of the pinned-pinned beam under clockwise end couples and
+// either the beam's loads (`loads` is loads_) or none (`loads` is empty).
+//
+// With pinned supports the beam is statically determinate: the reactions
+// follow from statics and on each element (between two nodes) the bending
+// moment is a polynomial of degree <= 3. EI w'' = -M is integrated element by
+// element, exactly, from w(0) = 0 with start slope 0; the rigid rotation that
+// restores w(L) = 0 is added afterwards. On every element this is the exact
+// Euler-Bernoulli solution, the same as cubic elements with consistent nodal
+// loads plus the clamped particular solution inside each element. Integrating
+// instead of assembling a stiffness matrix keeps full accuracy when two nodes
+// are very close (an assembled matrix carries 12EI/l^3 terms and loses the
+// 1e-9 equilibrium once l/L falls below about 1e-4).
+beam_model::load_state beam_model::integrate(const std::vector<load>& loads, double couple_start,
+                                             double couple_end) const
+{
+    load_state out;
+    out.w.resize(elements_.size());
+    double force = 0, moment = couple_start + couple_end;
+    for (const auto& l : loads) {
+        force += total_force(l);
+        moment += moment_about_start(l);
+    }
+    // Clockwise moments about the start: loads and couples, less R_end L.
+    out.reaction_end = moment / span_;
+    out.reaction_start = force - out.reaction_end;
+
+    std::vector<double> P(nodes_.size(), 0.0), C(nodes_.size(), 0.0);
+    for (const auto& l : loads) {
+        if (l.kind == load_kind::point) P[nearest_node(l.from)] += l.value;
+        if (l.kind == load_kind::moment) C[nearest_node(l.from)] += l.value;
+    }
+    C.front() += couple_start;
+    C.back() += couple_end;
+
+    // Shear (upward on the left-hand part) and sagging moment just right of a
+    // node; a clockwise couple raises the sagging moment by its value.
+    double V = out.reaction_start - P.front();
+    double M = C.front();
+    double slope = 0.0, w = 0.0;
+    for (std::size_t e = 0; e < elements_.size(); ++e) {
+        const auto& el = elements_[e];
+        const double l = el.length;
+        const double qa = loads.empty() ? 0.0 : el.qa, t = loads.empty() ? 0.0 : el.qb - el.qa;
+        // M(s) = M + V s - qa s^2/2 - t s^3/(6 l) and w = w + slope s - (1/EI) double integral of M(s).
+        element_polynomial c{};
+        c[0] = w;
+        c[1] = slope;
+        c[2] = -M / (2 * EI_);
+        c[3] = -V / (6 * EI_);
+        c[4] = qa / (24 * EI_);
+        c[5] = t / (120 * l * EI_);
+        out.w[e] = c;
+        w = polynomial::value(c, l);
+        slope = polynomial::value(polynomial::derivative(c), l);
+        const double V_end = V - qa * l - t * l / 2;
+        const double M_end = M + V * l - qa * l * l / 2 - t * l * l / 6;
+        V = V_end - P[e + 1];
+        M = M_end + C[e + 1];
+    }
+    // Past the end support nothing may remain: these residuals are the
+    // equilibrium of the whole beam, reached by a path independent of statics.
+    out.closure_shear = V + out.reaction_end;
+    out.closure_moment = M;
+    const double theta_start = -w / span_;
+    for (std::size_t e = 0; e < elements_.size(); ++e) {
+        out.w[e][0] += theta_start * elements_[e].x0;
+        out.w[e][1] += theta_start;
+    }
+    out.rotation_start = theta_start;
+    out.rotation_end = -(slope + theta_start);
+    return out;
 }
 
 std::array<double, 2> beam_model::end_moments(stiffness start, stiffness end) const
@@ -325,13 +290,21 @@ void beam_model::check_equilibrium(const beam_state& s) const
     // Clockwise moments about the start: loads, the end reaction, the joints'
     // couples on the beam (anticlockwise hogging at the start, clockwise at the end).
     const double rotational = total_moment_about_start_ - s.reaction_end * span_ - s.moment_start + s.moment_end;
+    // The shear and moment left over past the end support after integrating
+    // along the beam: equilibrium reached by the second, independent path.
+    const double a = s.moment_start, b = s.moment_end;
+    const double shear_left = closure_[0] + a * closure_[2] + b * closure_[4];
+    const double moment_left = closure_[1] + a * closure_[3] + b * closure_[5];
     const double scale = load_scale_ + std::abs(s.reaction_start) + std::abs(s.reaction_end) +
                          (std::abs(s.moment_start) + std::abs(s.moment_end)) / span_;
     const double tol = 1e-9 * scale;
-    if (!(std::abs(vertical) <= tol) || !(std::abs(rotational) / span_ <= tol)) {
+    const bool ok = std::abs(vertical) <= tol && std::abs(rotational) / span_ <= tol && std::abs(shear_left) <= tol &&
+                    std::abs(moment_left) / span_ <= tol;
+    if (!ok) {
         std::ostringstream msg;
         msg << "equilibrium residual above 1e-9 of the load scale (vertical " << vertical << " N, moment "
-            << rotational << " N*m, scale " << scale << " N)";
+            << rotational << " N*m, shear past the end " << shear_left << " N, moment past the end " << moment_left
+            << " N*m, scale " << scale << " N)";
         throw internal_error(msg.str());
     }
 }

@@ -57,7 +57,7 @@ namespace jf = json_fields;
 
 constexpr double mm = 1e-3;
 
-// Standard components of simple joints (SBE Part 5, MSB05 p. 14): first bolt
+// Standard components of simple joints (Steel Buildings in Europe, Part 5: Joint design, MSB05 p. 14): first bolt
 // 90 mm below the top of the beam with the fitting 50 mm below it, pitch
 // 70 mm, M20 bolts in 22 mm holes, 10 mm plates and cleats.
 constexpr double default_gap = 10 * mm;  // usual fin plate gap, from memory (SCI P212)
@@ -281,13 +281,14 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
         const auto first = r.length("first_bolt", default_first_bolt);
         const auto top = r.length(top_key, default_plate_top, true);
         const auto line = fin ? r.length("bolt_line", default_bolt_line) : std::optional<double>(0.0);
-        std::optional<long long> rows = jf::integer_field(value, pointer, "bolt_rows", false, problems);
-        if (rows && *rows < 1) {
-            r.problem("bolt_rows", "expected at least 1 bolt row, found " + std::to_string(*rows));
-            rows.reset();
-        } else if (rows && *rows > 50) {
-            r.problem("bolt_rows", "expected at most 50 bolt rows, found " + std::to_string(*rows));
-            rows.reset();
+        long long rows = 0;  // 0: not given
+        if (const auto v = jf::integer_field(value, pointer, "bolt_rows", false, problems)) {
+            if (*v < 1)
+                r.problem("bolt_rows", "expected at least 1 bolt row, found " + std::to_string(*v));
+            else if (*v > 50)
+                r.problem("bolt_rows", "expected at most 50 bolt rows, found " + std::to_string(*v));
+            else
+                rows = *v;
         }
         std::optional<double> depth;
         if (r.has(depth_key)) depth = r.length(depth_key, std::nullopt);
@@ -297,13 +298,11 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
 
         if (gap && thickness && bolt && hole && pitch && first && top && line && problems.size() == before) {
             // Rows and depth from each other, or the fewest rows reaching 0.6 h.
-            long long n = 1;
-            if (rows)
-                n = *rows;
-            else if (depth)
+            long long n = rows;
+            if (n < 1 && depth)
                 n = std::max(1LL, static_cast<long long>(std::floor((*depth - 2 * *first) / *pitch + 1e-9)) + 1);
-            else
-                while (2 * *first + (n - 1) * *pitch < min_depth_ratio * h - 1e-9 && n < 50) ++n;
+            if (n < 1)
+                for (n = 1; 2 * *first + (n - 1) * *pitch < min_depth_ratio * h - 1e-9 && n < 50;) ++n;
             const double hp = depth ? *depth : 2 * *first + (n - 1) * *pitch;
 
             d.gap = end ? *thickness : *gap;
@@ -327,8 +326,8 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
             else if (d.plate_top + hp > h + 1e-12)
                 r.problem(depth_key, "the " + what + " extends below the beam: top " + r.show(d.plate_top) + " + depth " +
                                          r.show(hp) + " = " + r.show(d.plate_top + hp) + ", beam depth " + r.show(h));
-            if (!end && *first + (n - 1) * *pitch >= hp)
-                r.problem(rows ? "bolt_rows" : depth_key,
+            if (*first + (n - 1) * *pitch >= hp)
+                r.problem(rows > 0 ? "bolt_rows" : depth_key,
                           std::to_string(n) + " bolt row(s) at " + r.show(*pitch) + " pitch from " + r.show(*first) +
                               " need a " + what + " deeper than " + r.show(*first + (n - 1) * *pitch) + ", found " +
                               r.show(hp));
@@ -473,12 +472,14 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
             std::string hint;
             if (d.support_beam) {
                 const supporting_beam& sb = *d.support_beam;
+                const auto level = [&](double v) {
+                    return r.show(std::abs(v)) + (v >= 0 ? " below" : " above") + " the top of this beam";
+                };
                 hint = "; a cope must clear the supporting beam's flanges and root fillets: its top flange with the "
-                       "fillet reaches " + r.show(sb.top_flange_underside() + sb.root_radius) +
-                       " below the top of this beam, its bottom flange with the fillet starts " +
-                       r.show(sb.bottom_flange_top() - sb.root_radius) + " below it, and the flange tips stand " +
-                       r.show(sb.flange_outstand()) + " out from the web face (worst-case gap " +
-                       r.show(d.worst_case_gap()) + ")";
+                       "fillet reaches down to " + level(sb.top_flange_underside() + sb.root_radius) +
+                       ", its bottom flange with the fillet rises to " + level(sb.bottom_flange_top() - sb.root_radius) +
+                       ", and the flange tips stand " + r.show(sb.flange_outstand()) +
+                       " out from the web face (worst-case gap " + r.show(d.worst_case_gap()) + ")";
             }
             problems.add(jf::child(pointer, where),
                          "the beam end overlaps the support at rest: " + hit->description() + hint);

@@ -21,19 +21,28 @@ input_error::input_error(std::string where, std::string message)
 {
 }
 
+// A file with millions of bad items must not produce millions of messages.
+constexpr std::size_t max_problems_listed = 200;
+
 void problem_list::add(std::string where, std::string message)
 {
-    problems_.push_back({std::move(where), std::move(message)});
+    ++count_;
+    if (problems_.size() < max_problems_listed) problems_.push_back({std::move(where), std::move(message)});
 }
 
 void problem_list::add_all(const input_error& e)
 {
-    for (const auto& p : e.problems()) problems_.push_back(p);
+    for (const auto& p : e.problems()) add(p.where, p.message);
 }
 
 void problem_list::throw_if_any() const
 {
-    if (!problems_.empty()) throw input_error(problems_);
+    if (problems_.empty()) return;
+    auto listed = problems_;
+    if (count_ > listed.size())
+        listed.push_back({"(input)", "and " + std::to_string(count_ - listed.size()) +
+                                         " more problems not listed; correct the ones above first"});
+    throw input_error(listed);
 }
 
 }  // namespace pinproof

@@ -516,17 +516,23 @@ std::optional<contact_point> overlap(const beam_end_geometry& g, rotation_sense 
         }
     }
     for (const auto& corner : g.support.corners) {
+        const bool inside = inside_polygon(corner.at, moving_polygon);
+        double nearest = std::numeric_limits<double>::max();
+        std::size_t edge = 0;
         for (std::size_t i = 0; i < n; ++i) {
             if (o.edge_cut[i]) continue;
-            const point2 a = moving_polygon[i], b = moving_polygon[(i + 1) % n];
-            const double d = distance_to_segment(corner.at, a, b);
-            const double v = inside_polygon(corner.at, moving_polygon) ? -d : d;
-            if (v < score) {
-                score = v;
-                best.outline_part = o.edge_labels[i];
-                best.support_part = corner.label;
-                best.at = rotated(corner.at, c, -angle);
+            const double d = distance_to_segment(corner.at, moving_polygon[i], moving_polygon[(i + 1) % n]);
+            if (d < nearest) {
+                nearest = d;
+                edge = i;
             }
+        }
+        const double v = inside ? -nearest : nearest;
+        if (v < score) {
+            score = v;
+            best.outline_part = o.edge_labels[edge];
+            best.support_part = corner.label;
+            best.at = rotated(corner.at, c, -angle);
         }
     }
     best.lever_arm = norm(best.at - c);
@@ -687,9 +693,11 @@ std::optional<double> min_gap_required(const connection_detail& d, const section
         say("no rotation demand");
         return std::nullopt;
     }
-    // Searched range of the worst-case gap.
+    // Searched range of the worst-case gap: up to the larger of 50 mm and
+    // three times the detailed gap; a larger gap is no longer a detail of
+    // this kind.
     const double lo = 1e-5;
-    const double hi = std::max({0.1, beam.depth, 3.0 * d.worst_case_gap()});
+    const double hi = std::max(0.05, 3.0 * d.gap);
     constexpr int steps = 64;
     auto f = [&](double gap) { return shortfall(d, beam, demand, gap); };
     double a = lo, fa = f(lo);
@@ -722,7 +730,7 @@ std::string gap_check::critical_point() const
     return s.closing.contact->description() + " (" + to_string(governing) + ")";
 }
 
-gap_check check_gap(const connection_detail& d, const section& beam, const rotation_demand& demand)
+gap_check check_gap(const connection_detail& d, const section& beam, const rotation_demand& demand, bool find_min_gap)
 {
     gap_check r;
     r.gap = d.gap;
@@ -754,7 +762,8 @@ gap_check check_gap(const connection_detail& d, const section& beam, const rotat
         r.governing = closure_or_max(r.hogging.closing) < closure_or_max(r.sagging.closing) ? rotation_sense::hogging
                                                                                               : rotation_sense::sagging;
     r.passes = r.sagging.passes && r.hogging.passes;
-    r.min_gap_required = min_gap_required(d, beam, demand, &r.min_gap_note);
+    if (find_min_gap) r.min_gap_required = min_gap_required(d, beam, demand, &r.min_gap_note);
+    else r.min_gap_note = "not searched";
     return r;
 }
 

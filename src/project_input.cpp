@@ -9,6 +9,9 @@
 #include <sstream>
 
 #include "json_fields.hpp"
+#include "pinproof/connection_detail.hpp"
+#include "pinproof/detail_catalogue.hpp"
+#include "pinproof/stiffness_distribution.hpp"
 #include "pinproof/project.hpp"
 
 namespace pinproof {
@@ -21,6 +24,33 @@ using namespace json_fields;
 // AISC 360-16 Symbols / B2: E = 29 000 ksi.
 constexpr double default_E_en = 210e9;
 constexpr double default_E_aisc = 29000.0 * 6894757.293168361;
+
+// Bounds far outside any building beam. They keep the analysis where double
+// arithmetic and the equilibrium check of beam_model are meaningful, so that an
+// absurd value is reported at its field instead of failing inside the engine
+// (common practice, no source).
+struct plausible_range {
+    double lo, hi;  // SI
+};
+constexpr plausible_range plausible_span{0.01, 1000.0};      // m
+constexpr plausible_range plausible_E{1e9, 1e12};            // Pa (structural steel: about 2.1e11)
+constexpr plausible_range plausible_I{1e-10, 10.0};          // m^4 (IPE 80: 8.0e-7)
+constexpr double plausible_load_magnitude = 1e12;            // N, N/m, N*m
+constexpr double plausible_factor_magnitude = 1e3;
+constexpr double plausible_stiffness = 1e40;                 // N*m/rad; "rigid" is exact (1e30 agrees with it)
+
+// A plain decimal number (no unit), by the units parser's number rules: no
+// hexadecimal, nan or inf.
+std::optional<double> plain_number(const std::string& text)
+{
+    try {
+        const pinproof::quantity q = parse_quantity(text);
+        if (q.dim != dims::dimensionless) return std::nullopt;
+        return q.value;
+    } catch (const std::invalid_argument&) {
+        return std::nullopt;
+    }
+}
 
 struct reader {
     problem_list& problems;
@@ -38,6 +68,34 @@ struct reader {
         auto v = q(obj, ptr, key, d, required);
         if (v && !(*v > 0)) {
             problems.add(child(ptr, key), "expected a positive " + describe(d) + ", found " + shown(obj.at(key)));
+            return std::nullopt;
+        }
+        return v;
+    }
+
+    // A positive quantity that must also lie in a plausible range.
+    std::optional<double> plausible(const json& obj, const std::string& ptr, const std::string& key, dimension d,
+                                    bool required, plausible_range r)
+    {
+        auto v = positive(obj, ptr, key, d, required);
+        if (v && (*v < r.lo || *v > r.hi)) {
+            problems.add(child(ptr, key), "expected a " + describe(d) + " between " + format_quantity(r.lo, d, system) +
+                                              " and " + format_quantity(r.hi, d, system) +
+                                              " (a value outside this range is not a building beam), found " +
+                                              shown(obj.at(key)));
+            return std::nullopt;
+        }
+        return v;
+    }
+
+    // A load value whose magnitude must stay below plausible_load_magnitude.
+    std::optional<double> load_value(const json& obj, const std::string& ptr, const std::string& key, dimension d)
+    {
+        auto v = q(obj, ptr, key, d, true);
+        if (v && std::abs(*v) > plausible_load_magnitude) {
+            problems.add(child(ptr, key), "expected a " + describe(d) + " of magnitude at most " +
+                                              format_quantity(plausible_load_magnitude, d, system) + ", found " +
+                                              shown(obj.at(key)));
             return std::nullopt;
         }
         return v;
@@ -73,7 +131,7 @@ struct reader {
                             problems);
         section s;
         s.name = string_field(o, sp, "name", false, problems).value_or("user-defined");
-        auto I = positive(o, sp, "I", dims::second_moment, true);
+        auto I = plausible(o, sp, "I", dims::second_moment, true, plausible_I);
         auto depth = positive(o, sp, "depth", dims::length, true);
         s.area = positive(o, sp, "area", dims::area, false);
         s.flange_width = positive(o, sp, "flange_width", dims::length, false);
@@ -105,17 +163,20 @@ struct reader {
             const std::string rel = "EI/L";
             if (t.size() >= rel.size() && t.compare(t.size() - rel.size(), rel.size(), rel) == 0) {
                 const std::string num = t.substr(0, t.size() - rel.size());
-                char* end = nullptr;
-                const double k = std::strtod(num.c_str(), &end);
-                bool ok = end != num.c_str() && std::isfinite(k);
-                while (ok && end && *end) ok = std::isspace(static_cast<unsigned char>(*end++));
-                if (!ok || k < 0) {
+                const auto k = plain_number(num);
+                if (!k || *k < 0) {
                     problems.add(ptr, "expected a non-negative multiple of EI/L such as \"0.5 EI/L\", found \"" +
                                           v.get<std::string>() + "\"");
                     return std::nullopt;
                 }
                 if (!EI_over_L) return std::nullopt;  // span, E or I already reported
-                return stiffness::spring(k * *EI_over_L);
+                if (!(*k * *EI_over_L <= plausible_stiffness)) {
+                    problems.add(ptr, "expected a rotational stiffness of at most " +
+                                          format_quantity(plausible_stiffness, dims::rotational_stiffness, system) +
+                                          " (write \"rigid\" for a fixed end), found \"" + v.get<std::string>() + "\"");
+                    return std::nullopt;
+                }
+                return stiffness::spring(*k * *EI_over_L);
             }
         }
         problem_list local;
@@ -130,20 +191,47 @@ struct reader {
             problems.add(ptr, "expected a rotational stiffness of zero or more, found " + shown(v));
             return std::nullopt;
         }
+        if (*s > plausible_stiffness) {
+            problems.add(ptr, "expected a rotational stiffness of at most " +
+                                  format_quantity(plausible_stiffness, dims::rotational_stiffness, system) +
+                                  " (write \"rigid\" for a fixed end), found " + shown(v));
+            return std::nullopt;
+        }
         return stiffness::spring(*s);
     }
 
-    std::optional<joint> read_joint(const json& j, const std::string& ptr, std::optional<double> EI_over_L)
+    std::optional<joint> read_joint(const json& j, const std::string& ptr, std::optional<double> EI_over_L,
+                                    const std::optional<section>& sec)
     {
+        if (j.is_string()) {
+            problems.add(ptr, "expected an inline joint object, found the detail id \"" + j.get<std::string>() +
+                                  "\": a detail id needs a detail catalogue (--details FILE, or a \"details\" key "
+                                  "naming the catalogue file)");
+            return std::nullopt;
+        }
         if (!expect_object(j, ptr, problems)) return std::nullopt;
-        reject_unknown_keys(j, ptr, {"stiffness", "moment_resistance", "description"}, problems);
+        reject_unknown_keys(j, ptr, {"stiffness", "stiffness_distribution", "moment_resistance", "description", "detail",
+                                     "support_rotation",
+                                     "contact_stiffness", "designed_for_closure"},
+                            problems);
         joint out;
         const std::string sp = child(ptr, "stiffness");
         auto it = j.find("stiffness");
         bool ok = true;
-        if (it == j.end()) {
-            problems.add(sp, "missing required field \"stiffness\" (an object {\"min\": ..., \"max\": ...} of "
-                             "rotational stiffnesses, \"rigid\" or multiples of EI/L)");
+        std::optional<stiffness_distribution> dist;
+        if (j.contains("stiffness_distribution"))
+            dist = read_stiffness_distribution(j.at("stiffness_distribution"), child(ptr, "stiffness_distribution"),
+                                               EI_over_L.value_or(0.0), problems);
+        out.distribution = dist;
+        if (it == j.end() && dist) {
+            // Only a distribution: the range is its 5 % to 95 % fractiles.
+            const auto f = dist->fractile_range();
+            out.range = {stiffness::spring(f.p05), stiffness::spring(f.p95)};
+        } else if (it == j.end()) {
+            if (!j.contains("stiffness_distribution"))
+                problems.add(sp, "missing required field \"stiffness\" (an object {\"min\": ..., \"max\": ...} of "
+                                 "rotational stiffnesses, \"rigid\" or multiples of EI/L), or a "
+                                 "\"stiffness_distribution\"");
             ok = false;
         } else if (it->is_object()) {
             reject_unknown_keys(*it, sp, {"min", "max"}, problems);
@@ -170,6 +258,21 @@ struct reader {
             problems.add(child(ptr, "moment_resistance"), "expected a moment resistance of zero or more, found " +
                                                               shown(j.at("moment_resistance")));
         else out.moment_resistance = mr;
+        out.description = string_field(j, ptr, "description", false, problems).value_or("");
+        if (j.contains("detail")) {
+            // The reader needs the beam's section; a bad section is reported already.
+            if (sec) out.detail = read_connection_detail(j.at("detail"), child(ptr, "detail"), *sec, problems);
+        }
+        auto sr = q(j, ptr, "support_rotation", dims::angle, false);
+        if (sr && *sr < 0)
+            problems.add(child(ptr, "support_rotation"), "expected a support rotation of zero or more, found " +
+                                                             shown(j.at("support_rotation")));
+        else if (sr) out.support_rotation = *sr;
+        if (j.contains("contact_stiffness")) {
+            auto cs = read_stiffness(j.at("contact_stiffness"), child(ptr, "contact_stiffness"), EI_over_L);
+            if (cs) out.contact_stiffness = *cs;
+        }
+        out.designed_for_closure = bool_field(j, ptr, "designed_for_closure", false, problems).value_or(false);
         if (!ok) return std::nullopt;
         return out;
     }
@@ -213,7 +316,7 @@ struct reader {
                 const bool point = *kind == "point";
                 reject_unknown_keys(l, p, {"case", "kind", point ? "P" : "M", "at"}, problems);
                 ld.kind = point ? load_kind::point : load_kind::moment;
-                auto v = q(l, p, point ? "P" : "M", point ? dims::force : dims::moment, true);
+                auto v = load_value(l, p, point ? "P" : "M", point ? dims::force : dims::moment);
                 auto at = position("at", true, 0.0);
                 ok = ok && v && at;
                 if (ok) {
@@ -225,13 +328,16 @@ struct reader {
                 if (udl) reject_unknown_keys(l, p, {"case", "kind", "w", "from", "to"}, problems);
                 else reject_unknown_keys(l, p, {"case", "kind", "w_start", "w_end", "from", "to"}, problems);
                 ld.kind = udl ? load_kind::udl : load_kind::linear;
-                auto w0 = q(l, p, udl ? "w" : "w_start", dims::line_load, true);
-                auto w1 = udl ? w0 : q(l, p, "w_end", dims::line_load, true);
+                auto w0 = load_value(l, p, udl ? "w" : "w_start", dims::line_load);
+                auto w1 = udl ? w0 : load_value(l, p, "w_end", dims::line_load);
                 auto from = position("from", false, 0.0);
-                auto to = position("to", false, span.value_or(0.0));
-                if (from && to && !(*to > *from)) {
+                // Without a valid span the default "to" is unknown (the span is reported).
+                auto to = span || l.contains("to") ? position("to", false, span.value_or(0.0)) : std::nullopt;
+                // beam_model needs a length above 1e-9 of the span; a shorter one is a point load.
+                if (from && to && span && !(*to - *from > 1e-9 * *span)) {
                     problems.add(child(p, l.contains("to") ? "to" : "from"),
-                                 "expected \"to\" to lie beyond \"from\" (a distributed load needs a length), found from " +
+                                 "expected \"to\" to lie beyond \"from\" by more than 1e-9 of the span (a distributed load "
+                                 "needs a length), found from " +
                                      format_quantity(*from, dims::length, system) + " and to " +
                                      format_quantity(*to, dims::length, system));
                     ok = false;
@@ -249,7 +355,9 @@ struct reader {
         return out;
     }
 
-    std::vector<combination> read_combinations(const json& b, const std::string& ptr, const std::set<std::string>& cases)
+    // `cases_known`: every load names its case, so a factor of another case is a mistake.
+    std::vector<combination> read_combinations(const json& b, const std::string& ptr, const std::set<std::string>& cases,
+                                               bool cases_known)
     {
         std::vector<combination> out;
         const std::string cp = child(ptr, "combinations");
@@ -292,7 +400,15 @@ struct reader {
                         ok = false;
                         continue;
                     }
-                    if (!cases.count(e.key())) {
+                    if (std::abs(e->get<double>()) > plausible_factor_magnitude) {
+                        problems.add(child(fp, e.key()), "expected a factor between -" +
+                                                             format_number(plausible_factor_magnitude) + " and " +
+                                                             format_number(plausible_factor_magnitude) + ", found " +
+                                                             shown(*e));
+                        ok = false;
+                        continue;
+                    }
+                    if (cases_known && !cases.count(e.key())) {
                         std::string list;
                         for (const auto& k : cases) list += (list.empty() ? "\"" : ", \"") + k + "\"";
                         problems.add(child(fp, e.key()), "expected a load case used by this beam's loads (" + list +
@@ -326,13 +442,12 @@ struct reader {
             for (const std::string prefix : {"span/", "L/"}) {
                 if (compact.rfind(prefix, 0) == 0) {
                     const std::string num = compact.substr(prefix.size());
-                    char* end = nullptr;
-                    const double r = std::strtod(num.c_str(), &end);
-                    if (end == num.c_str() || *end != '\0' || !std::isfinite(r) || r <= 0) {
+                    const auto r = plain_number(num);
+                    if (!r || *r <= 0) {
                         problems.add(p, "expected a deflection limit such as \"span/360\" or \"20 mm\", found \"" + t + "\"");
                         return std::nullopt;
                     }
-                    out.span_ratio = r;
+                    out.span_ratio = *r;
                     return out;
                 }
             }
@@ -352,15 +467,15 @@ struct reader {
     {
         if (!expect_object(b, ptr, problems)) return std::nullopt;
         reject_unknown_keys(b, ptr, {"id", "description", "span", "E", "section", "loads", "combinations", "joints",
-                                     "limits"},
+                                     "limits", "stiffness_correlation"},
                             problems);
         beam out;
         out.pointer = ptr;
         auto id = string_field(b, ptr, "id", true, problems);
         if (id && id->empty()) problems.add(child(ptr, "id"), "expected a beam id, found an empty string");
         out.description = string_field(b, ptr, "description", false, problems).value_or("");
-        auto span = positive(b, ptr, "span", dims::length, true);
-        auto E = positive(b, ptr, "E", dims::pressure, false);
+        auto span = plausible(b, ptr, "span", dims::length, true, plausible_span);
+        auto E = plausible(b, ptr, "E", dims::pressure, false, plausible_E);
         if (!b.contains("E")) E = standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
         auto sec = read_section(b, ptr);
         std::optional<double> EI_over_L;
@@ -369,10 +484,14 @@ struct reader {
         auto loads = read_loads(b, ptr, span);
         std::set<std::string> cases;
         for (const auto& l : loads) cases.insert(l.load_case);
-        if (b.contains("loads") && b["loads"].is_array())
-            for (const auto& l : b["loads"])
-                if (l.is_object() && l.contains("case") && l["case"].is_string()) cases.insert(l["case"].get<std::string>());
-        auto combos = read_combinations(b, ptr, cases);
+        bool cases_known = b.contains("loads") && b["loads"].is_array() && !b["loads"].empty();
+        if (cases_known)
+            for (const auto& l : b["loads"]) {
+                if (l.is_object() && l.contains("case") && l["case"].is_string() && !l["case"].get<std::string>().empty())
+                    cases.insert(l["case"].get<std::string>());
+                else cases_known = false;
+            }
+        auto combos = read_combinations(b, ptr, cases, cases_known);
 
         const std::string jp = child(ptr, "joints");
         std::optional<joint> js, je;
@@ -386,7 +505,7 @@ struct reader {
                     problems.add(child(jp, e), std::string("missing required field \"") + e + "\"");
                     continue;
                 }
-                (std::string(e) == "start" ? js : je) = read_joint(jit->at(e), child(jp, e), EI_over_L);
+                (std::string(e) == "start" ? js : je) = read_joint(jit->at(e), child(jp, e), EI_over_L, sec);
             }
         }
         auto lim = b.find("limits");
@@ -399,6 +518,7 @@ struct reader {
         out.span = *span;
         out.E = *E;
         out.E_is_default = !b.contains("E");
+        out.stiffness_correlation = read_stiffness_correlation(b, ptr, problems).value_or(1);
         out.sec = *sec;
         out.loads = std::move(loads);
         out.combinations = std::move(combos);
@@ -407,6 +527,24 @@ struct reader {
         return out;
     }
 };
+
+// The parser's message quotes the bytes it read, which may be invalid UTF-8:
+// bytes outside ASCII are shown as \xNN so that the message itself stays valid text.
+std::string printable(const std::string& message)
+{
+    static const char hex[] = "0123456789ABCDEF";
+    std::string out;
+    for (unsigned char c : message) {
+        if (c < 0x80) {
+            out += static_cast<char>(c);
+        } else {
+            out += "\\x";
+            out += hex[c >> 4];
+            out += hex[c & 15];
+        }
+    }
+    return out;
+}
 
 std::string line_column(std::string_view text, std::size_t byte)
 {
@@ -421,6 +559,34 @@ std::string line_column(std::string_view text, std::size_t byte)
     }
     return "line " + std::to_string(line) + ", column " + std::to_string(col);
 }
+
+// Finds where parsing stopped. nlohmann_json reports a number too large for a
+// double ("1e400") as out_of_range without its position, so the text is
+// scanned again with a handler that only records the error.
+struct error_locator : nlohmann::json_sax<json> {
+    std::size_t byte = 0;
+    std::string message;
+    bool null() override { return true; }
+    bool boolean(bool) override { return true; }
+    bool number_integer(number_integer_t) override { return true; }
+    bool number_unsigned(number_unsigned_t) override { return true; }
+    bool number_float(number_float_t, const string_t&) override { return true; }
+    bool string(string_t&) override { return true; }
+    bool binary(binary_t&) override { return true; }
+    bool start_object(std::size_t) override { return true; }
+    bool key(string_t&) override { return true; }
+    bool end_object() override { return true; }
+    bool start_array(std::size_t) override { return true; }
+    bool end_array() override { return true; }
+    bool parse_error(std::size_t position, const std::string&, const json::exception& e) override
+    {
+        byte = position;
+        message = e.what();
+        const auto tag = message.find("] ");
+        if (tag != std::string::npos) message = message.substr(tag + 2);
+        return false;
+    }
+};
 
 }  // namespace
 
@@ -467,7 +633,7 @@ project read_project(const json& doc)
     return out;
 }
 
-project parse_project(std::string_view text)
+project parse_project(std::string_view text, const project_sources& sources)
 {
     json doc;
     try {
@@ -476,19 +642,48 @@ project parse_project(std::string_view text)
         const std::string what = e.what();
         const auto pos = what.find("syntax error");
         throw input_error(line_column(text, e.byte > 0 ? e.byte - 1 : 0),
-                          "the file is not valid JSON: " + (pos == std::string::npos ? what : what.substr(pos)));
+                          "the file is not valid JSON: " + printable(pos == std::string::npos ? what : what.substr(pos)));
+    } catch (const json::exception& e) {
+        error_locator locator;
+        json::sax_parse(text.begin(), text.end(), &locator);
+        if (locator.message.empty()) throw input_error("/", std::string("the file cannot be read as JSON: ") + e.what());
+        throw input_error(line_column(text, locator.byte > 0 ? locator.byte - 1 : 0),
+                          "expected every number within the range of a double (about 1.8e308), found " +
+                              locator.message);
+    }
+    // Joints given as detail ids are replaced by the catalogue's entries first:
+    // the catalogue named on the command line, or the file named by "details".
+    std::string catalogue_path = sources.details_file;
+    if (catalogue_path.empty() && doc.is_object() && doc.contains("details")) {
+        if (!doc["details"].is_string() || doc["details"].get<std::string>().empty())
+            throw input_error("/details", "expected the path of a detail catalogue file (format pinproof-details/1), found " +
+                                              json_fields::shown(doc["details"]));
+        catalogue_path = doc["details"].get<std::string>();
+        if (!catalogue_path.empty() && catalogue_path.front() != '/' && !sources.base_dir.empty())
+            catalogue_path = sources.base_dir + "/" + catalogue_path;
+    }
+    if (doc.is_object()) doc.erase("details");
+    if (!catalogue_path.empty()) {
+        const detail_catalogue catalogue = load_detail_catalogue_file(catalogue_path);
+        problem_list problems;
+        resolve_detail_references(doc, catalogue, problems);
+        problems.throw_if_any();
     }
     return read_project(doc);
 }
 
-project load_project_file(const std::string& path)
+project load_project_file(const std::string& path, const std::string& details_file)
 {
     std::ifstream in(path, std::ios::binary);
     if (!in) throw input_error(path, "cannot open the project file for reading");
     std::ostringstream buf;
     buf << in.rdbuf();
     if (in.bad()) throw input_error(path, "cannot read the project file");
-    return parse_project(buf.str());
+    project_sources sources;
+    sources.details_file = details_file;
+    const auto slash = path.find_last_of('/');
+    sources.base_dir = slash == std::string::npos ? "." : path.substr(0, slash == 0 ? 1 : slash);
+    return parse_project(buf.str(), sources);
 }
 
 }  // namespace pinproof

@@ -6,6 +6,7 @@
 
 #include "pinproof/errors.hpp"
 #include "pinproof/result_fields.hpp"
+#include "pinproof/sweep.hpp"
 
 namespace pinproof {
 namespace {
@@ -23,6 +24,50 @@ json stiffness_json(stiffness s) { return s.is_rigid() ? json(nullptr) : number(
 
 json optional_number(const std::optional<double>& v) { return v ? number(*v) : json(nullptr); }
 
+json closure_json(const std::optional<double>& r) { return r ? number(*r) : json(nullptr); }
+
+json point_json(const point2& p) { return {{"x", number(p.x)}, {"y", number(p.y)}}; }
+
+json detail_json(const detail_assessment& d, const joint& j)
+{
+    json out;
+    out["type"] = to_string(j.detail->type);
+    out["support"] = to_string(j.detail->support);
+    out["gap"] = number(d.gap.gap);
+    out["gap_tolerance"] = number(d.gap.gap_tolerance);
+    out["worst_case_gap"] = number(d.gap.worst_case_gap);
+    out["closure_rotation_sagging"] = closure_json(d.gap.sagging.closing.rotation);
+    out["closure_rotation_hogging"] = closure_json(d.gap.hogging.closing.rotation);
+    out["rotation_demand"] = number(d.gap.governing == rotation_sense::sagging ? d.demand_sagging : d.demand_hogging);
+    out["rotation_demand_sagging"] = number(d.demand_sagging);
+    out["rotation_demand_hogging"] = number(d.demand_hogging);
+    out["support_rotation"] = number(j.support_rotation);
+    out["governing_sense"] = to_string(d.gap.governing);
+    out["critical_point"] = d.gap.critical_point();
+    const auto& sc = d.gap.of(d.gap.governing);
+    out["margin"] = sc.margin ? number(*sc.margin) : json(nullptr);
+    out["margin_is_lower_bound"] = sc.margin_is_lower_bound;
+    out["clearance_at_demand"] = number(sc.clearance_at_demand);
+    out["min_gap_required"] = d.gap.min_gap_required ? number(*d.gap.min_gap_required) : json(nullptr);
+    if (!d.gap.min_gap_note.empty()) out["min_gap_note"] = d.gap.min_gap_note;
+    out["centre_of_rotation"] = {{"sagging", point_json(d.gap.sagging.closing.contact ? d.gap.sagging.closing.contact->centre : point2{})},
+                                 {"hogging", point_json(d.gap.hogging.closing.contact ? d.gap.hogging.closing.contact->centre : point2{})}};
+    out["closes_under_strength"] = d.closes_under_strength;
+    out["closes_under_service"] = d.closes_under_service;
+    out["clears_rule_of_thumb_rotation"] = d.clears_rule_of_thumb;
+    if (d.consequence) {
+        const auto& c = *d.consequence;
+        out["closure_analysis"] = {{"combination", c.combination},
+                                   {"closure_rotation", number(c.closure_rotation)},
+                                   {"contact_force", number(c.contact_force)},
+                                   {"lever_arm", number(c.lever_arm)},
+                                   {"state", to_json(c.result.state)}};
+    } else {
+        out["closure_analysis"] = nullptr;
+    }
+    return out;
+}
+
 json joint_json(const joint_assessment& j, const beam& b)
 {
     json out;
@@ -35,6 +80,7 @@ json joint_json(const joint_assessment& j, const beam& b)
     };
     const auto& mr = b.at(j.end).moment_resistance;
     out["moment_resistance"] = optional_number(mr);
+    out["detail"] = j.detail ? detail_json(*j.detail, b.at(j.end)) : json(nullptr);
     return out;
 }
 
@@ -110,7 +156,12 @@ json to_json(const project_assessment& a)
     out["frame"] = to_string(a.input->frame);
     out["verdict"] = a.all_hold() ? "holds" : "does-not-hold";
     json beams = json::array();
-    for (const auto& b : a.beams) beams.push_back(to_json(b));
+    for (const auto& b : a.beams) {
+        beams.push_back(to_json(b));
+        const beam& in = *b.input;
+        beams.back()["sensitivity"] =
+            sensitivity_json(*a.input, in, {in.start.distribution, in.end.distribution, in.stiffness_correlation});
+    }
     out["beams"] = beams;
     out["caution"] = "Results support, and do not replace, the judgement of a qualified engineer; local codes and "
                      "licensed practice govern.";

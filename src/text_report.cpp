@@ -5,6 +5,7 @@
 #include <sstream>
 
 #include "pinproof/result_fields.hpp"
+#include "pinproof/threshold.hpp"
 
 namespace pinproof {
 namespace {
@@ -129,6 +130,45 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
         if (mr) o << "    " << pad("", 7) << "moment resistance " << u.num(*mr, dims::moment) << " " << u.unit(dims::moment) << "\n";
     }
 
+    for (const auto* j : {&a.start, &a.end}) {
+        if (!j->detail) continue;
+        const auto& d = *j->detail;
+        const joint& jt = b.at(j->end);
+        o << "\n  End gap at the " << to_string(j->end) << ": " << to_string(jt.detail->type) << " to "
+          << to_string(jt.detail->support) << ", gap " << u.num(d.gap.gap, dims::length) << " " << u.unit(dims::length)
+          << " as detailed less " << u.num(d.gap.gap_tolerance, dims::length) << " " << u.unit(dims::length) << " tolerance = "
+          << u.num(d.gap.worst_case_gap, dims::length) << " " << u.unit(dims::length) << " worst case\n";
+        o << "    " << pad("sense", 10) << pad("demand (" + u.unit(dims::angle) + ")", 16)
+          << pad("closure (" + u.unit(dims::angle) + ")", 17) << pad("margin", 9)
+          << pad("clearance (" + u.unit(dims::length) + ")", 17) << "critical point\n";
+        for (const auto* sc : {&d.gap.sagging, &d.gap.hogging}) {
+            const double demand = sc->sense == rotation_sense::sagging ? d.demand_sagging : d.demand_hogging;
+            o << "    " << pad(to_string(sc->sense), 10) << pad(u.num(demand, dims::angle), 16)
+              << pad(sc->closing.rotation ? u.num(*sc->closing.rotation, dims::angle) : std::string("none < 90 deg"), 17)
+              << pad(sc->margin ? (sc->margin_is_lower_bound ? ">" : "") + format_number(*sc->margin, 3) : std::string("-"), 9)
+              << pad(demand > 0 ? u.num(sc->clearance_at_demand, dims::length) : std::string("-"), 17)
+              << (sc->closing.contact ? sc->closing.contact->description() : std::string("-")) << "\n";
+        }
+        if (jt.support_rotation > 0)
+            o << "    demand includes the support's own rotation " << u.num(jt.support_rotation, dims::angle) << " "
+              << u.unit(dims::angle) << "\n";
+        if (d.gap.min_gap_required)
+            o << "    smallest as-detailed gap that passes: " << u.num(*d.gap.min_gap_required, dims::length) << " "
+              << u.unit(dims::length) << "\n";
+        else if (!d.gap.min_gap_note.empty())
+            o << "    smallest gap that passes: " << wrap(d.gap.min_gap_note, 80, "      ") << "\n";
+        o << "    the 30 mrad rule of thumb for simple connections (comparison only): "
+          << (d.clears_rule_of_thumb ? "cleared" : "NOT cleared") << "\n";
+        if (d.consequence) {
+            const auto& c = *d.consequence;
+            const double M = j->end == beam_end::start ? c.result.state.moment_start : c.result.state.moment_end;
+            o << "    after closure (" << c.combination << ", lower-bound stiffness): joint moment "
+              << u.num(M, dims::moment) << " " << u.unit(dims::moment) << ", flange contact force "
+              << u.num(c.contact_force, dims::force) << " " << u.unit(dims::force) << ", max sagging moment "
+              << u.num(c.result.state.max_sagging_moment, dims::moment) << " " << u.unit(dims::moment) << "\n";
+        }
+    }
+
     for (const auto& r : a.combinations) {
         o << "\n  Combination " << r.comb.name << " (" << to_string(r.comb.use) << "): " << combination_text(r.comb)
           << "\n";
@@ -152,8 +192,13 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
             vl = ratio ? format_number(*c.value, 3) : u.num(*c.value, c.dim) + " " + u.unit(c.dim);
             if (c.limit) vl += " / " + (ratio ? format_number(*c.limit, 3) : u.num(*c.limit, c.dim) + " " + u.unit(c.dim));
         }
-        o << "    " << pad(status_word(c.status), 6) << pad(c.id, 24) << vl << "\n";
+        o << "    " << pad(status_word(c.status), 6) << pad(c.id + "  ", 38) << vl << "\n";
         o << "          " << wrap(c.message, 88, "          ") << "\n";
+    }
+    const auto thresholds = threshold_report_lines(p, b);
+    if (!thresholds.empty()) {
+        o << "\n  Thresholds (stiffness where a check changes its answer, both joints together)\n";
+        for (const auto& line : thresholds) o << "    " << wrap(line, 94, "      ") << "\n";
     }
     const auto failed = std::count_if(a.checks.begin(), a.checks.end(),
                                       [](const check& c) { return c.status == check_status::fail; });
@@ -164,8 +209,8 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
         std::string ids;
         for (const auto& c : a.checks)
             if (c.status == check_status::fail) ids += (ids.empty() ? "" : ", ") + c.id;
-        o << "the simple-support (pinned) assumption DOES NOT HOLD: " << failed << " check"
-          << (failed == 1 ? "" : "s") << " fail (" << ids << ").\n";
+        o << "the simple-support (pinned) assumption DOES NOT HOLD.\n    " << failed << " check"
+          << (failed == 1 ? " fails" : "s fail") << ": " << wrap(ids, 90, "    ") << "\n";
     }
 }
 
@@ -186,13 +231,16 @@ std::string text_report(const project_assessment& a, const std::string& version)
     o << "Summary: " << a.beams.size() << " beam" << (a.beams.size() == 1 ? "" : "s") << " checked, " << holding
       << " hold, " << a.beams.size() - holding << " do not hold.\n\n";
     o << "Legend\n"
-         "  pinned, fixed    ideal end conditions at both ends\n"
+         "  pinned, fixed    ideal end conditions at both ends. Fixed ends are not an upper bound of an end\n"
+         "                   moment in general: the largest end moment comes with that joint rigid and the far\n"
+         "                   joint pinned (docs/method/beam-model.md)\n"
          "  range min, max   envelope over the four corners of the joint-stiffness range box; the maximum sagging\n"
          "                   moment and the deflection are also searched inside the box\n"
          "  S*L/EI           joint stiffness relative to the beam; fixity r = 1/(1 + 3EI/(S*L)) (0 pin, 1 fixed)\n"
          "  signs            reactions up +, end moments hogging +, deflection down +, end rotations + in the\n"
          "                   sense a simply supported beam rotates under gravity load\n"
-         "  statuses         pass, FAIL, warn (advice), n/a (not applicable: the reason is given)\n\n";
+         "  statuses         pass, FAIL, warn (to pass on or to look at; does not change the verdict),\n"
+         "                   n/a (not applicable: the reason is given)\n\n";
     o << "Caution: " << wrap(caution_text, 90, "         ") << "\n";
     return o.str();
 }

@@ -12,7 +12,13 @@
 // so 1e-9 is used where the closed form is exact.
 #include <doctest/doctest.h>
 
+#include <Eigen/Dense>
+
+#include <algorithm>
 #include <cmath>
+#include <cstdio>
+#include <string>
+#include <vector>
 
 #include "pinproof/beam_model.hpp"
 #include "pinproof/errors.hpp"
@@ -100,7 +106,7 @@ TEST_CASE("fixed-ended beam; full UDL [R8.1]: M_end = wL^2/12; M_mid = wL^2/24; 
     CHECK(s.rotation_end == 0.0);
 }
 
-TEST_CASE("worked case; pack section 5 [WC5; D]: IPE 300; 6 m; 20 kN/m; values to the 4 figures quoted")
+TEST_CASE("worked case; pack section 5 [WC5; D]: IPE 300; 6 m; 20 kN/m; values as quoted to 3 or 4 figures; tol 1e-3")
 {
     const beam_model m(L, EI, {udl(w)});
     const double EIL = EI / L;
@@ -110,9 +116,9 @@ TEST_CASE("worked case; pack section 5 [WC5; D]: IPE 300; 6 m; 20 kN/m; values t
     for (const auto& r : rows) {
         CAPTURE(r.kappa);
         const auto s = m.solve(stiffness::spring(r.kappa * EIL), stiffness::spring(r.kappa * EIL));
-        CHECK(close(s.moment_start, r.M, 5e-4));
-        CHECK(close(s.max_sagging_moment, r.Mmid, 5e-4));
-        CHECK(close(s.max_deflection * 1e3, r.delta_mm, 5e-4));
+        CHECK(close(s.moment_start, r.M, 1e-3));
+        CHECK(close(s.max_sagging_moment, r.Mmid, 1e-3));
+        CHECK(close(s.max_deflection * 1e3, r.delta_mm, 1e-3));
         CHECK(close(s.rotation_start, r.theta, 5e-3));
     }
 }
@@ -154,7 +160,7 @@ TEST_CASE("off-centre point load [R8.1]: pinned reactions Pb/L; Pa/L; rotations;
     CHECK(close(sf.reaction_end, P * a * a * (a + 3 * b) / (L * L * L), 1e-9));
 }
 
-TEST_CASE("propped cantilever; UDL [R8.1]: prop reaction 3wL/8; fixed-end moment wL^2/8; rotation wL^3/(48EI); delta wL^4/(185EI); tol 1e-9 (delta: 185 is rounded; 1e-3)")
+TEST_CASE("propped cantilever; UDL [R8.1]: prop reaction 3wL/8; fixed-end moment wL^2/8; rotation wL^3/(48EI); delta wL^4/(185EI); tol 1e-9 (delta: the handbook constant 185 is rounded from 184.6; 3e-3)")
 {
     const beam_model m(L, EI, {udl(w)});
     // Rigid at the end, pinned at the start (the prop).
@@ -165,7 +171,7 @@ TEST_CASE("propped cantilever; UDL [R8.1]: prop reaction 3wL/8; fixed-end moment
     CHECK(close(s.max_sagging_moment, 9 * w * L * L / 128, 1e-9));
     CHECK(close(s.max_sagging_at, 3 * L / 8, 1e-7));
     CHECK(close(s.rotation_start, w * L * L * L / (48 * EI), 1e-9));
-    CHECK(close(s.max_deflection, w * std::pow(L, 4) / (185 * EI), 1e-3));
+    CHECK(close(s.max_deflection, w * std::pow(L, 4) / (185 * EI), 3e-3));
     CHECK(close(s.max_deflection_at, 0.4215 * L, 1e-4));
 }
 
@@ -337,4 +343,125 @@ TEST_CASE("independent solver: python3-sympy solves EI w'''' = q with spring bou
     CHECK(close(s.moment_start, MA, 1e-9));
     CHECK(close(s.moment_end, MB, 1e-9));
     CHECK(close(m.deflection_at(a, s.moment_start, s.moment_end), wa, 1e-9));
+}
+
+namespace {
+
+// An independent reference: the classical stiffness method with Euler-Bernoulli
+// cubic elements (Przemieniecki, Theory of Matrix Structural Analysis, 1968,
+// ch. 5), assembled and solved with Eigen. End springs are added to the
+// rotational diagonal; a rigid end removes its rotation. Only for loads that
+// are not very close together (the assembled matrix is then well conditioned).
+struct fe_result {
+    double moment_start, moment_end, reaction_start, reaction_end, rotation_start, rotation_end;
+    std::vector<double> nodes, w;
+};
+
+fe_result stiffness_method(double span, double ei, const std::vector<load>& loads, stiffness sa, stiffness sb)
+{
+    std::vector<double> x{0.0, span};
+    for (const auto& l : loads) {
+        x.push_back(l.from);
+        if (l.kind == load_kind::udl || l.kind == load_kind::linear) x.push_back(l.to);
+    }
+    std::sort(x.begin(), x.end());
+    x.erase(std::unique(x.begin(), x.end()), x.end());
+    const int n = static_cast<int>(x.size()), nd = 2 * n;
+    Eigen::MatrixXd K = Eigen::MatrixXd::Zero(nd, nd);
+    Eigen::VectorXd f = Eigen::VectorXd::Zero(nd);
+    for (int e = 0; e + 1 < n; ++e) {
+        const double l = x[e + 1] - x[e], k = ei / (l * l * l);
+        Eigen::Matrix4d ke;
+        ke << 12, 6 * l, -12, 6 * l, 6 * l, 4 * l * l, -6 * l, 2 * l * l, -12, -6 * l, 12, -6 * l, 6 * l, 2 * l * l,
+            -6 * l, 4 * l * l;
+        ke *= k;
+        double qa = 0, qb = 0;
+        for (const auto& ld : loads)
+            if ((ld.kind == load_kind::udl || ld.kind == load_kind::linear) && x[e] >= ld.from && x[e + 1] <= ld.to) {
+                qa += intensity_at(ld, x[e]);
+                qb += intensity_at(ld, x[e + 1]);
+            }
+        const double t = qb - qa;  // consistent loads of a linearly varying line load
+        const double fe[4] = {qa * l / 2 + 3 * t * l / 20, qa * l * l / 12 + t * l * l / 30, qa * l / 2 + 7 * t * l / 20,
+                              -qa * l * l / 12 - t * l * l / 20};
+        for (int i = 0; i < 4; ++i) {
+            f(2 * e + i) += fe[i];
+            for (int j = 0; j < 4; ++j) K(2 * e + i, 2 * e + j) += ke(i, j);
+        }
+    }
+    for (const auto& ld : loads) {
+        const int node = static_cast<int>(std::lower_bound(x.begin(), x.end(), ld.from) - x.begin());
+        if (ld.kind == load_kind::point) f(2 * node) += ld.value;
+        if (ld.kind == load_kind::moment) f(2 * node + 1) += ld.value;
+    }
+    Eigen::MatrixXd Ks = K;
+    if (!sa.is_rigid()) Ks(1, 1) += sa.value();
+    if (!sb.is_rigid()) Ks(nd - 1, nd - 1) += sb.value();
+    std::vector<int> free;
+    for (int d = 0; d < nd; ++d) {
+        if (d == 0 || d == nd - 2) continue;
+        if (d == 1 && sa.is_rigid()) continue;
+        if (d == nd - 1 && sb.is_rigid()) continue;
+        free.push_back(d);
+    }
+    const int nf = static_cast<int>(free.size());
+    Eigen::MatrixXd A(nf, nf);
+    Eigen::VectorXd b(nf);
+    for (int i = 0; i < nf; ++i) {
+        b(i) = f(free[i]);
+        for (int j = 0; j < nf; ++j) A(i, j) = Ks(free[i], free[j]);
+    }
+    const Eigen::VectorXd uf = A.ldlt().solve(b);
+    Eigen::VectorXd u = Eigen::VectorXd::Zero(nd);
+    for (int i = 0; i < nf; ++i) u(free[i]) = uf(i);
+    const Eigen::VectorXd r = K * u - f;  // forces the supports and springs apply, in the load sense
+    fe_result out;
+    out.reaction_start = -r(0);
+    out.reaction_end = -r(nd - 2);
+    out.moment_start = -r(1);   // hogging = anticlockwise support couple at the start
+    out.moment_end = r(nd - 1);
+    out.rotation_start = u(1);
+    out.rotation_end = -u(nd - 1);
+    out.nodes = x;
+    for (int i = 0; i < n; ++i) out.w.push_back(u(2 * i));
+    return out;
+}
+
+}  // namespace
+
+TEST_CASE("engine against an assembled cubic-element stiffness model in Eigen (Przemieniecki 1968 ch. 5); tol 1e-9")
+{
+    const std::vector<load> loads{udl(w, 1.0, 4.5), point(25e3, 2.0), linear(5e3, 15e3, 0.5, 5.5), couple(8e3, 3.3),
+                                  point(-4e3, 5.0)};
+    const beam_model m(L, EI, loads);
+    const stiffness cases[][2] = {{stiffness::pinned(), stiffness::pinned()},
+                                  {stiffness::rigid(), stiffness::rigid()},
+                                  {stiffness::spring(0.4 * EI / L), stiffness::spring(12.0 * EI / L)},
+                                  {stiffness::rigid(), stiffness::spring(2.5 * EI / L)},
+                                  {stiffness::pinned(), stiffness::rigid()}};
+    for (const auto& c : cases) {
+        const auto s = m.solve(c[0], c[1]);
+        const auto r = stiffness_method(L, EI, loads, c[0], c[1]);
+        const double Mscale = std::max(std::abs(r.moment_start), std::abs(r.moment_end)) + 1.0;
+        CHECK(std::abs(s.moment_start - r.moment_start) <= 1e-9 * Mscale);
+        CHECK(std::abs(s.moment_end - r.moment_end) <= 1e-9 * Mscale);
+        CHECK(close(s.reaction_start, r.reaction_start, 1e-9));
+        CHECK(close(s.reaction_end, r.reaction_end, 1e-9));
+        const double th = std::abs(r.rotation_start) + std::abs(r.rotation_end);
+        CHECK(std::abs(s.rotation_start - r.rotation_start) <= 1e-9 * th);
+        CHECK(std::abs(s.rotation_end - r.rotation_end) <= 1e-9 * th);
+        double wmax = 0;
+        for (double v : r.w) wmax = std::max(wmax, std::abs(v));
+        for (std::size_t i = 0; i < r.nodes.size(); ++i)
+            CHECK(std::abs(m.deflection_at(r.nodes[i], s.moment_start, s.moment_end) - r.w[i]) <= 1e-9 * wmax);
+    }
+}
+
+TEST_CASE("loads 1e-6 L apart keep equilibrium to 1e-9 (the case an assembled stiffness matrix loses)")
+{
+    const double Lb = 80.0;
+    const beam_model m(Lb, 1e7, {point(1e4, 20.0), point(1e4, 20.0 + 8e-5), udl(3e3, 20.0 + 4e-5, 60.0)});
+    // Each solve checks equilibrium internally and throws internal_error on a breach.
+    CHECK_NOTHROW(m.solve(stiffness::spring(3e5), stiffness::rigid()));
+    CHECK_NOTHROW(m.solve(stiffness::pinned(), stiffness::pinned()));
 }

@@ -9,6 +9,9 @@
 
 #include "pinproof/beam_model.hpp"
 #include "pinproof/classification.hpp"
+#include "pinproof/detailing_rules.hpp"
+#include "pinproof/gap_closure.hpp"
+#include "pinproof/gap_geometry.hpp"
 #include "pinproof/project.hpp"
 #include "pinproof/units.hpp"
 
@@ -24,6 +27,9 @@ struct check {
     std::optional<double> limit;  // SI
     dimension dim;         // of value and limit
     std::string message;   // one or two sentences: what was compared and what follows
+    // Reported for someone else to use (the support moment), not a criterion:
+    // sensitivity studies leave it out.
+    bool informative = false;
 };
 
 struct value_range {
@@ -47,6 +53,32 @@ struct combination_result {
     int interior_points = 0;
 };
 
+// What happens when the end gap closes under a strength combination: the beam
+// solved with bilinear joints at the lower-bound stiffness (gap_closure.hpp).
+struct closure_consequence {
+    std::string combination;
+    closed_state result;
+    double closure_rotation = 0;  // rad, of the beam end (the support's own rotation taken off)
+    double contact_force = 0;     // N: moment beyond the joint's own share over the lever arm
+    double lever_arm = 0;         // m, centre of rotation to the contact point
+};
+
+struct detail_assessment {
+    gap_check gap;                        // at the demand below, worst-case gap
+    double demand_sagging = 0;            // rad, all combinations, incl. the support rotation
+    double demand_hogging = 0;
+    std::string demand_combination;
+    double strength_demand_sagging = 0;   // rad, strength combinations only
+    double strength_demand_hogging = 0;
+    std::string strength_combination;
+    bool closes_under_strength = false;
+    bool closes_under_service = false;
+    std::optional<closure_consequence> consequence;
+    std::vector<detailing_finding> findings;
+    // Whether the detail clears the rule-of-thumb rotation, shown for comparison only.
+    bool clears_rule_of_thumb = false;
+};
+
 struct joint_assessment {
     beam_end end = beam_end::start;
     stiffness_range range;
@@ -56,6 +88,7 @@ struct joint_assessment {
     double fixity_lower = 0, fixity_upper = 0;
     en_joint_class en_lower{}, en_upper{};
     aisc_joint_class aisc_lower{}, aisc_upper{};
+    std::optional<detail_assessment> detail;
 };
 
 struct beam_assessment {
@@ -87,6 +120,9 @@ struct assessment_options {
     // deflection (range-envelope.md). The checks never need it: a schedule of
     // many beams may switch it off.
     bool search_interior = true;
+    // Search for the smallest end gap that passes (gap_geometry.hpp); off for
+    // callers that assess the same beam at many stiffness values.
+    bool find_min_gap = true;
 };
 
 beam_assessment assess_beam(const project& p, const beam& b, const assessment_options& options = {});

@@ -2,19 +2,23 @@
 // supports, each end restrained by a rotational spring (pin, spring or rigid).
 //
 // Method (docs/method/beam-model.md):
-//  1. Euler-Bernoulli cubic (Hermite) elements with a node at each end, at every
-//     point load or point moment and at every boundary of a distributed load, so
-//     the nodal values are exact for the load kinds supported. Consistent nodal
-//     loads; the deflected shape inside an element is the Hermite interpolation
-//     plus the element's fixed-fixed particular solution, which is exact.
-//  2. The supports prevent deflection at both ends. The system is solved once
-//     for the loads and once for a unit couple at each end rotation. This is a
-//     static condensation onto the two end rotations: any pair of end springs is
-//     then a 2x2 solve, and a rigid end is the exact constraint rotation = 0,
-//     not a large spring number.
+//  1. Nodes at each end, at every point load or point moment and at every
+//     boundary of a distributed load. On each element between two nodes the
+//     exact Euler-Bernoulli solution (a polynomial of degree <= 5) is found by
+//     integrating EI w'' = -M for the pinned-pinned beam, whose bending moment
+//     follows from statics. This is the exact solution that cubic elements with
+//     consistent loads and the clamped particular solution give at these
+//     nodes (tests/beam_model_test.cpp checks it against such an assembled
+//     stiffness model built with Eigen), without the ill-conditioning of an
+//     assembled matrix when two nodes are very close.
+//  2. The end moments are the two redundants. The load state and the states of
+//     a unit moment at each end are computed once; this static condensation onto
+//     the two end rotations makes any pair of end springs a 2x2 solve, and a
+//     rigid end the exact constraint rotation = 0, not a large spring number.
 //  3. Every state is checked for equilibrium of vertical forces and of moments
-//     about the start; a residual above 1e-9 of the load scale throws
-//     internal_error.
+//     about the start, and by the shear and moment left over past the end
+//     support after integrating along the beam; a residual above 1e-9 of the
+//     load scale throws internal_error.
 // Signs: sign_conventions.hpp. Units: SI base units.
 #pragma once
 
@@ -81,10 +85,18 @@ public:
 private:
     struct element {
         double x0 = 0, length = 0;
+        double qa = 0, qb = 0;  // line load at the element's ends, N/m
         // Deflection polynomials for the load state and for unit hogging end
         // moments at the start and at the end.
         element_polynomial w_load{}, w_start{}, w_end{};
     };
+    struct load_state {
+        std::vector<element_polynomial> w;  // deflection per element
+        double reaction_start = 0, reaction_end = 0, rotation_start = 0, rotation_end = 0;
+        double closure_shear = 0, closure_moment = 0;  // what is left past the end support
+    };
+    load_state integrate(const std::vector<load>& loads, double couple_start, double couple_end) const;
+    std::size_t nearest_node(double x) const;
     element_polynomial combined(const element& e, double m_start, double m_end) const;
     std::size_t element_index(double x) const;
     void check_equilibrium(const beam_state& s) const;
@@ -98,6 +110,7 @@ private:
     // Reactions (upward) of the load state and per unit hogging end moment.
     std::array<double, 2> reaction0_{}, reaction_per_start_{}, reaction_per_end_{};
     double total_force_ = 0, total_moment_about_start_ = 0, load_scale_ = 0;
+    std::array<double, 6> closure_{};  // shear and moment closure of the three states
 };
 
 }  // namespace pinproof

@@ -44,14 +44,16 @@ class problem_list {
 public:
     void add(std::string where, std::string message);
     void add_all(const input_error& e);
-    bool empty() const noexcept { return problems_.empty(); }
-    std::size_t size() const noexcept { return problems_.size(); }
+    bool empty() const noexcept { return count_ == 0; }
+    // Every problem added, including those beyond the 200 that are kept.
+    std::size_t size() const noexcept { return count_; }
     const std::vector<input_problem>& problems() const noexcept { return problems_; }
     // Throws input_error carrying every problem, if there is at least one.
     void throw_if_any() const;
 
 private:
     std::vector<input_problem> problems_;
+    std::size_t count_ = 0;
 };
 
 }  // namespace pinproof

@@ -201,6 +201,9 @@ double margin(const closure& c, double demand);  // closure / demand (pi/2 when 
 std::optional<double> min_gap_required(const connection_detail& detail, const section& beam,
                                        const rotation_demand& demand, std::string* note = nullptr);
 
-gap_check check_gap(const connection_detail& detail, const section& beam, const rotation_demand& demand);
+// `find_min_gap` false skips the search for the smallest passing gap (its
+// result is then nullopt with a note), for callers that evaluate many demands.
+gap_check check_gap(const connection_detail& detail, const section& beam, const rotation_demand& demand,
+                    bool find_min_gap = true);
 
 }  // namespace pinproof

@@ -36,6 +36,9 @@ struct beam {
     std::vector<combination> combinations;
     joint start, end;
     std::optional<deflection_limit> deflection;
+    // 1: both joints are the same connection type, one stiffness draw for both;
+    // 0: independent (docs/method/sweep-and-probability.md).
+    int stiffness_correlation = 1;
     std::string pointer;  // JSON pointer of the beam in its file, e.g. "/beams/0"
     double EI() const { return E * sec.I; }
     const joint& at(beam_end e) const { return e == beam_end::start ? start : end; }
@@ -56,12 +59,20 @@ inline constexpr const char* project_format = "pinproof-project/1";
 // found, each with its JSON pointer.
 project read_project(const nlohmann::json& document);
 
+// Where joints given as detail ids (e.g. "FP-3-M20") are looked up: the detail
+// catalogue file given on the command line, or else the file named by the
+// project's "details" key, relative to base_dir (docs/batch-and-catalogues.md).
+struct project_sources {
+    std::string details_file;
+    std::string base_dir;
+};
+
 // Parses project-file text (JSON syntax errors are reported with their line
 // and column) and reads it.
-project parse_project(std::string_view text);
+project parse_project(std::string_view text, const project_sources& sources = {});
 
 // Reads a project file from disk. A file that cannot be read is an input_error
-// naming the path.
-project load_project_file(const std::string& path);
+// naming the path. `details_file` overrides the project's "details" key.
+project load_project_file(const std::string& path, const std::string& details_file = "");
 
 }  // namespace pinproof

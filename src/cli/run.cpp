@@ -4,7 +4,11 @@
 #include <ostream>
 #include <sstream>
 
+#include "batch_command.hpp"
 #include "cli.hpp"
+#include "report_command.hpp"
+#include "sweep_command.hpp"
+#include "detail_command.hpp"
 #include "pinproof/assessment.hpp"
 #include "pinproof/errors.hpp"
 #include "pinproof/output_file.hpp"
@@ -32,9 +36,10 @@ void emit(const std::string& target, const std::string& text, std::ostream& out)
     else write_file_atomically(target, text);
 }
 
-int check_command(const std::string& file, const std::string& json_out, bool quiet, std::ostream& out)
+int check_command(const std::string& file, const std::string& details, const std::string& json_out, bool quiet,
+                  std::ostream& out)
 {
-    const project p = load_project_file(file);
+    const project p = load_project_file(file, details);
     const project_assessment a = assess_project(p);
     // Everything is computed before anything is written.
     std::string json_text;
@@ -69,19 +74,49 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
                  "Results support, and do not replace, the judgement of a qualified engineer.",
                  "pinproof"};
     app.set_version_flag("--version", std::string("pinproof ") + version);
-    app.require_subcommand(1);
+    // At most one command; a missing one is reported after parsing, so that an
+    // unknown option or word is named rather than hidden behind "a command is required".
+    app.require_subcommand(0, 1);
     app.footer("Exit codes: 0 every verdict holds, 1 a verdict does not hold, 2 bad input or an error.");
 
-    std::string file, json_out;
+    std::string file, json_out, details;
     bool quiet = false;
+    const char* details_help = "Detail catalogue (format pinproof-details/1) for joints given as detail ids; "
+                               "overrides the project's \"details\" key";
     auto* check = app.add_subcommand("check", "Check every beam of a project file and print the report");
     check->add_option("FILE", file, "Project file (format pinproof-project/1)")->required();
     check->add_option("--json", json_out, "Also write the machine-readable result to FILE ('-' for stdout)")
         ->type_name("FILE");
     check->add_flag("-q,--quiet", quiet, "Print no text report (the exit code still gives the verdict)");
+    check->add_option("--details", details, details_help)->type_name("FILE");
     check->footer("Exit codes: 0 every verdict holds, 1 a verdict does not hold, 2 bad input or an error.");
 
     auto* sections = app.add_subcommand("sections", "List the built-in section catalogue");
+
+    detail_options detail_opts;
+    auto* detail = app.add_subcommand("detail", "Check the end gap of one joint and draw its elevation (SVG)");
+    detail->add_option("FILE", detail_opts.file, "Project file (format pinproof-project/1)")->required();
+    detail->add_option("--beam", detail_opts.beam, "Beam id")->required();
+    detail->add_option("--end", detail_opts.end, "Which joint: start or end")
+        ->check(CLI::IsMember({"start", "end"}))
+        ->capture_default_str();
+    detail->add_option("--svg", detail_opts.svg, "Drawing to write ('-' for stdout)")->required()->type_name("FILE");
+    detail->add_option("--details", detail_opts.details, details_help)->type_name("FILE");
+
+    sweep_options sweep_opts;
+    auto* sweep = app.add_subcommand("sweep", "Sweep a beam's joint stiffness from a true pin to rigid: results, "
+                                              "thresholds and failure probabilities");
+    add_sweep_options(*sweep, sweep_opts);
+
+    batch_command_options batch_options;
+    auto* batch = add_batch_subcommand(app, batch_options);
+
+    std::string report_file, report_out;
+    auto* report = app.add_subcommand("report", "Write the calculation report of a project file as one HTML file");
+    report->add_option("FILE", report_file, "Project file (format pinproof-project/1)")->required();
+    report->add_option("-o,--output", report_out, "HTML file to write")->required()->type_name("FILE");
+    std::string report_details;
+    report->add_option("--details", report_details, details_help)->type_name("FILE");
 
     std::vector<std::string> reversed(args.rbegin(), args.rend());
     try {
@@ -97,8 +132,14 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
     }
 
     try {
-        if (check->parsed()) return check_command(file, json_out, quiet, out);
+        if (check->parsed()) return check_command(file, details, json_out, quiet, out);
         if (sections->parsed()) return sections_command(out);
+        if (sweep->parsed()) return sweep_command(sweep_opts, out, err);
+        if (detail->parsed()) return detail_command(detail_opts, out, err);
+        if (batch->parsed()) return batch_command(batch_options, out, err);
+        if (report->parsed()) return report_command(report_file, report_out, out, err, report_details);
+        err << "pinproof: a command is required (check, report, detail, sweep, batch or sections)\nRun with --help for more information.\n";
+        return exit_error;
     } catch (const input_error& e) {
         report_input_error(e, err);
         return exit_error;

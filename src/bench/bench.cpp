@@ -1,0 +1,238 @@
+// pinproof-bench: throughput of the beam engine over a joint-stiffness sweep,
+// against the closed-form condensed evaluation that is its floor, and a
+// generator of large schedules for timing `pinproof batch` end to end
+// (src/bench/run-bench.sh, docs/performance.md).
+//
+//   pinproof-bench                      engine figures
+//   pinproof-bench --schedule FILE N    writes a schedule of N beams to FILE
+//
+// Each figure is the best of several timed repetitions on one thread.
+#include <array>
+#include <chrono>
+#include <cmath>
+#include <cstdio>
+#include <cstdlib>
+#include <fstream>
+#include <functional>
+#include <string>
+#include <vector>
+
+#include "pinproof/beam_model.hpp"
+
+using namespace pinproof;
+
+namespace {
+
+// The benchmark beam: IPE 400 (I = 23130 cm4), 8 m, 15 kN/m over the span and
+// 20, 30 and 25 kN at 2.0, 4.0 and 6.5 m.
+constexpr double L = 8.0;
+constexpr double EI = 210e9 * 23130e-8;
+constexpr double w = 15e3;
+constexpr std::array<std::array<double, 2>, 3> points{{{20e3, 2.0}, {30e3, 4.0}, {25e3, 6.5}}};
+
+std::vector<load> bench_loads()
+{
+    std::vector<load> out;
+    load u;
+    u.kind = load_kind::udl;
+    u.value = w;
+    u.from = 0;
+    u.to = L;
+    out.push_back(u);
+    for (const auto& p : points) {
+        load l;
+        l.kind = load_kind::point;
+        l.value = p[0];
+        l.from = l.to = p[1];
+        out.push_back(l);
+    }
+    return out;
+}
+
+// The sweep: a 100 x 100 grid of end stiffnesses, kappa = S L / EI from 0.01 to 100.
+std::vector<stiffness> sweep_values()
+{
+    std::vector<stiffness> out;
+    for (int i = 0; i < 100; ++i) out.push_back(stiffness::spring(std::pow(10.0, -2.0 + 4.0 * i / 99.0) * EI / L));
+    return out;
+}
+
+// Closed-form condensed evaluation. Simply supported end rotations under the
+// loads (Roark, Table 8.1; Hicks, Civil Engineering Formulas, Fig. 2.2):
+//   UDL        theta_A = theta_B = w L^3 / (24 EI)
+//   point P at a (b = L - a):  theta_A = P a b (L + b) / (6 EI L), theta_B = P a b (L + a) / (6 EI L)
+// and the end flexibilities of a simply supported beam: f11 = f22 = L/(3EI),
+// f12 = L/(6EI). With both known, a pair of springs is the 2x2 system
+//   (1 + S_j f_jj) m_j + S_j f_jk m_k = S_j theta_j.
+struct closed_form {
+    double th0[2] = {0, 0};
+    double f11 = L / (3 * EI), f12 = L / (6 * EI);
+    closed_form()
+    {
+        th0[0] = th0[1] = w * L * L * L / (24 * EI);
+        for (const auto& p : points) {
+            const double a = p[1], b = L - a;
+            th0[0] += p[0] * a * b * (L + b) / (6 * EI * L);
+            th0[1] += p[0] * a * b * (L + a) / (6 * EI * L);
+        }
+    }
+    std::array<double, 2> end_moments(double s0, double s1) const
+    {
+        const double a00 = 1 + s0 * f11, a01 = s0 * f12, b0 = s0 * th0[0];
+        const double a10 = s1 * f12, a11 = 1 + s1 * f11, b1 = s1 * th0[1];
+        const double det = a00 * a11 - a01 * a10;
+        return {(b0 * a11 - a01 * b1) / det, (a00 * b1 - a10 * b0) / det};
+    }
+};
+
+// Runs `pass` (one pass = `per_pass` analyses) until at least `min_seconds`
+// have passed, `repeats` times; returns the best analyses per second.
+double rate(const std::function<void()>& pass, double per_pass, double min_seconds = 0.4, int repeats = 3)
+{
+    double best = 0;
+    for (int r = 0; r < repeats; ++r) {
+        const auto t0 = std::chrono::steady_clock::now();
+        long passes = 0;
+        double elapsed = 0;
+        do {
+            pass();
+            ++passes;
+            elapsed = std::chrono::duration<double>(std::chrono::steady_clock::now() - t0).count();
+        } while (elapsed < min_seconds);
+        best = std::max(best, passes * per_pass / elapsed);
+    }
+    return best;
+}
+
+volatile double sink = 0;
+
+int engine_figures()
+{
+    const beam_model model(L, EI, bench_loads());
+    const closed_form cf;
+    const auto ks = sweep_values();
+    const double n = static_cast<double>(ks.size() * ks.size());
+
+    // The two must agree before their speeds are compared.
+    double worst = 0;
+    for (const auto& a : ks)
+        for (const auto& b : ks) {
+            const auto m = model.end_moments(a, b);
+            const auto c = cf.end_moments(a.value(), b.value());
+            for (int j = 0; j < 2; ++j) worst = std::max(worst, std::abs(m[j] - c[j]) / std::max(1.0, std::abs(c[j])));
+        }
+
+    const double floor_rate = rate(
+        [&] {
+            double acc = 0;
+            for (const auto& a : ks)
+                for (const auto& b : ks) {
+                    const auto m = cf.end_moments(a.value(), b.value());
+                    acc += m[0] + m[1];
+                }
+            sink = sink + acc;
+        },
+        n);
+    const double condensed_rate = rate(
+        [&] {
+            double acc = 0;
+            for (const auto& a : ks)
+                for (const auto& b : ks) {
+                    const auto m = model.end_moments(a, b);
+                    acc += m[0] + m[1];
+                }
+            sink = sink + acc;
+        },
+        n);
+    // The engine's own condensed terms (from its factorised model), with the
+    // 2x2 solved inline in the sweep loop as a caller of the public API can.
+    closed_form from_engine;
+    from_engine.th0[0] = model.pinned_rotations()[0];
+    from_engine.th0[1] = model.pinned_rotations()[1];
+    from_engine.f11 = model.flexibility()[0][0];
+    from_engine.f12 = model.flexibility()[0][1];
+    const double inline_rate = rate(
+        [&] {
+            double acc = 0;
+            for (const auto& a : ks)
+                for (const auto& b : ks) {
+                    const auto m = from_engine.end_moments(a.value(), b.value());
+                    acc += m[0] + m[1];
+                }
+            sink = sink + acc;
+        },
+        n);
+    const double full_rate = rate(
+        [&] {
+            double acc = 0;
+            for (const auto& a : ks)
+                for (const auto& b : ks) acc += model.solve(a, b).max_deflection;
+            sink = sink + acc;
+        },
+        n);
+    // Re-assembling and factorising the model for every stiffness pair, which
+    // the sweep avoids: measured on the first 20 x 20 pairs.
+    const double rebuild_rate = rate(
+        [&] {
+            double acc = 0;
+            for (int i = 0; i < 20; ++i)
+                for (int j = 0; j < 20; ++j) {
+                    const beam_model m(L, EI, bench_loads());
+                    acc += m.end_moments(ks[i], ks[j])[0];
+                }
+            sink = sink + acc;
+        },
+        400.0);
+
+    std::printf("pinproof-bench: one beam (8 m, UDL and three point loads), sweep of %zu x %zu end stiffnesses, "
+                "one thread\n",
+                ks.size(), ks.size());
+    std::printf("  engine and closed form agree to %.1e (relative, end moments)\n", worst);
+    std::printf("  closed-form condensed floor (2x2 with known load terms): %14.0f analyses/s\n", floor_rate);
+    std::printf("  engine, end moments (beam_model::end_moments)          : %14.0f analyses/s\n", condensed_rate);
+    std::printf("  engine condensed terms, 2x2 inline in the sweep loop   : %14.0f analyses/s\n", inline_rate);
+    std::printf("  engine, full state (beam_model::solve)                 : %14.0f analyses/s\n", full_rate);
+    std::printf("  engine, re-assembled for every pair (constructor + end_moments): %8.0f analyses/s\n", rebuild_rate);
+    std::printf("  ratio floor/engine: end_moments %.2f, condensed terms inline %.2f, full state %.1f\n",
+                floor_rate / condensed_rate, floor_rate / inline_rate, floor_rate / full_rate);
+    return 0;
+}
+
+// An invented building of repeated floor beams: sections, spans and loads
+// cycle through plausible values; every row is well formed.
+int write_schedule(const std::string& path, long n)
+{
+    std::ofstream out(path, std::ios::binary);
+    if (!out) {
+        std::fprintf(stderr, "pinproof-bench: cannot write %s\n", path.c_str());
+        return 2;
+    }
+    const char* sections[] = {"IPE 240", "IPE 270", "IPE 300", "IPE 330", "IPE 360", "IPE 400", "IPE 450", "HE 240 A"};
+    const char* details[] = {"FP-2-M20", "FP-3-M20", "FP-4-M20", "WC-2-M20", "WC-3-M20", "EP-P-3-M20", "FP-3-M20-SLOT"};
+    const double spans[] = {4.5, 5.0, 5.4, 6.0, 6.6, 7.2, 7.5, 8.1};
+    out << "id,span,section,g,q,start,end,combinations,deflection_limit\n";
+    for (long i = 0; i < n; ++i) {
+        const int s = static_cast<int>(i % 8), d = static_cast<int>((i / 8) % 7), e = static_cast<int>((i / 56) % 7);
+        const double g = 4.0 + 0.5 * static_cast<double>(i % 11), q = 2.5 + 0.5 * static_cast<double>(i % 9);
+        char line[256];
+        std::snprintf(line, sizeof line, "B%06ld,%.1f m,%s,%.1f kN/m,%.1f kN/m,%s,%s,%s,span/360\n", i + 1,
+                      spans[(i / 3) % 8], sections[s], g, q, details[d], details[e], i % 5 == 0 ? "ASCE7" : "EN1990");
+        out << line;
+    }
+    out.close();
+    if (!out) {
+        std::fprintf(stderr, "pinproof-bench: cannot write %s\n", path.c_str());
+        return 2;
+    }
+    return 0;
+}
+
+}  // namespace
+
+int main(int argc, char** argv)
+{
+    if (argc == 4 && std::string(argv[1]) == "--schedule") return write_schedule(argv[2], std::atol(argv[3]));
+    if (argc == 1) return engine_figures();
+    std::fprintf(stderr, "usage: pinproof-bench [--schedule FILE N]\n");
+    return 2;
+}

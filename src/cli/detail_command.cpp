@@ -1,0 +1,47 @@
+#include "detail_command.hpp"
+
+#include <ostream>
+
+#include "pinproof/assessment.hpp"
+#include "pinproof/calculation_report.hpp"
+#include "pinproof/errors.hpp"
+#include "pinproof/output_file.hpp"
+#include "pinproof/project.hpp"
+
+namespace pinproof::cli {
+
+int detail_command(const detail_options& o, std::ostream& out, std::ostream& err)
+{
+    (void)err;
+    const project p = load_project_file(o.file, o.details);
+    const beam* b = nullptr;
+    std::string ids;
+    for (const auto& candidate : p.beams) {
+        ids += (ids.empty() ? "" : ", ") + candidate.id;
+        if (candidate.id == o.beam) b = &candidate;
+    }
+    if (!b) throw input_error("--beam", "expected the id of a beam in " + o.file + " (" + ids + "), found \"" + o.beam + "\"");
+    const beam_end e = o.end == "start" ? beam_end::start : beam_end::end;
+    if (!b->at(e).detail)
+        throw input_error(b->pointer + "/joints/" + o.end + "/detail",
+                          "expected a connection detail for the " + o.end + " joint of beam " + b->id +
+                              ", found none (the drawing needs one)");
+    const beam_assessment a = assess_beam(p, *b);
+    const auto svg = gap_detail_svg(*b, e, a);
+    if (!svg) throw internal_error("no drawing for a joint with a detail");
+    // The summary line: the gap-closure check of this end.
+    std::string summary;
+    for (const auto& c : a.checks)
+        if (c.id == "gap-closure-" + o.end) summary = to_string(c.status) + ": " + c.message;
+    if (o.svg == "-") {
+        out << *svg;
+    } else {
+        write_file_atomically(o.svg, *svg);
+        out << "Beam " << b->id << ", " << o.end << " joint: " << summary << "\n";
+        out << "Drawing written to " << o.svg << ". Results support, and do not replace, the judgement of a "
+               "qualified engineer.\n";
+    }
+    return a.holds() ? 0 : 1;
+}
+
+}  // namespace pinproof::cli

@@ -1,0 +1,226 @@
+#include "sweep_command.hpp"
+
+#include <CLI/CLI.hpp>
+#include <nlohmann/json.hpp>
+
+#include <cctype>
+#include <cstdlib>
+#include <fstream>
+#include <ostream>
+#include <sstream>
+
+#include "pinproof/errors.hpp"
+#include "pinproof/failure_probability.hpp"
+#include "pinproof/output_file.hpp"
+#include "pinproof/project.hpp"
+#include "pinproof/result_json.hpp"
+#include "pinproof/sweep.hpp"
+
+namespace pinproof::cli {
+
+void add_sweep_options(CLI::App& sub, sweep_options& o)
+{
+    sub.add_option("FILE", o.file, "Project file (format pinproof-project/1)")->required();
+    sub.add_option("--details", o.details, "Detail catalogue for joints given as detail ids")->type_name("FILE");
+    sub.add_option("--beam", o.beam_id, "Id of the beam to sweep (default: the first beam)")->type_name("ID");
+    sub.add_option("--combination", o.combination,
+                   "Combination whose results are tabulated (default: the beam's first); the checks use all")
+        ->type_name("NAME");
+    sub.add_option("--points", o.points, "Stiffness values between 0.01 and 1000 EI/L, log spaced (default 41)")
+        ->check(CLI::Range(2, 1000))
+        ->type_name("N");
+    sub.add_option("--end", o.end, "Move only this end (default: both ends together)")
+        ->check(CLI::IsMember({"start", "end"}))
+        ->type_name("start|end");
+    sub.add_option("--hold", o.hold,
+                   "Stiffness of the end that does not move, e.g. \"2500 kN*m/rad\", \"0.5 EI/L\" or \"rigid\" "
+                   "(default: its upper bound)")
+        ->type_name("STIFFNESS");
+    sub.add_flag("--grid", o.grid, "Evaluate the two-end map: every pair of sweep values, (N+2) x (N+2)");
+    sub.add_option("--csv", o.csv_out, "Write the sweep table as CSV to FILE ('-' for stdout)")->type_name("FILE");
+    sub.add_option("--svg", o.svg_out, "Write the chart as SVG to FILE ('-' for stdout)")->type_name("FILE");
+    sub.add_option("--json", o.json_out, "Write the sweep, thresholds and probabilities as JSON ('-' for stdout)")
+        ->type_name("FILE");
+    sub.add_option("--monte-carlo", o.monte_carlo,
+                   "Also estimate the failure probabilities by N Monte Carlo samples (fixed seed)")
+        ->type_name("N");
+}
+
+namespace {
+
+stiffness parse_hold(const std::string& text, double EI_over_L)
+{
+    std::string t = text;
+    while (!t.empty() && std::isspace(static_cast<unsigned char>(t.back()))) t.pop_back();
+    if (t == "rigid") return stiffness::rigid();
+    const std::string rel = "EI/L";
+    if (t.size() >= rel.size() && t.compare(t.size() - rel.size(), rel.size(), rel) == 0) {
+        const std::string num = t.substr(0, t.size() - rel.size());
+        char* end = nullptr;
+        const double k = std::strtod(num.c_str(), &end);
+        bool ok = end != num.c_str() && std::isfinite(k) && k >= 0;
+        while (ok && end && *end) ok = std::isspace(static_cast<unsigned char>(*end++));
+        if (ok) return stiffness::spring(k * EI_over_L);
+    } else {
+        try {
+            const quantity q = parse_quantity(t);
+            if (q.dim == dims::rotational_stiffness && q.value >= 0) return stiffness::spring(q.value);
+        } catch (const std::invalid_argument&) {
+        }
+    }
+    throw input_error("--hold", "expected a rotational stiffness of zero or more such as \"2500 kN*m/rad\", a "
+                                "multiple such as \"0.5 EI/L\" or \"rigid\", found \"" + text + "\"");
+}
+
+void emit(const std::string& target, const std::string& text, std::ostream& out)
+{
+    if (target == "-") out << text;
+    else write_file_atomically(target, text);
+}
+
+std::string stiffness_text(stiffness s, unit_system u)
+{
+    return s.is_rigid() ? std::string("rigid") : format_quantity(s.value(), dims::rotational_stiffness, u);
+}
+
+}  // namespace
+
+int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err*/)
+{
+    const project p = load_project_file(o.file, o.details);
+    if (p.beams.empty()) throw input_error("/beams", "expected at least one beam to sweep, found none");
+    const beam* b = &p.beams.front();
+    if (!o.beam_id.empty()) {
+        b = nullptr;
+        std::string known;
+        for (const auto& x : p.beams) {
+            if (x.id == o.beam_id) b = &x;
+            known += (known.empty() ? "" : ", ") + x.id;
+        }
+        if (!b) throw input_error("--beam", "expected one of the beam ids (" + known + "), found \"" + o.beam_id + "\"");
+    }
+    // The distributions are read from the document itself.
+    stiffness_uncertainty uncertainty;
+    {
+        std::ifstream in(o.file, std::ios::binary);
+        std::stringstream text;
+        text << in.rdbuf();
+        const auto document = nlohmann::json::parse(text.str(), nullptr, false);
+        if (!document.is_discarded()) {
+            problem_list problems;
+            uncertainty = read_stiffness_uncertainty(document, *b, problems);
+            problems.throw_if_any();
+        }
+    }
+
+    sweep_settings settings;
+    settings.points = o.points;
+    settings.combination = o.combination;
+    settings.grid = o.grid;
+    if (o.grid && (!o.end.empty() || !o.hold.empty()))
+        throw input_error("--grid", "expected either --grid or --end/--hold, found both: a grid moves both ends");
+    if (!o.end.empty()) {
+        settings.path.moving = o.end == "start" ? moving_end::start : moving_end::end;
+        const joint& held = o.end == "start" ? b->end : b->start;
+        settings.path.held = o.hold.empty() ? held.range.max : parse_hold(o.hold, b->EI() / b->span);
+    } else if (!o.hold.empty()) {
+        throw input_error("--hold", "expected --end start|end with --hold (both ends move otherwise)");
+    }
+
+    // Everything is computed before anything is written.
+    const sweep_result s = sweep_beam(p, *b, settings);
+    const auto probabilities = failure_probabilities(p, *b, uncertainty);
+    const auto mc = o.monte_carlo ? monte_carlo_probabilities(p, *b, uncertainty, o.monte_carlo)
+                                  : std::vector<monte_carlo_estimate>{};
+    std::vector<std::pair<std::string, std::vector<boundary_point>>> curves;
+    if (o.grid)
+        for (const auto& c : s.rows.front().checks)
+            if (c.status != check_status::not_applicable) curves.emplace_back(c.id, boundary_curve(p, *b, c.id));
+
+    std::string csv, svg, json_text;
+    if (!o.csv_out.empty()) csv = sweep_csv(s);
+    if (!o.svg_out.empty()) {
+        if (o.grid) throw input_error("--svg", "the chart is drawn for a path sweep; leave out --grid for --svg");
+        svg = sweep_svg(p, *b, s);
+    }
+    if (!o.json_out.empty()) {
+        nlohmann::json j;
+        j["format"] = "pinproof-sweep/1";
+        j["beam"] = s.beam_id;
+        j["combination"] = s.combination;
+        j["moving"] = o.grid ? "grid" : to_string(settings.path.moving);
+        if (!o.grid && settings.path.moving != moving_end::both)
+            j["held"] = settings.path.held.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(settings.path.held.value());
+        j["EI_over_L"] = s.EI / s.span;
+        nlohmann::json rows = nlohmann::json::array();
+        for (const auto& r : s.rows) {
+            nlohmann::json row = to_json(r.state);
+            row["fixity_start"] = r.fixity_start;
+            row["fixity_end"] = r.fixity_end;
+            for (const auto& c : r.checks) row["status"][c.id] = to_string(c.status);
+            rows.push_back(row);
+        }
+        j["rows"] = rows;
+        j["thresholds"] = thresholds_json(s.thresholds, to_string(settings.path.moving));
+        nlohmann::json bc = nlohmann::json::object();
+        for (const auto& [id, pts] : curves) {
+            nlohmann::json a = nlohmann::json::array();
+            for (const auto& pt : pts)
+                a.push_back({{"stiffness_start", pt.start.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(pt.start.value())},
+                             {"stiffness_end", pt.end.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(pt.end.value())},
+                             {"fixity_start", pt.fixity_start},
+                             {"fixity_end", pt.fixity_end}});
+            bc[id] = a;
+        }
+        if (o.grid) j["boundary_curves"] = bc;
+        j["probability"] = probabilities_json(probabilities);
+        nlohmann::json m = nlohmann::json::array();
+        for (const auto& e : mc)
+            m.push_back({{"check", e.check},
+                         {"p_fail", e.p_fail},
+                         {"standard_error", e.standard_error},
+                         {"samples", e.samples},
+                         {"seed", e.seed}});
+        j["monte_carlo"] = m;
+        json_text = j.dump(2) + "\n";
+    }
+    if (!o.csv_out.empty()) emit(o.csv_out, csv, out);
+    if (!o.svg_out.empty()) emit(o.svg_out, svg, out);
+    if (!o.json_out.empty()) emit(o.json_out, json_text, out);
+    if (o.csv_out == "-" || o.svg_out == "-" || o.json_out == "-") return 0;
+
+    // The summary.
+    const unit_system u = p.units;
+    out << "Stiffness sweep of beam " << s.beam_id << ", combination " << s.combination << ": " << s.rows.size()
+        << (o.grid ? " stiffness pairs" : " points") << " from a true pin to rigid";
+    if (!o.grid && settings.path.moving != moving_end::both)
+        out << ", " << to_string(settings.path.moving) << " joint moving, the other held at "
+            << stiffness_text(settings.path.held, u);
+    out << " (EI/L = " << format_quantity(s.EI / s.span, dims::rotational_stiffness, u) << ").\n";
+    if (!o.grid) {
+        if (s.thresholds.empty()) out << "No check changes its answer between a true pin and a rigid joint.\n";
+        for (const auto& t : s.thresholds)
+            out << "  " << t.check << ": " << to_string(t.below) << " below, " << to_string(t.above) << " above S = "
+                << format_quantity(t.at.value(), dims::rotational_stiffness, u)
+                << " (S*L/EI = " << format_number(t.ratio, 4) << ")\n";
+    } else {
+        for (const auto& [id, pts] : curves)
+            if (!pts.empty()) out << "  " << id << ": " << pts.size() << " points on the boundary curve in the two-end plane\n";
+    }
+    if (!probabilities.empty()) {
+        out << "Probability that each check does not pass (the stiffness distributions given"
+            << (uncertainty.start && uncertainty.end ? (uncertainty.correlation ? ", ends fully correlated"
+                                                                                : ", ends independent")
+                                                     : "")
+            << "):\n";
+        for (const auto& f : probabilities)
+            out << "  " << f.check << ": " << format_number(f.p_fail, 4) << " (error estimate "
+                << format_number(f.error, 2) << ")\n";
+        for (const auto& e : mc)
+            out << "  Monte Carlo " << e.check << ": " << format_number(e.p_fail, 4) << " +- "
+                << format_number(e.standard_error, 2) << " (" << e.samples << " samples, seed " << e.seed << ")\n";
+    }
+    return 0;
+}
+
+}  // namespace pinproof::cli

@@ -1,0 +1,234 @@
+#include "pinproof/detailing_rules.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <string>
+
+namespace pinproof {
+namespace {
+
+constexpr double mm = 1e-3;
+constexpr double rel = 1e-9;  // a value at its limit passes
+
+// Sources (see docs/method/gap-geometry.md).
+constexpr const char* sbe_fin = "Steel Buildings in Europe, Part 5: Joint design, fin plates (MSB05 p. 32)";
+constexpr const char* sbe_end =
+    "Steel Buildings in Europe, Part 5: Joint design, partial-depth end plates (MSB05 p. 16)";
+constexpr const char* sbe_cleats = "SCI P212 Joints in steel construction: simple connections, and Steel Buildings in "
+                                   "Europe, Part 5: Joint design, double angle web cleats (MSB05 p. 81)";
+
+std::string length_text(double v) { return format_quantity(v, dims::length, unit_system::si); }
+std::string ratio_text(double v) { return format_quantity(v, dims::dimensionless, unit_system::si, 3); }
+
+std::string fitting_name(detail_type t)
+{
+    switch (t) {
+    case detail_type::fin_plate: return "fin plate";
+    case detail_type::web_cleats: return "cleat";
+    case detail_type::end_plate: return "end plate";
+    case detail_type::custom: return "fitting";
+    }
+    return "fitting";
+}
+
+detailing_finding not_applicable(std::string id, std::string rule, std::string source, std::string why)
+{
+    detailing_finding f;
+    f.id = std::move(id);
+    f.status = finding_status::not_applicable;
+    f.rule = std::move(rule);
+    f.source = std::move(source);
+    f.message = std::move(why);
+    return f;
+}
+
+detailing_finding at_least(std::string id, double value, double limit, dimension unit, std::string rule,
+                           std::string source, const std::string& what)
+{
+    detailing_finding f;
+    f.id = std::move(id);
+    f.value = value;
+    f.limit = limit;
+    f.unit = unit;
+    f.rule = std::move(rule);
+    f.source = std::move(source);
+    const bool ok = value >= limit * (1 - rel);
+    f.status = ok ? finding_status::pass : finding_status::warn;
+    const auto show = [&](double v) { return unit == dims::length ? length_text(v) : ratio_text(v); };
+    f.message = what + " " + show(value) + (ok ? " is at least " : " is less than ") + show(limit) + ": " + f.rule;
+    return f;
+}
+
+detailing_finding at_most(std::string id, double value, double limit, dimension unit, std::string rule,
+                          std::string source, const std::string& what)
+{
+    detailing_finding f;
+    f.id = std::move(id);
+    f.value = value;
+    f.limit = limit;
+    f.unit = unit;
+    f.rule = std::move(rule);
+    f.source = std::move(source);
+    const bool ok = value <= limit * (1 + rel);
+    f.status = ok ? finding_status::pass : finding_status::warn;
+    const auto show = [&](double v) { return unit == dims::length ? length_text(v) : ratio_text(v); };
+    f.message = what + " " + show(value) + (ok ? " is at most " : " exceeds ") + show(limit) + ": " + f.rule;
+    return f;
+}
+
+detailing_finding min_gap(const connection_detail& d)
+{
+    const std::string rule = "the gap between the beam end and the support face should be at least 10 mm";
+    const std::string source =
+        "10 mm is the usual gap of fin plate and cleat joints (SCI P212, from memory); the deep, many-row fin plates "
+        "of the P212 tables need 20 mm (SCI P212)";
+    if (d.type == detail_type::end_plate)
+        return not_applicable("min-gap", rule, source,
+                              "the flanges of an end-plate beam stand the plate thickness clear of the face; see "
+                              "end-plate-thickness and the closure check");
+    auto f = at_least("min-gap", d.gap, 10 * mm, dims::length, rule, source, "gap as detailed");
+    f.message += " (worst case with the tolerance: " + length_text(d.worst_case_gap()) + ")";
+    return f;
+}
+
+detailing_finding plate_depth(const connection_detail& d, const section& beam)
+{
+    const std::string rule = "the " + fitting_name(d.type) +
+                             " depth should be at least 0.6 x the beam depth, for nominal torsional restraint";
+    if (d.type == detail_type::custom)
+        return not_applicable("plate-depth", rule, sbe_fin, "a custom detail gives no fitting");
+    const char* source = d.type == detail_type::fin_plate ? sbe_fin : d.type == detail_type::end_plate ? sbe_end
+                                                                                                       : sbe_cleats;
+    return at_least("plate-depth", d.plate_depth, 0.6 * beam.depth, dims::length, rule, source,
+                    fitting_name(d.type) + " depth");
+}
+
+detailing_finding plate_ductility(const connection_detail& d, const section& beam)
+{
+    const double dia = d.bolts.diameter;
+    if (d.type == detail_type::fin_plate) {
+        const bool s355 = d.grade == plate_grade::s355;
+        const double k = s355 ? 0.42 : 0.5;
+        const std::string rule =
+            std::string("for ductility (bearing deformation before bolt shear failure), the fin plate or the beam web "
+                        "should be no thicker than ") +
+            (s355 ? "0.42" : "0.5") + " x the bolt diameter; the rule assumes " + (s355 ? "S355" : "S275") + " steel";
+        const std::string source = s355 ? std::string(sbe_fin) + " for 0.5 d in S275; 0.42 d for S355 from memory"
+                                        : std::string(sbe_fin) + "; the ductility reason from memory";
+        // The thinner of the two decides: either one deforming in bearing gives the rotation.
+        double t = d.plate_thickness;
+        std::string what = "fin plate thickness";
+        if (beam.web_thickness && *beam.web_thickness < t) {
+            t = *beam.web_thickness;
+            what = "beam web thickness (the fin plate, " + length_text(d.plate_thickness) + ", is thicker)";
+        }
+        auto f = at_most("plate-ductility", t, k * dia, dims::length, rule, source, what);
+        if (!beam.web_thickness) f.message += " (the section gives no web thickness; only the plate was checked)";
+        return f;
+    }
+    if (d.type == detail_type::end_plate) {
+        const std::string rule = "for ductility the end plate should be no thicker than about 0.5 x the bolt diameter "
+                                 "(10 mm with M20, 12 mm with M24); the rule assumes S275 steel";
+        return at_most("plate-ductility", d.plate_thickness, 0.5 * dia, dims::length, rule,
+                       "SCI P358 Simple joints to Eurocode 3, end plate thickness for the bolt size; from memory",
+                       "end plate thickness");
+    }
+    return not_applicable("plate-ductility", "no thickness-to-bolt rule is applied to this detail type",
+                          "common practice, no source",
+                          d.type == detail_type::web_cleats
+                              ? "thin cleats and large cross-centres give flexibility (Steel Buildings in Europe, Part 5); no limit applied"
+                              : "a custom detail gives no fitting");
+}
+
+detailing_finding bolt_hole_clearance(const connection_detail& d)
+{
+    const std::string rule = "bolts should sit in normal clearance holes, d0 = d + 2 mm up to M24 and d + 3 mm above, "
+                             "so that slip and hole bearing give the joint its rotation";
+    const std::string source = std::string(sbe_end) + " for the hole sizes; 8.8 bolts untorqued in clearance holes: " +
+                               sbe_fin;
+    if (d.type == detail_type::custom)
+        return not_applicable("bolt-hole-clearance", rule, source, "a custom detail gives no bolts");
+    detailing_finding f;
+    f.id = "bolt-hole-clearance";
+    f.rule = rule;
+    f.source = source;
+    f.unit = dims::length;
+    const double dia = d.bolts.diameter;
+    const double normal = dia <= 24 * mm + 1e-9 ? 2 * mm : 3 * mm;
+    const double c = d.bolts.hole_diameter - dia;
+    f.value = c;
+    f.limit = normal;
+    const std::string found = "hole clearance " + length_text(c) + " (hole " + length_text(d.bolts.hole_diameter) +
+                              ", bolt " + length_text(dia) + ")";
+    if (std::abs(c - normal) <= 0.01 * mm) {
+        f.status = finding_status::pass;
+        f.message = found + " is the normal clearance: " + rule;
+    } else if (c < normal) {
+        f.status = finding_status::warn;
+        f.message = found + " is less than the normal " + length_text(normal) +
+                    ": close-fitting bolts make the joint stiffer and less able to rotate than assumed; " + rule;
+    } else {
+        f.status = finding_status::warn;
+        f.message = found + " is more than the normal " + length_text(normal) +
+                    ": oversize holes lie outside the standard detail and slip more; " + rule;
+    }
+    return f;
+}
+
+detailing_finding bolt_edge_distance(const connection_detail& d)
+{
+    const std::string rule = "the end and edge distances of the fin plate bolts should be at least 2 x the bolt diameter";
+    if (d.type != detail_type::fin_plate)
+        return not_applicable("bolt-edge-distance", rule, sbe_fin, "applies to fin plates");
+    const double top = d.bolts.first_bolt;
+    const double bottom = d.plate_depth - d.bolts.first_bolt - (d.bolts.rows - 1) * d.bolts.pitch;
+    const double e = std::min(top, bottom);
+    auto f = at_least("bolt-edge-distance", e, 2 * d.bolts.diameter, dims::length, rule, sbe_fin,
+                      std::string("vertical end distance of the fin plate bolts (") +
+                          (top <= bottom ? "top" : "bottom") + " of the plate)");
+    f.message += "; the horizontal edge distance of the plate is not given and not checked";
+    return f;
+}
+
+detailing_finding long_fin_plate(const connection_detail& d)
+{
+    const std::string rule = "a fin plate is long when tp / z < 0.15, z being the distance from the support face to "
+                             "the bolt line; a long fin plate must be checked for lateral-torsional buckling";
+    const std::string source = std::string(sbe_fin) + "; z as the support face to bolt line distance from memory";
+    if (d.type != detail_type::fin_plate)
+        return not_applicable("long-fin-plate", rule, source, "applies to fin plates");
+    const double z = d.gap + d.bolts.bolt_line;
+    auto f = at_least("long-fin-plate", d.plate_thickness / z, 0.15, dims::dimensionless, rule, source,
+                      "tp / z = " + length_text(d.plate_thickness) + " / " + length_text(z) + " =");
+    return f;
+}
+
+detailing_finding end_plate_thickness(const connection_detail& d)
+{
+    const std::string rule = "a partial-depth end plate should be 10 or 12 mm thick; less than 8 mm is not advised";
+    if (d.type != detail_type::end_plate)
+        return not_applicable("end-plate-thickness", rule, sbe_end, "applies to end plates");
+    return at_least("end-plate-thickness", d.plate_thickness, 8 * mm, dims::length, rule, sbe_end,
+                    "end plate thickness");
+}
+
+}  // namespace
+
+std::string to_string(finding_status s)
+{
+    switch (s) {
+    case finding_status::pass: return "pass";
+    case finding_status::warn: return "warn";
+    case finding_status::not_applicable: return "not-applicable";
+    }
+    return "not-applicable";
+}
+
+std::vector<detailing_finding> check_detailing_rules(const connection_detail& detail, const section& beam)
+{
+    return {min_gap(detail),           plate_depth(detail, beam),   plate_ductility(detail, beam),
+            bolt_hole_clearance(detail), bolt_edge_distance(detail), long_fin_plate(detail),
+            end_plate_thickness(detail)};
+}
+
+}  // namespace pinproof
