@@ -385,7 +385,7 @@ void assess_details(const beam& b, beam_assessment& a, bool find_min_gap)
         d.demand_sagging = all.sagging + j.support_rotation;
         d.demand_hogging = all.hogging > 0 ? all.hogging + j.support_rotation : 0.0;
         d.demand_combination = all.sagging >= all.hogging ? all.sagging_combination : all.hogging_combination;
-        d.strength_demand_sagging = strength.sagging + (strength.sagging > 0 ? j.support_rotation : 0.0);
+        d.strength_demand_sagging = strength.sagging + j.support_rotation;
         d.strength_demand_hogging = strength.hogging > 0 ? strength.hogging + j.support_rotation : 0.0;
         d.strength_combination =
             strength.sagging >= strength.hogging ? strength.sagging_combination : strength.hogging_combination;

@@ -167,39 +167,6 @@ beam_model::load_state beam_model::integrate(const std::vector<load>& loads, dou
     return out;
 }
 
-std::array<double, 2> beam_model::end_moments(stiffness start, stiffness end) const
-{
-    // Unknown hogging moments m. For each end j, one equation:
-    //   pin    : m_j = 0
-    //   rigid  : rotation_j = 0          -> F_j . m = rot0_j
-    //   spring : m_j = S_j rotation_j    -> (F_jj + 1/S_j) m_j + F_jk m_k = rot0_j
-    // A soft spring's row is multiplied through by S_j so that no term is huge:
-    //   (1 + S_j F_jj) m_j + S_j F_jk m_k = S_j rot0_j.
-    const stiffness joints[2] = {start, end};
-    double a[2][2], b[2];
-    for (int j = 0; j < 2; ++j) {
-        const int k = 1 - j;
-        const stiffness s = joints[j];
-        if (s.is_pinned()) {
-            a[j][j] = 1.0;
-            a[j][k] = 0.0;
-            b[j] = 0.0;
-        } else if (s.is_rigid() || s.value() * flex_[j][j] >= 1.0) {
-            const double compliance = s.is_rigid() ? 0.0 : 1.0 / s.value();
-            a[j][j] = flex_[j][j] + compliance;
-            a[j][k] = flex_[j][k];
-            b[j] = rot0_[j];
-        } else {
-            a[j][j] = 1.0 + s.value() * flex_[j][j];
-            a[j][k] = s.value() * flex_[j][k];
-            b[j] = s.value() * rot0_[j];
-        }
-    }
-    const double det = a[0][0] * a[1][1] - a[0][1] * a[1][0];
-    if (!(std::abs(det) > 0.0) || !finite(det)) throw internal_error("end-spring system is singular");
-    return {(b[0] * a[1][1] - a[0][1] * b[1]) / det, (a[0][0] * b[1] - a[1][0] * b[0]) / det};
-}
-
 beam_state beam_model::solve(stiffness start, stiffness end) const
 {
     const auto m = end_moments(start, end);

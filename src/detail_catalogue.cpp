@@ -37,12 +37,15 @@ std::optional<catalogue_stiffness> read_bound(const json& v, const std::string& 
             out.form = catalogue_stiffness::kind::rigid;
             return out;
         }
-        const std::string rel = "EI/L";
-        if (t.size() >= rel.size() && t.compare(t.size() - rel.size(), rel.size(), rel) == 0) {
-            const std::string num = trimmed(t.substr(0, t.size() - rel.size()));
-            char* end = nullptr;
-            const double k = std::strtod(num.c_str(), &end);
-            const bool ok = !num.empty() && end == num.c_str() + num.size() && std::isfinite(k) && k >= 0;
+        std::optional<double> relative;
+        bool ok = true;
+        try {
+            relative = json_fields::multiple_of_EI_over_L(t);
+        } catch (const std::invalid_argument&) {
+            ok = false;
+        }
+        if (!ok || relative) {
+            const double k = relative.value_or(0.0);
             if (!ok) {
                 problems.add(ptr, "expected a non-negative multiple of EI/L such as \"0.5 EI/L\", found " + shown(v));
                 return std::nullopt;

@@ -1,5 +1,7 @@
 #include "pinproof/errors.hpp"
 
+#include <algorithm>
+
 namespace pinproof {
 namespace {
 std::string summary(const std::vector<input_problem>& problems)
@@ -11,8 +13,8 @@ std::string summary(const std::vector<input_problem>& problems)
 }
 }  // namespace
 
-input_error::input_error(std::vector<input_problem> problems)
-    : error(summary(problems)), problems_(std::move(problems))
+input_error::input_error(std::vector<input_problem> problems, std::size_t total)
+    : error(summary(problems)), problems_(std::move(problems)), total_(std::max(total, problems_.size()))
 {
 }
 
@@ -42,7 +44,7 @@ void problem_list::throw_if_any() const
     if (count_ > listed.size())
         listed.push_back({"(input)", "and " + std::to_string(count_ - listed.size()) +
                                          " more problems not listed; correct the ones above first"});
-    throw input_error(listed);
+    throw input_error(listed, count_);
 }
 
 }  // namespace pinproof

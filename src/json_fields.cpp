@@ -1,5 +1,6 @@
 #include "json_fields.hpp"
 
+#include <cctype>
 #include <cmath>
 #include <stdexcept>
 
@@ -154,6 +155,20 @@ std::optional<bool> bool_field(const json& obj, const std::string& pointer, cons
         return std::nullopt;
     }
     return v->get<bool>();
+}
+
+std::optional<double> multiple_of_EI_over_L(const std::string& text)
+{
+    std::size_t b = 0, e = text.size();
+    while (b < e && std::isspace(static_cast<unsigned char>(text[b]))) ++b;
+    while (e > b && std::isspace(static_cast<unsigned char>(text[e - 1]))) --e;
+    const std::string t = text.substr(b, e - b);
+    const std::string rel = "EI/L";
+    if (t.size() < rel.size() || t.compare(t.size() - rel.size(), rel.size(), rel) != 0) return std::nullopt;
+    const pinproof::quantity k = parse_quantity(t.substr(0, t.size() - rel.size()));
+    if (k.dim != dims::dimensionless || !(k.value >= 0))
+        throw std::invalid_argument("expected a non-negative number before EI/L");
+    return k.value;
 }
 
 bool expect_object(const json& value, const std::string& pointer, problem_list& problems)

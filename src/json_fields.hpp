@@ -55,6 +55,12 @@ std::optional<long long> integer_field(const json& obj, const std::string& point
 std::optional<bool> bool_field(const json& obj, const std::string& pointer, const std::string& key,
                                bool required, problem_list& problems);
 
+// The multiple k of a stiffness written relative to the beam, "k EI/L"
+// ("0.5 EI/L" -> 0.5). nullopt when the text does not end in "EI/L". Throws
+// std::invalid_argument when it does but k is not a plain non-negative decimal
+// number (no hexadecimal, nan or inf: the rules of parse_quantity).
+std::optional<double> multiple_of_EI_over_L(const std::string& text);
+
 // Checks that `value` is a JSON object; adds a problem if not.
 bool expect_object(const json& value, const std::string& pointer, problem_list& problems);
 

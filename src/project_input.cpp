@@ -160,15 +160,17 @@ struct reader {
             while (b < t.size() && std::isspace(static_cast<unsigned char>(t[b]))) ++b;
             t = t.substr(b);
             if (t == "rigid") return stiffness::rigid();
-            const std::string rel = "EI/L";
-            if (t.size() >= rel.size() && t.compare(t.size() - rel.size(), rel.size(), rel) == 0) {
-                const std::string num = t.substr(0, t.size() - rel.size());
-                const auto k = plain_number(num);
-                if (!k || *k < 0) {
-                    problems.add(ptr, "expected a non-negative multiple of EI/L such as \"0.5 EI/L\", found \"" +
-                                          v.get<std::string>() + "\"");
-                    return std::nullopt;
-                }
+            std::optional<double> k;
+            bool relative = false;
+            try {
+                k = multiple_of_EI_over_L(t);
+                relative = k.has_value();
+            } catch (const std::invalid_argument&) {
+                problems.add(ptr, "expected a non-negative multiple of EI/L such as \"0.5 EI/L\", found \"" +
+                                      v.get<std::string>() + "\"");
+                return std::nullopt;
+            }
+            if (relative) {
                 if (!EI_over_L) return std::nullopt;  // span, E or I already reported
                 if (!(*k * *EI_over_L <= plausible_stiffness)) {
                     problems.add(ptr, "expected a rotational stiffness of at most " +
@@ -513,12 +515,12 @@ struct reader {
             reject_unknown_keys(*lim, child(ptr, "limits"), {"deflection"}, problems);
             out.deflection = read_deflection_limit(*lim, child(ptr, "limits"));
         }
+        out.stiffness_correlation = read_stiffness_correlation(b, ptr, problems).value_or(1);
         if (!id || !span || !E || !sec || !js || !je) return std::nullopt;
         out.id = *id;
         out.span = *span;
         out.E = *E;
         out.E_is_default = !b.contains("E");
-        out.stiffness_correlation = read_stiffness_correlation(b, ptr, problems).value_or(1);
         out.sec = *sec;
         out.loads = std::move(loads);
         out.combinations = std::move(combos);

@@ -166,13 +166,15 @@ std::optional<double> read_positive_stiffness(const json& obj, const std::string
     if (it->is_string()) {
         std::string t = it->get<std::string>();
         while (!t.empty() && std::isspace(static_cast<unsigned char>(t.back()))) t.pop_back();
-        const std::string rel = "EI/L";
-        if (t.size() >= rel.size() && t.compare(t.size() - rel.size(), rel.size(), rel) == 0) {
-            const std::string num = t.substr(0, t.size() - rel.size());
-            char* end = nullptr;
-            const double k = std::strtod(num.c_str(), &end);
-            bool ok = end != num.c_str() && std::isfinite(k);
-            while (ok && end && *end) ok = std::isspace(static_cast<unsigned char>(*end++));
+        std::optional<double> relative;
+        bool ok = true;
+        try {
+            relative = json_fields::multiple_of_EI_over_L(t);
+        } catch (const std::invalid_argument&) {
+            ok = false;
+        }
+        if (!ok || relative) {
+            const double k = relative.value_or(0.0);
             if (!ok || !(k > 0)) {
                 problems.add(p, "expected a positive multiple of EI/L such as \"0.5 EI/L\", found " + shown(*it));
                 return std::nullopt;
@@ -192,6 +194,12 @@ std::optional<double> read_positive_stiffness(const json& obj, const std::string
                 problems.add(pr.where, pr.message + " (multiples such as \"0.5 EI/L\" are accepted too)");
             return std::nullopt;
         }
+    }
+    // The same ceiling as every other stiffness (src/project_input.cpp): "rigid"
+    // is the way to write a fixed end.
+    if (*v > 1e40) {
+        problems.add(p, "expected a rotational stiffness of at most 1e40 N*m/rad, found " + shown(*it));
+        return std::nullopt;
     }
     if (!(*v > 0)) {
         problems.add(p, "expected a positive rotational stiffness, found " + shown(*it));

@@ -23,8 +23,10 @@
 #pragma once
 
 #include <array>
+#include <cmath>
 #include <vector>
 
+#include "pinproof/errors.hpp"
 #include "pinproof/loads.hpp"
 #include "pinproof/sign_conventions.hpp"
 #include "pinproof/stiffness.hpp"
@@ -112,5 +114,30 @@ private:
     double total_force_ = 0, total_moment_about_start_ = 0, load_scale_ = 0;
     std::array<double, 6> closure_{};  // shear and moment closure of the three states
 };
+
+// Defined here so that a sweep over many stiffness pairs can inline it.
+inline std::array<double, 2> beam_model::end_moments(stiffness start, stiffness end) const
+{
+    // Unknown hogging moments m. For each end j (other end k), one equation:
+    //   spring or pin: m_j = S_j rotation_j, written for a soft spring as
+    //                  (1 + S_j F_jj) m_j + S_j F_jk m_k = S_j rot0_j   (a pin, S_j = 0, gives m_j = 0)
+    //   stiff spring:  (F_jj + 1/S_j) m_j + F_jk m_k = rot0_j           (divided through by S_j)
+    //   rigid:         F_jj m_j + F_jk m_k = rot0_j                     (rotation_j = 0 exactly)
+    // so that no term is huge; the form is chosen by S_j F_jj.
+    const stiffness joints[2] = {start, end};
+    double a[2][2], b[2];
+    for (int j = 0; j < 2; ++j) {
+        const int k = 1 - j;
+        const double S = joints[j].value();
+        const bool compliance_form = joints[j].is_rigid() || S * flex_[j][j] >= 1.0;
+        const double compliance = joints[j].is_rigid() ? 0.0 : (compliance_form ? 1.0 / S : 0.0);
+        a[j][j] = compliance_form ? flex_[j][j] + compliance : 1.0 + S * flex_[j][j];
+        a[j][k] = compliance_form ? flex_[j][k] : S * flex_[j][k];
+        b[j] = compliance_form ? rot0_[j] : S * rot0_[j];
+    }
+    const double det = a[0][0] * a[1][1] - a[0][1] * a[1][0];
+    if (!(std::abs(det) > 0.0) || !std::isfinite(det)) throw internal_error("end-spring system is singular");
+    return {(b[0] * a[1][1] - a[0][1] * b[1]) / det, (a[0][0] * b[1] - a[1][0] * b[0]) / det};
+}
 
 }  // namespace pinproof

@@ -26,12 +26,15 @@ struct input_problem {
 
 class input_error : public error {
 public:
-    explicit input_error(std::vector<input_problem> problems);
+    explicit input_error(std::vector<input_problem> problems, std::size_t total = 0);
     input_error(std::string where, std::string message);
     const std::vector<input_problem>& problems() const noexcept { return problems_; }
+    // How many problems were found; more than problems().size() when the list was cut short.
+    std::size_t total() const noexcept { return total_; }
 
 private:
     std::vector<input_problem> problems_;
+    std::size_t total_ = 0;
 };
 
 class internal_error : public error {

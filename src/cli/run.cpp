@@ -24,7 +24,7 @@ const char* const version = PINPROOF_VERSION;
 
 void report_input_error(const input_error& e, std::ostream& err)
 {
-    err << "pinproof: the input has " << e.problems().size() << " problem" << (e.problems().size() == 1 ? "" : "s")
+    err << "pinproof: the input has " << e.total() << " problem" << (e.total() == 1 ? "" : "s")
         << "; nothing was written.\n";
     for (const auto& p : e.problems()) err << "error: " << p.where << ": " << p.message << "\n";
 }

@@ -99,19 +99,7 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
         }
         if (!b) throw input_error("--beam", "expected one of the beam ids (" + known + "), found \"" + o.beam_id + "\"");
     }
-    // The distributions are read from the document itself.
-    stiffness_uncertainty uncertainty;
-    {
-        std::ifstream in(o.file, std::ios::binary);
-        std::stringstream text;
-        text << in.rdbuf();
-        const auto document = nlohmann::json::parse(text.str(), nullptr, false);
-        if (!document.is_discarded()) {
-            problem_list problems;
-            uncertainty = read_stiffness_uncertainty(document, *b, problems);
-            problems.throw_if_any();
-        }
-    }
+    const stiffness_uncertainty uncertainty{b->start.distribution, b->end.distribution, b->stiffness_correlation};
 
     sweep_settings settings;
     settings.points = o.points;
