@@ -5,6 +5,7 @@
 #include <sstream>
 
 #include "pinproof/result_fields.hpp"
+#include "pinproof/failure_probability.hpp"
 #include "pinproof/threshold.hpp"
 
 namespace pinproof {
@@ -185,7 +186,13 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
     }
 
     o << "\n  Checks\n";
+    int hidden = 0;
     for (const auto& c : a.checks) {
+        // Detailing rules that do not apply to this kind of detail are in the JSON result only.
+        if (c.status == check_status::not_applicable && c.id.rfind("detailing-", 0) == 0) {
+            ++hidden;
+            continue;
+        }
         std::string vl;
         if (c.value) {
             const bool ratio = c.dim == dims::dimensionless;
@@ -195,10 +202,31 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
         o << "    " << pad(status_word(c.status), 6) << pad(c.id + "  ", 38) << vl << "\n";
         o << "          " << wrap(c.message, 88, "          ") << "\n";
     }
+    if (hidden > 0)
+        o << "    (" << hidden << " detailing rule" << (hidden == 1 ? " does" : "s do")
+          << " not apply to these details and " << (hidden == 1 ? "is" : "are") << " not listed)\n";
     const auto thresholds = threshold_report_lines(p, b);
     if (!thresholds.empty()) {
-        o << "\n  Thresholds (stiffness where a check changes its answer, both joints together)\n";
-        for (const auto& line : thresholds) o << "    " << wrap(line, 94, "      ") << "\n";
+        o << "\n  Thresholds (the stiffness, both joints together, at which a check changes its answer)\n";
+        for (const auto& line : thresholds)
+            if (line.rfind("Stiffness thresholds", 0) != 0) o << "    " << wrap(line, 94, "      ") << "\n";
+    }
+    if (b.start.distribution || b.end.distribution) {
+        const stiffness_uncertainty unc{b.start.distribution, b.end.distribution, b.stiffness_correlation};
+        const auto probabilities = failure_probabilities(p, b, unc);
+        o << "\n  Probability that a check does not pass, over the stiffness distribution"
+          << (b.start.distribution && b.end.distribution
+                  ? (b.stiffness_correlation == 1 ? "s (ends fully correlated)" : "s (ends independent)")
+                  : " of the " + std::string(b.start.distribution ? "start" : "end") + " joint")
+          << "\n";
+        for (const auto& f : probabilities) {
+            if (f.p_fail <= 0.0) continue;
+            o << "    " << pad(f.check + "  ", 38) << "P = " << format_number(f.p_fail, 3) << " (error "
+              << format_number(f.error, 1) << ")\n" << "      " << wrap(f.method, 92, "      ") << "\n";
+        }
+        if (std::none_of(probabilities.begin(), probabilities.end(),
+                         [](const failure_probability& f) { return f.p_fail > 0.0; }))
+            o << "    no check fails anywhere in the distribution\n";
     }
     const auto failed = std::count_if(a.checks.begin(), a.checks.end(),
                                       [](const check& c) { return c.status == check_status::fail; });

@@ -103,7 +103,7 @@ std::string many_rows(int n)
 
 }  // namespace
 
-TEST_CASE("batch: pinned ends give theta = wL^3/(24EI) at 1.35G+1.5Q [R8.1 and EN1990]; tol 1e-9")
+TEST_CASE("batch: pinned ends give theta = wL^3/(24EI) at 1.35G+1.5Q [R8.1 and EN1990] - tol 1e-9")
 {
     const schedule s = parse_schedule("id,span,section,g,q,start,end\nB1,6 m,IPE 300,8 kN/m,5 kN/m,PIN,PIN\n");
     const batch_row r = assess_schedule_row(s, 0, test_details(), {});
@@ -116,7 +116,7 @@ TEST_CASE("batch: pinned ends give theta = wL^3/(24EI) at 1.35G+1.5Q [R8.1 and E
     CHECK(r.closure_rotation_start == std::nullopt);
 }
 
-TEST_CASE("batch: rigid ends attract M = wL^2/12 at 1.2D+1.6L [R8.1 and ASCE7]; tol 1e-9")
+TEST_CASE("batch: rigid ends attract M = wL^2/12 at 1.2D+1.6L [R8.1 and ASCE7] - tol 1e-9")
 {
     const schedule s =
         parse_schedule("id,span,section,g,q,start,end,combinations\nB1,8 m,IPE 400,6 kN/m,4 kN/m,FIX,FIX,ASCE7\n");
@@ -130,7 +130,7 @@ TEST_CASE("batch: rigid ends attract M = wL^2/12 at 1.2D+1.6L [R8.1 and ASCE7]; 
     CHECK_FALSE(r.worst_ratio.has_value());
 }
 
-TEST_CASE("batch: a schedule beam gives the same checks as the same beam in a project file [PF]; exact")
+TEST_CASE("batch: a schedule beam gives the same checks as the same beam in a project file [PF] - exact")
 {
     const schedule s = parse_schedule("id,span,section,g,q,start,end,deflection_limit\n"
                                       "B1,6.5 m,IPE 330,9 kN/m,6 kN/m,FP-3-M20,SL,span/360\n");
@@ -199,7 +199,7 @@ TEST_CASE("batch: a bad row is refused and the others are checked [common practi
     CHECK(csv.find("inf") == std::string::npos);
 }
 
-TEST_CASE("batch: results keep the input order with 2 jobs and equal those of 1 job [common practice and no source]; exact")
+TEST_CASE("batch: results keep the input order with 2 jobs and equal those of 1 job [common practice and no source] - exact")
 {
     const schedule s = parse_schedule(many_rows(300));
     batch_options one, two;

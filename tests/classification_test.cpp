@@ -20,14 +20,14 @@ constexpr double EI = 1.7548e7, L = 6.0;
 stiffness at_ratio(double kappa) { return stiffness::spring(kappa * EI / L); }
 }  // namespace
 
-TEST_CASE("EN 1993-1-8 5.2.2.5(1): k_b = 8 braced; 25 unbraced (pack 1.1 trap)")
+TEST_CASE("EN 1993-1-8 5.2.2.5(1): k_b = 8 braced - 25 unbraced (pack 1.1 trap)")
 {
     CHECK(en_rigid_limit(frame_bracing::braced) == 8.0);
     CHECK(en_rigid_limit(frame_bracing::unbraced) == 25.0);
     CHECK(en_pinned_limit == 0.5);
 }
 
-TEST_CASE("EN 1993-1-8 nominally pinned boundary 0.5: at; below; above")
+TEST_CASE("EN 1993-1-8 nominally pinned boundary 0.5: at - below - above")
 {
     const auto f = frame_bracing::braced;
     CHECK(classify_en(at_ratio(0.5), EI, L, f) == en_joint_class::nominally_pinned);
@@ -36,7 +36,7 @@ TEST_CASE("EN 1993-1-8 nominally pinned boundary 0.5: at; below; above")
     CHECK(classify_en(stiffness::pinned(), EI, L, f) == en_joint_class::nominally_pinned);
 }
 
-TEST_CASE("EN 1993-1-8 rigid boundary k_b: at; below; above; braced and unbraced")
+TEST_CASE("EN 1993-1-8 rigid boundary k_b: at - below - above - braced and unbraced")
 {
     for (auto [f, kb] : {std::pair{frame_bracing::braced, 8.0}, std::pair{frame_bracing::unbraced, 25.0}}) {
         CAPTURE(kb);
@@ -48,7 +48,7 @@ TEST_CASE("EN 1993-1-8 rigid boundary k_b: at; below; above; braced and unbraced
     CHECK(classify_en(at_ratio(10.0), EI, L, frame_bracing::unbraced) == en_joint_class::semi_rigid);
 }
 
-TEST_CASE("AISC 360-16 Commentary B3.4 boundaries 2 and 20: at; below; above")
+TEST_CASE("AISC 360-16 Commentary B3.4 boundaries 2 and 20: at - below - above")
 {
     CHECK(classify_aisc(at_ratio(2.0), EI, L) == aisc_joint_class::simple);
     CHECK(classify_aisc(at_ratio(2.0 * (1 - 1e-9)), EI, L) == aisc_joint_class::simple);

@@ -104,7 +104,7 @@ TEST_CASE("fin plate defaults")
     CHECK_FALSE(d.centre_of_rotation.has_value());
 }
 
-TEST_CASE("fields as given, in units")
+TEST_CASE("fields as given - in units")
 {
     const auto r = read(R"({"type": "fin-plate", "gap": "12 mm", "gap_tolerance": "3 mm", "plate_top": "60 mm",
         "plate_depth": "230 mm", "plate_thickness": "8 mm", "bolt_diameter": "24 mm", "bolt_rows": 3,
@@ -127,7 +127,7 @@ TEST_CASE("fields as given, in units")
     CHECK(d.centre_of_rotation->below_top == doctest::Approx(175 * mm));
 }
 
-TEST_CASE("rows from a given plate depth, and hole for a larger bolt")
+TEST_CASE("rows from a given plate depth - and hole for a larger bolt")
 {
     // [SBE] hole d + 3 mm above M24.
     const auto r = read(R"({"type": "web-cleats", "cleat_depth": "200 mm", "bolt_diameter": "27 mm"})");

@@ -55,7 +55,7 @@ const char* const small_catalogue = R"({
 
 }  // namespace
 
-TEST_CASE("catalogue: absolute stiffness and moment resistance in SI [SI prefixes k and M]; exact")
+TEST_CASE("catalogue: absolute stiffness and moment resistance in SI [SI prefixes k and M] - exact")
 {
     const detail_catalogue c = parse_detail_catalogue(small_catalogue);
     REQUIRE(c.details.size() == 4);
@@ -73,7 +73,7 @@ TEST_CASE("catalogue: absolute stiffness and moment resistance in SI [SI prefixe
     CHECK(c.find("fp-3-m20") == nullptr);  // ids match exactly
 }
 
-TEST_CASE("catalogue: relative stiffness resolved per beam as k EI/L [EN 1993-1-8 5.2.2.5]; tol 1e-12")
+TEST_CASE("catalogue: relative stiffness resolved per beam as k EI/L [EN 1993-1-8 5.2.2.5] - tol 1e-12")
 {
     const detail_catalogue c = parse_detail_catalogue(small_catalogue);
     const catalogue_detail* d = c.find("SL-1");
@@ -89,7 +89,7 @@ TEST_CASE("catalogue: relative stiffness resolved per beam as k EI/L [EN 1993-1-
     CHECK(joint_for_beam(*c.find("P"), 1e7, 6).range.max.is_pinned());
 }
 
-TEST_CASE("catalogue: the shipped example reads without problems [common practice and no source]; exact")
+TEST_CASE("catalogue: the shipped example reads without problems [common practice and no source] - exact")
 {
     const detail_catalogue c =
         load_detail_catalogue_file(std::string(PINPROOF_SOURCE_DIR) + "/catalog-examples/details-harbour-lane.json");
@@ -137,7 +137,7 @@ TEST_CASE("catalogue: a file's problems name the file and the pointer [RFC 6901 
     }
 }
 
-TEST_CASE("catalogue: a project joint given by detail id equals the same joint written inline [same reader]; exact")
+TEST_CASE("catalogue: a project joint given by detail id equals the same joint written inline [same reader] - exact")
 {
     const detail_catalogue c = parse_detail_catalogue(small_catalogue);
     const auto project_text = [](const std::string& start, const std::string& end) {

@@ -64,7 +64,7 @@ std::map<std::string, std::vector<double>> text_rows(const std::string& svg)
 
 }  // namespace
 
-TEST_CASE("exaggeration factor: round, near the shown rotation, short of the closure")
+TEST_CASE("exaggeration factor: round - near the shown rotation - short of the closure")
 {
     closure c;
     c.rotation = 0.0675;
@@ -77,7 +77,7 @@ TEST_CASE("exaggeration factor: round, near the shown rotation, short of the clo
     CHECK(drawing_exaggeration(0.2, none, 0.1) == 1);
 }
 
-TEST_CASE("the drawing states its factor, the closure and the review note")
+TEST_CASE("the drawing states its factor - the closure and the review note")
 {
     const auto d = fin_plate();
     const auto g = build_geometry(d, ipe300());
@@ -95,7 +95,7 @@ TEST_CASE("the drawing states its factor, the closure and the review note")
     CHECK(svg.find("inf") == std::string::npos);
 }
 
-TEST_CASE("labels do not overlap, at either end and in either sense")
+TEST_CASE("labels do not overlap - at either end and in either sense")
 {
     auto d = fin_plate();
     d.support = support_type::beam_web;

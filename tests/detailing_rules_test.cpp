@@ -67,7 +67,7 @@ detailing_finding rule(const connection_detail& d, const std::string& id, const 
 
 }  // namespace
 
-TEST_CASE("every rule is reported once, with its rule and source stated")
+TEST_CASE("every rule is reported once - with its rule and source stated")
 {
     const auto all = check_detailing_rules(fin_plate(), ipe300());
     CHECK(all.size() == 7);
@@ -78,7 +78,7 @@ TEST_CASE("every rule is reported once, with its rule and source stated")
     }
 }
 
-TEST_CASE("min-gap: 10 mm [P212, from memory]")
+TEST_CASE("min-gap: 10 mm [P212 - from memory]")
 {
     auto d = fin_plate();
     CHECK(rule(d, "min-gap").status == finding_status::pass);  // at the limit
@@ -95,7 +95,7 @@ TEST_CASE("min-gap: 10 mm [P212, from memory]")
     CHECK(rule(e, "min-gap").status == finding_status::not_applicable);
 }
 
-TEST_CASE("plate-depth: hp >= 0.6 hb [SBE fin], [SBE end]")
+TEST_CASE("plate-depth: hp >= 0.6 hb [SBE fin] - [SBE end]")
 {
     auto d = fin_plate();
     CHECK(rule(d, "plate-depth").status == finding_status::pass);  // 180 = 0.6 x 300
@@ -112,7 +112,7 @@ TEST_CASE("plate-depth: hp >= 0.6 hb [SBE fin], [SBE end]")
     CHECK(rule(d, "plate-depth").status == finding_status::not_applicable);
 }
 
-TEST_CASE("plate-ductility: fin plate or web no thicker than 0.5 d in S275 [SBE fin], 0.42 d in S355 (from memory)")
+TEST_CASE("plate-ductility: fin plate or web no thicker than 0.5 d in S275 [SBE fin] - 0.42 d in S355 (from memory)")
 {
     auto d = fin_plate();
     // The IPE 300 web (7.1 mm) is thinner than 0.5 x 20 = 10 mm: passes whatever the plate.
@@ -158,7 +158,7 @@ TEST_CASE("plate-ductility: fin plate or web no thicker than 0.5 d in S275 [SBE 
     CHECK(rule(e, "plate-ductility").status == finding_status::not_applicable);
 }
 
-TEST_CASE("bolt-hole-clearance: d + 2 mm up to M24, d + 3 mm above [SBE end]")
+TEST_CASE("bolt-hole-clearance: d + 2 mm up to M24 - d + 3 mm above [SBE end]")
 {
     auto d = fin_plate();
     CHECK(rule(d, "bolt-hole-clearance").status == finding_status::pass);
@@ -216,7 +216,7 @@ TEST_CASE("end-plate-thickness: 8 mm or more [SBE end]")
     CHECK(rule(d, "end-plate-thickness").status == finding_status::not_applicable);
 }
 
-TEST_CASE("fallback rotation demand [AISC, from memory]")
+TEST_CASE("fallback rotation demand [AISC - from memory]")
 {
     CHECK(fallback_rotation_demand.value == 0.03);
     CHECK(fallback_rotation_demand.label.find("fallback") != std::string_view::npos);

@@ -80,7 +80,7 @@ constexpr double w = 20e3, L = 6.0, MF = w * L * L / 12;
 
 }  // namespace
 
-TEST_CASE("lognormal stiffness; correlated ends [LN; MW63]: P = 1 - Phi((ln S* - ln median)/sigma); tol 1e-8")
+TEST_CASE("lognormal stiffness - correlated ends [LN - MW63]: P = 1 - Phi((ln S* - ln median)/sigma) - tol 1e-8")
 {
     const double f = 0.5;
     const project p = udl_project(f * MF / 1e3);
@@ -106,7 +106,7 @@ TEST_CASE("lognormal stiffness; correlated ends [LN; MW63]: P = 1 - Phi((ln S* -
     CHECK(of(r, "joint-moment-start").method.find("1-D") == 0);
 }
 
-TEST_CASE("independent library [scipy.stats.lognorm.sf]: P(S > S*) for the joint moment; tol 1e-8")
+TEST_CASE("independent library [scipy.stats.lognorm.sf]: P(S > S*) for the joint moment - tol 1e-8")
 {
     const double f = 0.5;
     const project p = udl_project(f * MF / 1e3);
@@ -128,7 +128,7 @@ TEST_CASE("independent library [scipy.stats.lognorm.sf]: P(S > S*) for the joint
     CHECK(std::abs(of(r, "joint-moment-start").p_fail - std::stod(*out)) <= 1e-8);
 }
 
-TEST_CASE("uniform-log stiffness [EC3; common practice]: P = ln(max/S*)/ln(max/min) for the class check; tol 1e-8")
+TEST_CASE("uniform-log stiffness [EC3 - common practice]: P = ln(max/S*)/ln(max/min) for the class check - tol 1e-8")
 {
     const project p = udl_project(1000);
     const beam& b = p.beams.front();
@@ -140,7 +140,7 @@ TEST_CASE("uniform-log stiffness [EC3; common practice]: P = ln(max/S*)/ln(max/m
     CHECK(of(r, "joint-moment-start").p_fail == 0.0);
 }
 
-TEST_CASE("Monte Carlo cross-check; correlated ends [MC]: fixed seed; within 4 standard errors")
+TEST_CASE("Monte Carlo cross-check - correlated ends [MC]: fixed seed - within 4 standard errors")
 {
     const project p = udl_project(0.6 * MF / 1e3);
     const beam& b = p.beams.front();
@@ -158,7 +158,7 @@ TEST_CASE("Monte Carlo cross-check; correlated ends [MC]: fixed seed; within 4 s
     }
 }
 
-TEST_CASE("independent ends; 2-D [MW63; LN]: class check equals the 1-D closed form; tol 1e-6")
+TEST_CASE("independent ends - 2-D [MW63 - LN]: class check equals the 1-D closed form - tol 1e-6")
 {
     const project p = udl_project(0.5 * MF / 1e3);
     const beam& b = p.beams.front();
@@ -173,7 +173,7 @@ TEST_CASE("independent ends; 2-D [MW63; LN]: class check equals the 1-D closed f
     CHECK(of(r, "stiffness-class-end").method.find("2-D") == 0);
 }
 
-TEST_CASE("independent ends; 2-D [MW63; D]: joint moment against the closed-form boundary rA* = 4c/(2 - rB + c rB); tol 1e-6")
+TEST_CASE("independent ends - 2-D [MW63 - D]: joint moment against the closed-form boundary rA* = 4c/(2 - rB + c rB) - tol 1e-6")
 {
     // M_A = (wL^2/4) rA (2 - rB)/(4 - rA rB) = M_Rd gives rA* = 4c/(2 - rB + c rB),
     // c = 4 M_Rd/(w L^2); P = integral over u_B of P(rA > rA*(rB)).
@@ -219,7 +219,7 @@ TEST_CASE("independent ends; 2-D [MW63; D]: joint moment against the closed-form
     CHECK(std::abs(jm.p_fail - std::stod(*out)) <= 1e-6);
 }
 
-TEST_CASE("one end uncertain [common practice; no source]: the other end at each range bound; the larger P is reported")
+TEST_CASE("one end uncertain [common practice - no source]: the other end at each range bound - the larger P is reported")
 {
     const project p = udl_project(0.3 * MF / 1e3);
     const beam& b = p.beams.front();
@@ -234,7 +234,7 @@ TEST_CASE("one end uncertain [common practice; no source]: the other end at each
     CHECK(jm.p_fail < 1);
 }
 
-TEST_CASE("no distribution [common practice; no source]: no probability is reported")
+TEST_CASE("no distribution [common practice - no source]: no probability is reported")
 {
     const project p = udl_project(50);
     CHECK(failure_probabilities(p, p.beams.front(), {}).empty());

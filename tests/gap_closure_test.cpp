@@ -35,7 +35,7 @@ beam_model udl_model(double q = w)
 bool close(double a, double b, double rel) { return std::abs(a - b) <= rel * std::max(std::abs(a), std::abs(b)); }
 }  // namespace
 
-TEST_CASE("one end closes with rigid contact: M_A = 3EI/L (theta0 - theta_c) with the far end pinned; tol 1e-9")
+TEST_CASE("one end closes with rigid contact: M_A = 3EI/L (theta0 - theta_c) with the far end pinned - tol 1e-9")
 {
     const auto m = udl_model();
     closing_joint a;
@@ -49,7 +49,7 @@ TEST_CASE("one end closes with rigid contact: M_A = 3EI/L (theta0 - theta_c) wit
     CHECK(s.state.moment_end == 0.0);
 }
 
-TEST_CASE("one end closes with a contact stiffness: M (1 + (S + Kc) F) = (S + Kc) theta0 - Kc theta_c; tol 1e-9")
+TEST_CASE("one end closes with a contact stiffness: M (1 + (S + Kc) F) = (S + Kc) theta0 - Kc theta_c - tol 1e-9")
 {
     const auto m = udl_model();
     closing_joint a;
@@ -64,7 +64,7 @@ TEST_CASE("one end closes with a contact stiffness: M (1 + (S + Kc) F) = (S + Kc
     CHECK(close(s.state.rotation_start, theta0 - F * M, 1e-9));
 }
 
-TEST_CASE("both ends close symmetrically: theta = theta_c and M = 2EI/L (theta0 - theta_c); tol 1e-9")
+TEST_CASE("both ends close symmetrically: theta = theta_c and M = 2EI/L (theta0 - theta_c) - tol 1e-9")
 {
     const auto m = udl_model();
     closing_joint j;
@@ -90,7 +90,7 @@ TEST_CASE("a joint that does not reach its closure stays linear and equals the s
     CHECK(s.state.rotation_start == lin.rotation_start);
 }
 
-TEST_CASE("continuity as the demand crosses the closure rotation (common practice and no source); tol 1e-6")
+TEST_CASE("continuity as the demand crosses the closure rotation (common practice and no source) - tol 1e-6")
 {
     const auto m = udl_model();
     closing_joint j;
@@ -106,7 +106,7 @@ TEST_CASE("continuity as the demand crosses the closure rotation (common practic
     CHECK(close(above.state.max_sagging_moment, below.state.max_sagging_moment, 1e-6));
 }
 
-TEST_CASE("uplift closes the gap at the top in hogging: rotation held at -theta_h; tol 1e-9")
+TEST_CASE("uplift closes the gap at the top in hogging: rotation held at -theta_h - tol 1e-9")
 {
     const auto m = udl_model(-w);
     closing_joint a;

@@ -226,7 +226,7 @@ TEST_CASE("small-angle limit: t -> g / dc")
     }
 }
 
-TEST_CASE("coped beam: the cope corner, not the flange, governs")
+TEST_CASE("coped beam: the cope corner - not the flange - governs")
 {
     // [closed form] with the bottom cope corner 300 - 60 = 240 mm below the
     // top, dc = 240 - 150 = 90 mm from the bolt centroid.
@@ -314,7 +314,7 @@ TEST_CASE("beam to beam: the supporting beam's bottom flange governs in sagging"
         MESSAGE("scipy cross-check skipped: /usr/bin/python3 with scipy is not available");
 }
 
-TEST_CASE("beam to beam: a root fillet of the supporting beam governs, checked by scipy")
+TEST_CASE("beam to beam: a root fillet of the supporting beam governs - checked by scipy")
 {
     // As above with a 10 mm gap: our bottom flange corner P = (-10, -300) mm
     // swings about C = (0, -230) mm into the bottom root fillet, a circle of
@@ -338,7 +338,7 @@ TEST_CASE("beam to beam: a root fillet of the supporting beam governs, checked b
     CHECK(*sag.rotation == doctest::Approx(*v).epsilon(1e-10));
 }
 
-TEST_CASE("no closure within pi/2 is reported as such, never as infinity")
+TEST_CASE("no closure within pi/2 is reported as such - never as infinity")
 {
     // A custom outline lying wholly above its centre: in sagging every point
     // moves away from the support (first principles).
@@ -375,7 +375,7 @@ TEST_CASE("clearance at a rotation")
     CHECK(clearance(g, rotation_sense::sagging, past) < 0);
 }
 
-TEST_CASE("worst-case gap, margins and check results")
+TEST_CASE("worst-case gap - margins and check results")
 {
     // Gap 12 mm with 2 mm tolerance behaves as the 10 mm case [closed form].
     connection_detail d = fin_plate(12 * mm);

@@ -57,7 +57,7 @@ std::vector<input_problem> schedule_problems(const std::string& text)
 
 }  // namespace
 
-TEST_CASE("csv: quoted cells with commas and doubled quotes and line breaks [RFC4180 section 2]; exact")
+TEST_CASE("csv: quoted cells with commas and doubled quotes and line breaks [RFC4180 section 2] - exact")
 {
     const auto rs = read_csv("a,b,c\r\n\"x, y\",\"say \"\"hi\"\"\",\"two\nlines\"\r\n\n# a comment\n  p , q ,r");
     REQUIRE(rs.size() == 3);
@@ -103,7 +103,7 @@ TEST_CASE("schedule: header problems refuse the whole schedule with line and col
     CHECK(schedule_problems(header).at(0).where == "line 2");
 }
 
-TEST_CASE("schedule: EN1990 set is 1.35G+1.5Q strength and G+Q service [EN1990 Eq. 6.10 and Table A1.2(B) and Eq. 6.14b]; exact")
+TEST_CASE("schedule: EN1990 set is 1.35G+1.5Q strength and G+Q service [EN1990 Eq. 6.10 and Table A1.2(B) and Eq. 6.14b] - exact")
 {
     const auto c = combinations_of(combination_set::en1990);
     REQUIRE(c.size() == 2);
@@ -113,7 +113,7 @@ TEST_CASE("schedule: EN1990 set is 1.35G+1.5Q strength and G+Q service [EN1990 E
     CHECK(c[1].factors == std::map<std::string, double>{{"G", 1.0}, {"Q", 1.0}});
 }
 
-TEST_CASE("schedule: ASCE7 set is 1.4D and 1.2D+1.6L strength and D+L service [ASCE 7-16 2.3.1]; exact")
+TEST_CASE("schedule: ASCE7 set is 1.4D and 1.2D+1.6L strength and D+L service [ASCE 7-16 2.3.1] - exact")
 {
     const auto c = combinations_of(combination_set::asce7);
     REQUIRE(c.size() == 3);
@@ -127,7 +127,7 @@ TEST_CASE("schedule: ASCE7 set is 1.4D and 1.2D+1.6L strength and D+L service [A
     CHECK_FALSE(parse_combination_set("asce7").has_value());
 }
 
-TEST_CASE("schedule: a row becomes a beam with SI values [SI prefixes; ft = 0.3048 m exactly]; tol 1e-12")
+TEST_CASE("schedule: a row becomes a beam with SI values [SI prefixes - ft = 0.3048 m exactly] - tol 1e-12")
 {
     const schedule s = parse_schedule(std::string(header) +
                                       "B1,6,IPE 300,8500,7.5 kN/m,FP-3-M20,SL,,span/360,\n"

@@ -52,7 +52,7 @@ section lookup(const char* name)
 
 }  // namespace
 
-TEST_CASE("section properties against handbook tables (from memory); tolerance 0.5 %")
+TEST_CASE("section properties against handbook tables (from memory) - tolerance 0.5 %")
 {
     // Tolerance 0.5 % on A, Iy, Wel,y and Wpl,y: the tables round to 3-4
     // significant figures, and for W shapes r = k_des - tf is only an
@@ -177,7 +177,7 @@ integrated strip_integration(const section_dimensions& d, int strips_per_region)
 
 }  // namespace
 
-TEST_CASE("closed forms against strip integration of the outline [strips]; tolerance 1e-6")
+TEST_CASE("closed forms against strip integration of the outline [strips] - tolerance 1e-6")
 {
     // Independent numerical check: the width of the real outline (arcs of
     // radius r) integrated with 1e5 midpoint strips per region, so the
@@ -194,7 +194,7 @@ TEST_CASE("closed forms against strip integration of the outline [strips]; toler
     }
 }
 
-TEST_CASE("closed forms against exact integrals by python3-sympy [sympy]; tolerance 1e-12")
+TEST_CASE("closed forms against exact integrals by python3-sympy [sympy] - tolerance 1e-12")
 {
     // Independent symbolic check of IPE 300 (h 300, b 150, tw 7.1, tf 10.7,
     // r 15 mm): sympy integrates the outline width exactly over the half depth.
@@ -233,7 +233,7 @@ TEST_CASE("closed forms against exact integrals by python3-sympy [sympy]; tolera
     CHECK(rel_diff(*s.W_pl, Z_mm3 * 1e-9) <= 1e-12);
 }
 
-TEST_CASE("identities of the closed forms (common practice; no source)")
+TEST_CASE("identities of the closed forms (common practice - no source)")
 {
     const section s = lookup("IPE 400");
     // Wel,y = Iy / (h/2), exactly.

@@ -51,7 +51,7 @@ std::optional<stiffness_distribution> read(const std::string& text, problem_list
 
 }  // namespace
 
-TEST_CASE("lognormal from median and cov [LN]: F(median) = 0.5; S_95 = median exp(sigma z95); tol 1e-12")
+TEST_CASE("lognormal from median and cov [LN]: F(median) = 0.5 - S_95 = median exp(sigma z95) - tol 1e-12")
 {
     const double median = 1.5e6, cov = 0.4;
     const auto d = stiffness_distribution::lognormal(median, cov);
@@ -64,7 +64,7 @@ TEST_CASE("lognormal from median and cov [LN]: F(median) = 0.5; S_95 = median ex
     CHECK(close(1 - d.cdf(d.quantile(1 - 1e-10)), 1e-10, 1e-4));  // upper tail keeps precision
 }
 
-TEST_CASE("lognormal from fractiles [LN]: the 5 and 95 % fractiles are returned; tol 1e-12")
+TEST_CASE("lognormal from fractiles [LN]: the 5 and 95 % fractiles are returned - tol 1e-12")
 {
     const auto d = stiffness_distribution::lognormal_from_fractiles(0.8e6, 3.2e6);
     CHECK(close(d.quantile(0.05), 0.8e6, 1e-12));
@@ -75,7 +75,7 @@ TEST_CASE("lognormal from fractiles [LN]: the 5 and 95 % fractiles are returned;
     CHECK(close(r.p95, 3.2e6, 1e-12));
 }
 
-TEST_CASE("uniform in log S [common practice; no source]: F(sqrt(min max)) = 0.5; F outside = 0 and 1; tol 1e-12")
+TEST_CASE("uniform in log S [common practice - no source]: F(sqrt(min max)) = 0.5 - F outside = 0 and 1 - tol 1e-12")
 {
     const auto d = stiffness_distribution::uniform_log(1e5, 1e7);
     CHECK(close(d.cdf(1e6), 0.5, 1e-12));
@@ -85,7 +85,7 @@ TEST_CASE("uniform in log S [common practice; no source]: F(sqrt(min max)) = 0.5
     CHECK(close(d.pdf(1e6), 1.0 / (1e6 * std::log(100.0)), 1e-12));
 }
 
-TEST_CASE("normal truncated at zero [TN]: F(0) = 0; quantile inverts cdf; tol 1e-12")
+TEST_CASE("normal truncated at zero [TN]: F(0) = 0 - quantile inverts cdf - tol 1e-12")
 {
     const double m = 1e6, s = 0.8e6;
     const auto d = stiffness_distribution::normal(m, s);
@@ -101,7 +101,7 @@ TEST_CASE("normal truncated at zero [TN]: F(0) = 0; quantile inverts cdf; tol 1e
     CHECK(close(d.pdf(x), (d.cdf(x + h) - d.cdf(x - h)) / (2 * h), 1e-6));
 }
 
-TEST_CASE("independent library [scipy.stats]: lognorm.ppf and truncnorm.cdf agree; tol 1e-10")
+TEST_CASE("independent library [scipy.stats]: lognorm.ppf and truncnorm.cdf agree - tol 1e-10")
 {
     const auto ln = stiffness_distribution::lognormal(1.5e6, 0.4);
     const auto tn = stiffness_distribution::normal(1e6, 0.8e6);
@@ -118,7 +118,7 @@ TEST_CASE("independent library [scipy.stats]: lognorm.ppf and truncnorm.cdf agre
     CHECK(close(tn.cdf(1.3e6), c, 1e-10));
 }
 
-TEST_CASE("reader; valid forms [file format]: median and cov; p05 and p95 in EI/L; uniform-log; normal")
+TEST_CASE("reader - valid forms [file format]: median and cov - p05 and p95 in EI/L - uniform-log - normal")
 {
     problem_list pr;
     auto a = read(R"({"kind": "lognormal", "median": "1500 kN*m/rad", "cov": 0.4})", pr);
@@ -136,7 +136,7 @@ TEST_CASE("reader; valid forms [file format]: median and cov; p05 and p95 in EI/
     CHECK(close(d->first(), 1e6, 1e-12));
 }
 
-TEST_CASE("reader; bad input names the field [project rules]: JSON pointer and what was expected")
+TEST_CASE("reader - bad input names the field [project rules]: JSON pointer and what was expected")
 {
     const std::string base = "/beams/0/joints/start/stiffness_distribution";
     struct bad {
@@ -166,7 +166,7 @@ TEST_CASE("reader; bad input names the field [project rules]: JSON pointer and w
     }
 }
 
-TEST_CASE("stiffness correlation reader [file format]: default 1; 0 and 1 accepted; 0.5 refused with its pointer")
+TEST_CASE("stiffness correlation reader [file format]: default 1 - 0 and 1 accepted - 0.5 refused with its pointer")
 {
     problem_list pr;
     CHECK(read_stiffness_correlation(nlohmann::json::parse("{}"), "/beams/0", pr) == 1);

@@ -14,7 +14,7 @@
 
 using namespace pinproof;
 
-TEST_CASE("linear ticks [common practice; no source]: 1-2-5 steps covering the range; exact")
+TEST_CASE("linear ticks [common practice - no source]: 1-2-5 steps covering the range - exact")
 {
     const auto u = nice_ticks(0, 1, false);
     REQUIRE(u.size() == 6);
@@ -26,7 +26,7 @@ TEST_CASE("linear ticks [common practice; no source]: 1-2-5 steps covering the r
     CHECK(nice_ticks(-3, 3, false)[1] - nice_ticks(-3, 3, false)[0] == 1);
 }
 
-TEST_CASE("log ticks [common practice; no source]: decades over five decades; 1-2-5 within two")
+TEST_CASE("log ticks [common practice - no source]: decades over five decades - 1-2-5 within two")
 {
     CHECK(nice_ticks(0.01, 1000, true) == std::vector<double>{0.01, 0.1, 1, 10, 100, 1000});
     CHECK(nice_ticks(1, 50, true) == std::vector<double>{1, 2, 5, 10, 20, 50});
@@ -34,7 +34,7 @@ TEST_CASE("log ticks [common practice; no source]: decades over five decades; 1-
     CHECK(tick_label(1000) == "1000");
 }
 
-TEST_CASE("chart markup [SVG 1.1]: title; axis labels; legend outside the plot; text escaped")
+TEST_CASE("chart markup [SVG 1.1]: title - axis labels - legend outside the plot - text escaped")
 {
     line_chart c;
     c.title = "A & B";
@@ -72,7 +72,7 @@ TEST_CASE("marker labels never overlap [issue]: close markers go to separate row
             if (pos[i].second == pos[j].second) CHECK(std::abs(pos[i].first - pos[j].first) >= width);
 }
 
-TEST_CASE("non-finite data [project rules]: internal_error; never drawn")
+TEST_CASE("non-finite data [project rules]: internal_error - never drawn")
 {
     line_chart c;
     c.series.push_back({"bad", {{0, 0}, {1, std::nan("")}}, "", false});

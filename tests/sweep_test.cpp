@@ -62,7 +62,7 @@ TEST_CASE("sweep end points equal the pinned and fixed states of check [check]: 
     }
 }
 
-TEST_CASE("sweep points log spaced from 0.01 to 1000 [issue]: fixity r = kappa/(kappa+3) [MW63]; tol 1e-12")
+TEST_CASE("sweep points log spaced from 0.01 to 1000 [issue]: fixity r = kappa/(kappa+3) [MW63] - tol 1e-12")
 {
     const project p = two_combination_project();
     const beam& b = p.beams.front();
@@ -78,7 +78,7 @@ TEST_CASE("sweep points log spaced from 0.01 to 1000 [issue]: fixity r = kappa/(
     }
 }
 
-TEST_CASE("sweep state at kappa = 1; equal springs; UDL [MW63; D]: M = MF/3; tol 1e-9")
+TEST_CASE("sweep state at kappa = 1 - equal springs - UDL [MW63 - D]: M = MF/3 - tol 1e-9")
 {
     const project p = parse_project(R"({ "format": "pinproof-project/1", "title": "t", "standard": "EN1993-1-8", "frame": "braced", "beams": [ { "id": "B1",
       "span": "6 m", "E": "210 GPa", "section": "IPE 300", "loads": [ { "case": "G", "kind": "udl", "w": "20 kN/m" } ],
@@ -104,7 +104,7 @@ TEST_CASE("one end moving [issue]: the other end held at the given value in ever
     CHECK(r.rows.back().at.end.is_rigid());
 }
 
-TEST_CASE("grid [issue]: (N+2) x (N+2) pairs with start outer; no thresholds along a path")
+TEST_CASE("grid [issue]: (N+2) x (N+2) pairs with start outer - no thresholds along a path")
 {
     const project p = two_combination_project();
     sweep_settings s;
@@ -118,7 +118,7 @@ TEST_CASE("grid [issue]: (N+2) x (N+2) pairs with start outer; no thresholds alo
     CHECK(r.thresholds.empty());
 }
 
-TEST_CASE("CSV [issue]: header with units; rigid written as text; no nan or inf; one line per row")
+TEST_CASE("CSV [issue]: header with units - rigid written as text - no nan or inf - one line per row")
 {
     const project p = two_combination_project();
     sweep_settings s;
@@ -151,7 +151,7 @@ TEST_CASE("unknown combination [project rules]: input_error naming the option an
     }
 }
 
-TEST_CASE("sweep chart [issue]: code boundaries and thresholds marked; ranges shaded; no nan")
+TEST_CASE("sweep chart [issue]: code boundaries and thresholds marked - ranges shaded - no nan")
 {
     const project p = two_combination_project();
     const beam& b = p.beams.front();

@@ -49,7 +49,7 @@ bool close(double a, double b, double rel) { return std::abs(a - b) <= rel * std
 
 }  // namespace
 
-TEST_CASE("joint moment threshold; equal springs; full UDL [MW63; D]: M = f MF at S = 2 f EI/((1-f) L); tol 1e-9")
+TEST_CASE("joint moment threshold - equal springs - full UDL [MW63 - D]: M = f MF at S = 2 f EI/((1-f) L) - tol 1e-9")
 {
     const double w = 20e3, L = 6.0;
     const double MF = w * L * L / 12;
@@ -70,7 +70,7 @@ TEST_CASE("joint moment threshold; equal springs; full UDL [MW63; D]: M = f MF a
     }
 }
 
-TEST_CASE("stiffness class threshold [EC3 5.2.2.5(1); AISC B3.4]: S = 0.5 EI/L and 2 EI/L; tol 1e-9")
+TEST_CASE("stiffness class threshold [EC3 5.2.2.5(1) - AISC B3.4]: S = 0.5 EI/L and 2 EI/L - tol 1e-9")
 {
     for (const auto& [standard, limit] : {std::pair<std::string, double>{"EN1993-1-8", 0.5}, {"AISC360", 2.0}}) {
         CAPTURE(standard);
@@ -85,7 +85,7 @@ TEST_CASE("stiffness class threshold [EC3 5.2.2.5(1); AISC B3.4]: S = 0.5 EI/L a
     }
 }
 
-TEST_CASE("deflection threshold; equal springs; UDL [D; pack 5]: wL^4/(384EI) [5 - 4k/(k+2)] = L/360; tol 1e-9")
+TEST_CASE("deflection threshold - equal springs - UDL [D - pack 5]: wL^4/(384EI) [5 - 4k/(k+2)] = L/360 - tol 1e-9")
 {
     const double w = 30e3, L = 6.0;
     const project p = udl_project(w / 1e3, 1000);
@@ -102,7 +102,7 @@ TEST_CASE("deflection threshold; equal springs; UDL [D; pack 5]: wL^4/(384EI) [5
     CHECK(t->above == check_status::pass);
 }
 
-TEST_CASE("rotation demand threshold; equal springs [D; pack 5]: theta_s 2/(k+2) = 0.03 rad; tol 1e-9")
+TEST_CASE("rotation demand threshold - equal springs [D - pack 5]: theta_s 2/(k+2) = 0.03 rad - tol 1e-9")
 {
     const double w = 60e3, L = 6.0;
     const project p = udl_project(w / 1e3, 1000, "EN1993-1-8", "span/100");
@@ -118,7 +118,7 @@ TEST_CASE("rotation demand threshold; equal springs [D; pack 5]: theta_s 2/(k+2)
     CHECK(t->above == check_status::pass);
 }
 
-TEST_CASE("checks that never change state report no threshold [common practice; no source]: support moment; exact")
+TEST_CASE("checks that never change state report no threshold [common practice - no source]: support moment - exact")
 {
     const project p = udl_project(20, 1000);
     const auto ts = find_thresholds(p, p.beams.front(), {moving_end::both, stiffness::pinned()});
@@ -127,7 +127,7 @@ TEST_CASE("checks that never change state report no threshold [common practice; 
     CHECK(find(ts, "joint-moment-start") == nullptr);  // 1000 kN*m is never reached
 }
 
-TEST_CASE("one end moving; the other rigid; UDL [MW63; D]: M_A = (wL^2/4) rA/(4 - rA) at rB = 1; tol 1e-9")
+TEST_CASE("one end moving - the other rigid - UDL [MW63 - D]: M_A = (wL^2/4) rA/(4 - rA) at rB = 1 - tol 1e-9")
 {
     const double w = 20e3, L = 6.0, mrd = 40e3;
     const project p = udl_project(w / 1e3, mrd / 1e3);
@@ -143,7 +143,7 @@ TEST_CASE("one end moving; the other rigid; UDL [MW63; D]: M_A = (wL^2/4) rA/(4 
     CHECK(find(ts, "joint-moment-end") == nullptr);
 }
 
-TEST_CASE("boundary curve in the two-end plane; UDL [MW63; D]: M_A(rA; rB) = M_Rd on every point; tol 1e-8")
+TEST_CASE("boundary curve in the two-end plane - UDL [MW63 - D]: M_A(rA - rB) = M_Rd on every point - tol 1e-8")
 {
     const double w = 20e3, L = 6.0, mrd = 30e3;
     const project p = udl_project(w / 1e3, mrd / 1e3);
@@ -167,7 +167,7 @@ TEST_CASE("text report lines [EC3 5.2.2.5(1)]: the pinned assumption stops holdi
     CHECK(found);
 }
 
-TEST_CASE("fixity factor [MW63]: r = kappa/(kappa + 3); inverse exact for pin and rigid; tol 1e-14")
+TEST_CASE("fixity factor [MW63]: r = kappa/(kappa + 3) - inverse exact for pin and rigid - tol 1e-14")
 {
     const double EI = 17.5e6, L = 6;
     CHECK(fixity_factor(stiffness::pinned(), EI, L) == 0.0);

@@ -233,7 +233,7 @@ TEST_CASE("error messages say what was found and what was expected")
     CHECK(parse_error("1,5 m").find("decimal separator") != std::string::npos);
 }
 
-TEST_CASE("describe and example_of name each dimension; and every example parses back to it")
+TEST_CASE("describe and example_of name each dimension - and every example parses back to it")
 {
     const std::pair<dimension, const char*> names[] = {
         {dims::length, "length"},
@@ -282,7 +282,7 @@ TEST_CASE("display units: symbol parses back to the stated size and dimension (1
     CHECK(display_unit_for(dims::dimensionless, unit_system::si).symbol.empty());
 }
 
-TEST_CASE("format_number: significant figures; fixed or scientific layout (exact strings)")
+TEST_CASE("format_number: significant figures - fixed or scientific layout (exact strings)")
 {
     CHECK(format_number(48.0) == "48.00");
     CHECK(format_number(0.01026) == "0.01026");
@@ -327,7 +327,7 @@ TEST_CASE("format_quantity in SI and US (exact strings)")
     CHECK(format_quantity(0.5, dims::dimensionless, unit_system::si) == "0.5000");
 }
 
-TEST_CASE("round trips parse(format_quantity(x)) (17 s.f.: 1e-12 relative; 4 s.f.: 5e-4 relative)")
+TEST_CASE("round trips parse(format_quantity(x)) (17 s.f.: 1e-12 relative - 4 s.f.: 5e-4 relative)")
 {
     const std::pair<double, dimension> values[] = {
         {48e3, dims::moment},           {2.5e6, dims::rotational_stiffness},
