@@ -42,8 +42,9 @@ std::optional<double> quantity(const json& value, const std::string& pointer, di
                              example_of(expected) + "\")";
     if (value.is_number()) {
         const double v = value.get<double>();
-        if (!std::isfinite(v)) {
-            problems.add(pointer, want + ", found a number that is not finite");
+        // The same ceiling as parse_quantity: no beam quantity comes near 1e100.
+        if (!std::isfinite(v) || std::abs(v) > 1e100) {
+            problems.add(pointer, want + ", found " + shown(value) + ", beyond 1e100 in magnitude");
             return std::nullopt;
         }
         return v;

@@ -37,6 +37,10 @@ constexpr plausible_range plausible_E{1e9, 1e12};            // Pa (structural s
 constexpr plausible_range plausible_I{1e-10, 10.0};          // m^4 (IPE 80: 8.0e-7)
 constexpr double plausible_load_magnitude = 1e12;            // N, N/m, N*m
 constexpr double plausible_factor_magnitude = 1e3;
+constexpr plausible_range plausible_section_size{1e-4, 10.0};   // m: depth, flange and web sizes
+constexpr plausible_range plausible_section_area{1e-6, 10.0};   // m^2
+constexpr double plausible_deflection_limit = 10.0;          // m, an absolute limit
+constexpr double plausible_support_rotation = 0.5;           // rad
 constexpr double plausible_stiffness = 1e40;                 // N*m/rad; "rigid" is exact (1e30 agrees with it)
 
 // A plain decimal number (no unit), by the units parser's number rules: no
@@ -132,12 +136,18 @@ struct reader {
         section s;
         s.name = string_field(o, sp, "name", false, problems).value_or("user-defined");
         auto I = plausible(o, sp, "I", dims::second_moment, true, plausible_I);
-        auto depth = positive(o, sp, "depth", dims::length, true);
-        s.area = positive(o, sp, "area", dims::area, false);
-        s.flange_width = positive(o, sp, "flange_width", dims::length, false);
-        s.flange_thickness = positive(o, sp, "flange_thickness", dims::length, false);
-        s.web_thickness = positive(o, sp, "web_thickness", dims::length, false);
+        auto depth = plausible(o, sp, "depth", dims::length, true, plausible_section_size);
+        s.area = plausible(o, sp, "area", dims::area, false, plausible_section_area);
+        s.flange_width = plausible(o, sp, "flange_width", dims::length, false, plausible_section_size);
+        s.flange_thickness = plausible(o, sp, "flange_thickness", dims::length, false, plausible_section_size);
+        s.web_thickness = plausible(o, sp, "web_thickness", dims::length, false, plausible_section_size);
         s.root_radius = q(o, sp, "root_radius", dims::length, false);
+        if (s.root_radius && !(*s.root_radius <= plausible_section_size.hi)) {
+            problems.add(child(sp, "root_radius"), "expected a root radius of at most " +
+                                                       format_quantity(plausible_section_size.hi, dims::length, system) +
+                                                       ", found " + shown(o.at("root_radius")));
+            s.root_radius.reset();
+        }
         if (s.root_radius && *s.root_radius < 0) {
             problems.add(child(sp, "root_radius"), "expected a root radius of zero or more, found " +
                                                        shown(o.at("root_radius")));
@@ -266,7 +276,11 @@ struct reader {
             if (sec) out.detail = read_connection_detail(j.at("detail"), child(ptr, "detail"), *sec, problems);
         }
         auto sr = q(j, ptr, "support_rotation", dims::angle, false);
-        if (sr && *sr < 0)
+        if (sr && *sr > plausible_support_rotation)
+            problems.add(child(ptr, "support_rotation"), "expected a support rotation of at most " +
+                                                             format_quantity(plausible_support_rotation, dims::angle, system) +
+                                                             ", found " + shown(j.at("support_rotation")));
+        else if (sr && *sr < 0)
             problems.add(child(ptr, "support_rotation"), "expected a support rotation of zero or more, found " +
                                                              shown(j.at("support_rotation")));
         else if (sr) out.support_rotation = *sr;
@@ -456,8 +470,9 @@ struct reader {
         }
         auto v = json_fields::quantity(*it, p, dims::length, problems, &system);
         if (!v) return std::nullopt;
-        if (!(*v > 0)) {
-            problems.add(p, "expected a positive deflection limit, found " + shown(*it));
+        if (!(*v > 0) || *v > plausible_deflection_limit) {
+            problems.add(p, "expected a positive deflection limit of at most " +
+                                format_quantity(plausible_deflection_limit, dims::length, system) + ", found " + shown(*it));
             return std::nullopt;
         }
         out.absolute = *v;

@@ -49,6 +49,43 @@ bool bare_number(const std::string& s)
 
 }  // namespace
 
+// Whether `s` is well-formed UTF-8 (RFC 3629: no overlong forms, no surrogates,
+// nothing above U+10FFFF). Results are written as JSON, which must be UTF-8.
+static bool valid_utf8(const std::string& s)
+{
+    std::size_t i = 0;
+    const std::size_t n = s.size();
+    while (i < n) {
+        const unsigned char c = static_cast<unsigned char>(s[i]);
+        std::size_t len = 0;
+        unsigned int cp = 0;
+        if (c < 0x80) { ++i; continue; }
+        if ((c & 0xE0) == 0xC0) { len = 2; cp = c & 0x1F; }
+        else if ((c & 0xF0) == 0xE0) { len = 3; cp = c & 0x0F; }
+        else if ((c & 0xF8) == 0xF0) { len = 4; cp = c & 0x07; }
+        else return false;
+        if (i + len > n) return false;
+        for (std::size_t k = 1; k < len; ++k) {
+            const unsigned char d = static_cast<unsigned char>(s[i + k]);
+            if ((d & 0xC0) != 0x80) return false;
+            cp = (cp << 6) | (d & 0x3F);
+        }
+        const unsigned int min_cp[] = {0, 0, 0x80, 0x800, 0x10000};
+        if (cp < min_cp[len] || cp > 0x10FFFF || (cp >= 0xD800 && cp <= 0xDFFF)) return false;
+        i += len;
+    }
+    return true;
+}
+
+// Every byte outside ASCII replaced by '?', for a cell already refused.
+static std::string replace_invalid_utf8(const std::string& s)
+{
+    std::string out = s;
+    for (char& c : out)
+        if (static_cast<unsigned char>(c) >= 0x80) c = '?';
+    return out;
+}
+
 std::vector<csv_record> read_csv(std::string_view text)
 {
     std::vector<csv_record> out;
@@ -131,6 +168,14 @@ std::vector<csv_record> read_csv(std::string_view text)
                                      "a double quote inside an unquoted cell";
                     bad_record = true;
                 }
+            }
+            if (!valid_utf8(cell)) {
+                if (!bad_record) {
+                    rec.bad_column = rec.cells.size() + 1;
+                    rec.bad_reason = "expected text in UTF-8, found bytes that are not (save the schedule as UTF-8)";
+                }
+                bad_record = true;
+                cell = replace_invalid_utf8(cell);
             }
             rec.cells.push_back(std::move(cell));
             pos = p;

@@ -10,6 +10,10 @@
 #include <system_error>
 
 namespace pinproof {
+
+// No quantity of a beam check comes near 1e100 in SI base units; refusing
+// larger magnitudes keeps every value finite in any display unit.
+constexpr double max_magnitude = 1e100;
 namespace {
 
 // International yard and pound agreement (1959): 1 in = 25.4 mm, 1 ft = 12 in.
@@ -113,8 +117,8 @@ public:
             if (pos_ < text_.size()) fail_unexpected("an operator '*', '/' or the end of the text");
         }
         const double value = number * unit.factor;
-        if (!std::isfinite(value))
-            fail(quoted(text_) + " is too large: its value in SI base units is not a finite number");
+        if (!std::isfinite(value) || std::abs(value) > max_magnitude)
+            fail(quoted(text_) + " is too large: its magnitude in SI base units exceeds 1e100");
         const unit_system system = has_us_   ? unit_system::us_customary
                                    : has_si_ ? unit_system::si
                                              : unit_system::neutral;

