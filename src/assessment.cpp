@@ -521,6 +521,7 @@ check detailing_check(const detailing_finding& f, beam_end e, const project& p)
     (void)p;
     check c;
     c.id = "detailing-" + f.id + "-" + to_string(e);
+    c.varies_with_stiffness = false;
     c.status = f.status == finding_status::pass   ? check_status::pass
                : f.status == finding_status::warn ? check_status::warn
                                                   : check_status::not_applicable;

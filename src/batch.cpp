@@ -165,7 +165,10 @@ batch_row assess_schedule_row(const schedule& s, std::size_t index, const detail
         if (!in.input) {
             refuse(row, std::move(in.problems));
         } else {
-            const beam_assessment a = assess_beam(in.settings, *in.input, options.assessment);
+            // The smallest passing gap is only written to the JSON result.
+            assessment_options ao = options.assessment;
+            ao.find_min_gap = ao.find_min_gap && options.json;
+            const beam_assessment a = assess_beam(in.settings, *in.input, ao);
             summarise(row, a);
             if (options.json) row.json = row_json(row, &a).dump();
         }

@@ -737,6 +737,8 @@ gap_check check_gap(const connection_detail& d, const section& beam, const rotat
     r.gap_tolerance = d.gap_tolerance;
     r.worst_case_gap = d.worst_case_gap();
     const beam_end_geometry g = build_geometry(d, beam);
+    // At zero rotation both senses have the same clearance: computed once, on demand.
+    std::optional<double> at_rest;
     auto one = [&](rotation_sense sense, double dem) {
         sense_check s;
         s.sense = sense;
@@ -746,7 +748,12 @@ gap_check check_gap(const connection_detail& d, const section& beam, const rotat
             s.margin = margin(s.closing, dem);
             s.margin_is_lower_bound = !s.closing.rotation.has_value();
         }
-        s.clearance_at_demand = clearance(g, sense, std::min(dem, max_searched_rotation));
+        if (dem > 0) {
+            s.clearance_at_demand = clearance(g, sense, std::min(dem, max_searched_rotation));
+        } else {
+            if (!at_rest) at_rest = clearance(g, sense, 0.0);
+            s.clearance_at_demand = *at_rest;
+        }
         s.passes = closure_or_max(s.closing) >= dem && dem <= max_searched_rotation;
         return s;
     };
@@ -763,7 +770,7 @@ gap_check check_gap(const connection_detail& d, const section& beam, const rotat
                                                                                               : rotation_sense::sagging;
     r.passes = r.sagging.passes && r.hogging.passes;
     if (find_min_gap) r.min_gap_required = min_gap_required(d, beam, demand, &r.min_gap_note);
-    else r.min_gap_note = "not searched";
+    else r.min_gap_note.clear();  // not searched: nothing to say
     return r;
 }
 

@@ -6,6 +6,7 @@
 #include <algorithm>
 #include <cctype>
 #include <cmath>
+#include <cstdio>
 #include <cstdlib>
 #include <fstream>
 #include <map>
@@ -505,13 +506,33 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     b.end = joint_for_beam(*details[1], b.EI(), b.span);
     // The catalogue entry's geometry, with its type, for the end-gap check. A
     // problem in it is the catalogue's, named by its pointer there.
+    // A schedule repeats few pairs of detail and section: each pair is read once
+    // per thread (the reading depends on nothing else).
+    // The key is everything the reading depends on, by value.
+    thread_local std::map<std::string, std::pair<connection_detail, problem_list>> read_details;
+    const auto number = [](const std::optional<double>& v) {
+        char buf[32];
+        std::snprintf(buf, sizeof buf, "%.17g", v.value_or(-1.0));
+        return std::string(buf);
+    };
+    const std::string section_key = b.sec.name + "|" + number(b.sec.depth) + "|" + number(b.sec.flange_thickness) +
+                                    "|" + number(b.sec.flange_width) + "|" + number(b.sec.web_thickness) + "|" +
+                                    number(b.sec.root_radius);
     for (int i = 0; i < 2; ++i) {
         const catalogue_detail& d = *details[i];
         if (!d.geometry.is_object()) continue;
-        nlohmann::json g = d.geometry;
-        g["type"] = d.type;
-        problem_list problems;
-        auto detail = read_connection_detail(g, d.pointer + "/geometry", b.sec, problems);
+        const std::string key = d.type + "|" + d.pointer + "|" + d.geometry.dump() + "|" + section_key;
+        auto cached = read_details.find(key);
+        if (cached == read_details.end()) {
+            nlohmann::json g = d.geometry;
+            g["type"] = d.type;
+            problem_list found;
+            connection_detail read = read_connection_detail(g, d.pointer + "/geometry", b.sec, found);
+            if (read_details.size() > 4096) read_details.clear();
+            cached = read_details.emplace(key, std::make_pair(std::move(read), std::move(found))).first;
+        }
+        const problem_list& problems = cached->second.second;
+        const connection_detail& detail = cached->second.first;
         if (!problems.empty()) {
             for (const auto& pr : problems.problems())
                 out.problems.push_back({at_line + " (" + (i == 0 ? "start" : "end") + " detail " + d.id + ", catalogue " +

@@ -30,6 +30,9 @@ struct check {
     // Reported for someone else to use (the support moment), not a criterion:
     // sensitivity studies leave it out.
     bool informative = false;
+    // False for checks of the detail's geometry alone (detailing rules), which
+    // no joint stiffness changes: sensitivity studies leave them out too.
+    bool varies_with_stiffness = true;
 };
 
 struct value_range {

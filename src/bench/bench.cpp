@@ -208,11 +208,17 @@ int write_schedule(const std::string& path, long n)
         return 2;
     }
     const char* sections[] = {"IPE 240", "IPE 270", "IPE 300", "IPE 330", "IPE 360", "IPE 400", "IPE 450", "HE 240 A"};
-    const char* details[] = {"FP-2-M20", "FP-3-M20", "FP-4-M20", "WC-2-M20", "WC-3-M20", "EP-P-3-M20", "FP-3-M20-SLOT"};
+    // Seven catalogue details for each section, each fitting within its depth
+    // (fitting top + depth <= beam depth, as the detail reader requires).
+    const char* shallow[] = {"FP-2-M20", "WC-2-M20", "EP-P-2-M20", "FP-2-M20", "WC-2-M20", "EP-P-2-M20", "FP-3-M20-SLOT"};
+    const char* medium[] = {"FP-2-M20", "FP-3-M20", "WC-2-M20", "WC-3-M20", "EP-P-2-M20", "EP-P-3-M20", "FP-3-M20-SLOT"};
+    const char* deep[] = {"FP-3-M20", "FP-4-M20", "WC-3-M20", "WC-4-M20", "EP-P-3-M20", "EP-P-4-M20", "FP-3-M20-SLOT"};
+    const double depth_mm[] = {240, 270, 300, 330, 360, 400, 450, 230};
     const double spans[] = {4.5, 5.0, 5.4, 6.0, 6.6, 7.2, 7.5, 8.1};
     out << "id,span,section,g,q,start,end,combinations,deflection_limit\n";
     for (long i = 0; i < n; ++i) {
         const int s = static_cast<int>(i % 8), d = static_cast<int>((i / 8) % 7), e = static_cast<int>((i / 56) % 7);
+        const char* const* details = depth_mm[s] >= 400 ? deep : depth_mm[s] >= 300 ? medium : shallow;
         const double g = 4.0 + 0.5 * static_cast<double>(i % 11), q = 2.5 + 0.5 * static_cast<double>(i % 9);
         char line[256];
         std::snprintf(line, sizeof line, "B%06ld,%.1f m,%s,%.1f kN/m,%.1f kN/m,%s,%s,%s,span/360\n", i + 1,

@@ -137,7 +137,7 @@ inline void unit_text(std::string_view text)
 // Beam schedules: parse_schedule, read_schedule_row for every row, and for a
 // row that is read, assess_project and both outputs; then the batch summary
 // of the rows. At most `max_rows` rows are assessed, to keep one run short.
-inline void schedule_input(std::string_view text, const detail_catalogue& catalogue, std::size_t max_rows = 16)
+inline void schedule_input(std::string_view text, const detail_catalogue& catalogue, std::size_t max_rows = 4)
 {
     schedule s;
     try {
@@ -152,16 +152,10 @@ inline void schedule_input(std::string_view text, const detail_catalogue& catalo
     for (std::size_t i = 0; i < s.rows.size() && i < max_rows; ++i) {
         schedule_row row = read_schedule_row(s, i, catalogue);
         require(row.input.has_value() == row.problems.empty(), "a row with a beam and problems, or neither");
-        if (!row.input) {
-            require_well_formed(input_error(row.problems), true);
-        } else {
-            project p = row.settings;
-            p.beams.push_back(*row.input);
-            assessment_options fast;
-            fast.search_interior = false;
-            const project_assessment a = assess_project(p, fast);
-            outputs_of(a);
-        }
+        // The text report and the result file of an accepted beam are the
+        // project target's work; here the reader and the batch path are fuzzed,
+        // so that each input runs fast enough for the fuzzer to explore.
+        if (!row.input) require_well_formed(input_error(row.problems), true);
         // The batch path catches every exception into a refused row; an
         // internal error there is still a fault.
         batch_row b = assess_schedule_row(s, i, catalogue, options);
