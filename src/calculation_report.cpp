@@ -123,17 +123,6 @@ std::string status_class(check_status s)
     return "na";
 }
 
-std::string combination_text(const combination& c)
-{
-    std::string s;
-    for (const auto& [name, f] : c.factors) {
-        if (!s.empty()) s += f < 0 ? " - " : " + ";
-        else if (f < 0) s += "-";
-        s += format_number(std::abs(f), 3) + " " + name;
-    }
-    return s;
-}
-
 std::string standard_name(design_standard s)
 {
     return s == design_standard::en1993_1_8 ? "EN 1993-1-8:2005" : "AISC 360-16";

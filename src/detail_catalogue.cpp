@@ -165,20 +165,6 @@ std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr
     return d;
 }
 
-std::string line_column(std::string_view text, std::size_t byte)
-{
-    std::size_t line = 1, col = 1;
-    for (std::size_t i = 0; i < byte && i < text.size(); ++i) {
-        if (text[i] == '\n') {
-            ++line;
-            col = 1;
-        } else {
-            ++col;
-        }
-    }
-    return "line " + std::to_string(line) + ", column " + std::to_string(col);
-}
-
 std::string located(const std::string& source, const std::string& where)
 {
     return source.empty() ? where : source + "#" + where;

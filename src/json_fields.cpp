@@ -158,6 +158,20 @@ std::optional<bool> bool_field(const json& obj, const std::string& pointer, cons
     return v->get<bool>();
 }
 
+std::string line_column(std::string_view text, std::size_t byte)
+{
+    std::size_t line = 1, col = 1;
+    for (std::size_t i = 0; i < byte && i < text.size(); ++i) {
+        if (text[i] == '\n') {
+            ++line;
+            col = 1;
+        } else {
+            ++col;
+        }
+    }
+    return "line " + std::to_string(line) + ", column " + std::to_string(col);
+}
+
 std::optional<double> multiple_of_EI_over_L(const std::string& text)
 {
     std::size_t b = 0, e = text.size();

@@ -10,6 +10,7 @@
 
 #include <optional>
 #include <string>
+#include <string_view>
 #include <vector>
 
 #include "pinproof/errors.hpp"
@@ -54,6 +55,10 @@ std::optional<long long> integer_field(const json& obj, const std::string& point
 
 std::optional<bool> bool_field(const json& obj, const std::string& pointer, const std::string& key,
                                bool required, problem_list& problems);
+
+// "line L, column C" of byte offset `byte` in `text` (both counted from 1), for
+// JSON syntax errors.
+std::string line_column(std::string_view text, std::size_t byte);
 
 // The multiple k of a stiffness written relative to the beam, "k EI/L"
 // ("0.5 EI/L" -> 0.5). nullopt when the text does not end in "EI/L". Throws

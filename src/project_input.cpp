@@ -563,20 +563,6 @@ std::string printable(const std::string& message)
     return out;
 }
 
-std::string line_column(std::string_view text, std::size_t byte)
-{
-    std::size_t line = 1, col = 1;
-    for (std::size_t i = 0; i < byte && i < text.size(); ++i) {
-        if (text[i] == '\n') {
-            ++line;
-            col = 1;
-        } else {
-            ++col;
-        }
-    }
-    return "line " + std::to_string(line) + ", column " + std::to_string(col);
-}
-
 // Finds where parsing stopped. nlohmann_json reports a number too large for a
 // double ("1e400") as out_of_range without its position, so the text is
 // scanned again with a handler that only records the error.

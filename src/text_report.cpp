@@ -77,17 +77,6 @@ struct units_view {
 
 std::string ratio_text(const std::optional<double>& r) { return r ? format_number(*r, 3) : std::string("rigid"); }
 
-std::string combination_text(const combination& c)
-{
-    std::string s;
-    for (const auto& [name, f] : c.factors) {
-        if (!s.empty()) s += f < 0 ? " - " : " + ";
-        else if (f < 0) s += "-";
-        s += format_number(std::abs(f), 3) + " " + name;
-    }
-    return s;
-}
-
 std::string status_word(check_status s)
 {
     switch (s) {
@@ -243,6 +232,17 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
 }
 
 }  // namespace
+
+std::string combination_text(const combination& c)
+{
+    std::string s;
+    for (const auto& [name, f] : c.factors) {
+        if (!s.empty()) s += f < 0 ? " - " : " + ";
+        else if (f < 0) s += "-";
+        s += format_number(std::abs(f), 3) + " " + name;
+    }
+    return s;
+}
 
 std::string text_report(const project_assessment& a, const std::string& version)
 {
