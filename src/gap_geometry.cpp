@@ -3,7 +3,10 @@
 #include <algorithm>
 #include <cmath>
 #include <cstdint>
+#include <cstdio>
 #include <limits>
+#include <map>
+#include <string>
 #include <sstream>
 #include <utility>
 
@@ -730,19 +733,95 @@ std::string gap_check::critical_point() const
     return s.closing.contact->description() + " (" + to_string(governing) + ")";
 }
 
+namespace {
+
+// Everything build_geometry reads, by value, as text: the key of the cache below.
+std::string fingerprint(const connection_detail& d, const section& beam)
+{
+    std::string key;
+    char buf[40];
+    const auto put = [&](double v) {
+        std::snprintf(buf, sizeof buf, "%.17g|", v);
+        key += buf;
+    };
+    const auto put_opt = [&](const std::optional<double>& v) { v ? put(*v) : (void)(key += "-|"); };
+    key += std::to_string(static_cast<int>(d.type)) + "|" + std::to_string(static_cast<int>(d.support)) + "|" +
+           std::to_string(static_cast<int>(d.grade)) + "|" + std::to_string(d.bolts.rows) + "|";
+    for (double v : {d.gap, d.gap_tolerance, d.plate_top, d.plate_depth, d.plate_thickness, d.bolts.diameter,
+                     d.bolts.hole_diameter, d.bolts.pitch, d.bolts.first_bolt, d.bolts.bolt_line})
+        put(v);
+    for (const auto* c : {&d.cope_top, &d.cope_bottom}) {
+        if (*c) {
+            put((*c)->depth);
+            put((*c)->length);
+        } else {
+            key += "-|";
+        }
+    }
+    if (d.support_beam) {
+        const auto& sb = *d.support_beam;
+        key += sb.name + "|";
+        for (double v : {sb.top, sb.depth, sb.flange_width, sb.flange_thickness, sb.web_thickness, sb.root_radius}) put(v);
+    } else {
+        key += "-|";
+    }
+    if (d.centre_of_rotation) {
+        put(d.centre_of_rotation->from_support);
+        put(d.centre_of_rotation->below_top);
+    } else {
+        key += "-|";
+    }
+    for (const auto& pt : d.outline) {
+        put(pt.from_support);
+        put(pt.below_top);
+    }
+    key += "#" + beam.name + "|";
+    put(beam.I);
+    put(beam.depth);
+    for (const auto* v : {&beam.area, &beam.flange_width, &beam.flange_thickness, &beam.web_thickness, &beam.root_radius,
+                          &beam.W_el, &beam.W_pl})
+        put_opt(*v);
+    return key;
+}
+
+// The geometry at the worst-case gap and its closures depend only on the
+// detail and the section, not on the demand: a schedule repeats few pairs, so
+// each is built once per thread.
+struct closing_geometry {
+    beam_end_geometry g;
+    closure sagging, hogging;
+};
+
+const closing_geometry& geometry_of(const connection_detail& d, const section& beam)
+{
+    thread_local std::map<std::string, closing_geometry> cache;
+    const std::string key = fingerprint(d, beam);
+    auto it = cache.find(key);
+    if (it != cache.end()) return it->second;
+    if (cache.size() > 1024) cache.clear();
+    closing_geometry cg;
+    cg.g = build_geometry(d, beam);
+    cg.sagging = find_closure(cg.g, rotation_sense::sagging);
+    cg.hogging = find_closure(cg.g, rotation_sense::hogging);
+    return cache.emplace(key, std::move(cg)).first->second;
+}
+
+}  // namespace
+
 gap_check check_gap(const connection_detail& d, const section& beam, const rotation_demand& demand, bool find_min_gap)
 {
     gap_check r;
     r.gap = d.gap;
     r.gap_tolerance = d.gap_tolerance;
     r.worst_case_gap = d.worst_case_gap();
-    const beam_end_geometry g = build_geometry(d, beam);
+    const closing_geometry& cg = geometry_of(d, beam);
+    const beam_end_geometry& g = cg.g;
     // At zero rotation both senses have the same clearance: computed once, on demand.
     std::optional<double> at_rest;
     auto one = [&](rotation_sense sense, double dem) {
         sense_check s;
         s.sense = sense;
-        s.closing = find_closure(g, sense);
+        s.closing = sense == rotation_sense::sagging ? cg.sagging : cg.hogging;
         s.demand = dem;
         if (dem > 0) {
             s.margin = margin(s.closing, dem);
