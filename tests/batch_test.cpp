@@ -17,6 +17,8 @@
 // run the same arithmetic.
 #include <doctest/doctest.h>
 
+#include "temp_dir.hpp"
+
 #include <nlohmann/json.hpp>
 
 #include <atomic>
@@ -58,26 +60,9 @@ const detail_catalogue& test_details()
     return c;
 }
 
-struct temp_dir {
-    fs::path path;
-    temp_dir()
-    {
-        std::random_device rd;
-        path = fs::temp_directory_path() / ("pinproof-batch-test-" + std::to_string(rd()) + std::to_string(rd()));
-        fs::create_directories(path);
-    }
-    ~temp_dir()
-    {
-        std::error_code ec;
-        fs::remove_all(path, ec);
-    }
-    temp_dir(const temp_dir&) = delete;
-    temp_dir& operator=(const temp_dir&) = delete;
-    std::string write(const std::string& name, const std::string& text) const
-    {
-        std::ofstream(path / name, std::ios::binary) << text;
-        return (path / name).string();
-    }
+// One directory per test, removed at its end (tests/temp_dir.hpp).
+struct temp_dir : pinproof::testing::temp_dir {
+    temp_dir() : pinproof::testing::temp_dir("batch-test") {}
 };
 
 bool close(double a, double b, double rel) { return std::abs(a - b) <= rel * std::max(std::abs(a), std::abs(b)); }

@@ -12,6 +12,8 @@
 // No numerical tolerance: these cases compare exit codes, keys and text.
 #include <doctest/doctest.h>
 
+#include "temp_dir.hpp"
+
 #include <nlohmann/json.hpp>
 
 #include <cstdlib>
@@ -33,21 +35,9 @@ using pinproof::cli::run;
 
 namespace {
 
-struct temp_dir {
-    fs::path path;
-    temp_dir()
-    {
-        std::random_device rd;
-        path = fs::temp_directory_path() / ("pinproof-cli-test-" + std::to_string(rd()) + std::to_string(rd()));
-        fs::create_directories(path);
-    }
-    ~temp_dir()
-    {
-        std::error_code ec;
-        fs::remove_all(path, ec);
-    }
-    temp_dir(const temp_dir&) = delete;
-    temp_dir& operator=(const temp_dir&) = delete;
+// One directory per test, removed at its end (tests/temp_dir.hpp).
+struct temp_dir : pinproof::testing::temp_dir {
+    temp_dir() : pinproof::testing::temp_dir("cli-test") {}
 };
 
 struct run_result {

@@ -14,6 +14,8 @@
 // Tolerances are stated in each case.
 #include <doctest/doctest.h>
 
+#include "temp_dir.hpp"
+
 #include <nlohmann/json.hpp>
 
 #include <algorithm>
@@ -39,22 +41,9 @@ namespace fs = std::filesystem;
 
 namespace {
 
-// A fresh directory under the system temporary directory, removed at the end.
-struct temp_dir {
-    fs::path path;
-    temp_dir()
-    {
-        std::random_device rd;
-        path = fs::temp_directory_path() / ("pinproof-input-test-" + std::to_string(rd()) + std::to_string(rd()));
-        fs::create_directories(path);
-    }
-    ~temp_dir()
-    {
-        std::error_code ec;
-        fs::remove_all(path, ec);
-    }
-    temp_dir(const temp_dir&) = delete;
-    temp_dir& operator=(const temp_dir&) = delete;
+// One directory per test, removed at its end (tests/temp_dir.hpp).
+struct temp_dir : pinproof::testing::temp_dir {
+    temp_dir() : pinproof::testing::temp_dir("input-test") {}
 };
 
 const fs::path corpus_dir = fs::path(PINPROOF_SOURCE_DIR) / "tests" / "bad-input";
