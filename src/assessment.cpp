@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <utility>
 
 #include "pinproof/errors.hpp"
 #include "pinproof/result_fields.hpp"
@@ -401,7 +402,7 @@ void assess_details(const beam& b, beam_assessment& a, bool find_min_gap)
             return !sc.closing.rotation || *sc.closing.rotation >= fallback_rotation_demand.value;
         };
         d.clears_rule_of_thumb = clears(d.gap.sagging) && (d.demand_hogging == 0 || clears(d.gap.hogging));
-        (e == beam_end::start ? a.start : a.end).detail = d;
+        (e == beam_end::start ? a.start : a.end).detail = std::move(d);
     }
 
     // Consequence of closure: the strength combination with the largest rotation,
@@ -543,6 +544,7 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (const auto& c : b.combinations) a.combinations.push_back(analyse_combination(b, c, options.search_interior));
     a.start = assess_joint(p, b, beam_end::start);
     a.end = assess_joint(p, b, beam_end::end);
+    a.checks.reserve(32);
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(stiffness_class_check(p, a.joint_at(e)));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(joint_moment_check(p, b, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));

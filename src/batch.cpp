@@ -3,6 +3,7 @@
 #include <nlohmann/json.hpp>
 
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <condition_variable>
 #include <cstdio>
@@ -134,11 +135,44 @@ std::string fixed(const std::optional<double>& v, double scale, int decimals)
     if (!v) return "";
     const double x = *v * scale;
     if (!std::isfinite(x)) throw internal_error("a batch result value is not finite");
-    char buf[64];
-    std::snprintf(buf, sizeof buf, "%.*f", decimals, x);
-    std::string s = buf;
+    char buf[400];  // the longest fixed text of a finite double with a few decimals
+    const auto r = std::to_chars(buf, buf + sizeof buf, x, std::chars_format::fixed, decimals);
+    if (r.ec != std::errc()) throw internal_error("a batch result value does not fit its text");
+    std::string s(buf, r.ptr);
     if (s.find_first_not_of("-0.") == std::string::npos && s[0] == '-') s.erase(0, 1);  // no "-0.000"
     return s;
+}
+
+// One row of the summary CSV, with its newline.
+std::string summary_line(const batch_row& row)
+{
+    std::string out;
+    out.reserve(256 + row.message.size());
+    out += std::to_string(row.line);
+    out += ',';
+    out += csv_cell(row.id);
+    out += ',';
+    out += to_string(row.verdict);
+    out += ',';
+    out += row.governing_check;
+    out += ',';
+    out += fixed(row.worst_ratio, 1.0, 4);
+    out += ',';
+    out += fixed(row.moment_start, 1e-3, 4);
+    out += ',';
+    out += fixed(row.moment_end, 1e-3, 4);
+    out += ',';
+    out += fixed(row.rotation_start, 1e3, 4);
+    out += ',';
+    out += fixed(row.rotation_end, 1e3, 4);
+    out += ',';
+    out += fixed(row.closure_rotation_start, 1e3, 4);
+    out += ',';
+    out += fixed(row.closure_rotation_end, 1e3, 4);
+    out += ',';
+    out += csv_cell(row.message);
+    out += '\n';
+    return out;
 }
 
 }  // namespace
@@ -179,6 +213,7 @@ batch_row assess_schedule_row(const schedule& s, std::size_t index, const detail
                       std::string("internal error (a fault of pinproof, not of the input): ") + e.what()}});
     }
     if (options.json && row.verdict == batch_verdict::refused) row.json = row_json(row, nullptr).dump();
+    row.summary_line = summary_line(row);
     return row;
 }
 
@@ -260,32 +295,7 @@ std::string batch_summary_csv(const batch_result& r)
     out += "line,id,verdict,governing_check,worst_ratio,moment_start (kN*m),moment_end (kN*m),"
            "rotation_start (mrad),rotation_end (mrad),closure_rotation_start (mrad),closure_rotation_end (mrad),"
            "message\n";
-    for (const auto& row : r.rows) {
-        out += std::to_string(row.line);
-        out += ',';
-        out += csv_cell(row.id);
-        out += ',';
-        out += to_string(row.verdict);
-        out += ',';
-        out += row.governing_check;
-        out += ',';
-        out += fixed(row.worst_ratio, 1.0, 4);
-        out += ',';
-        out += fixed(row.moment_start, 1e-3, 4);
-        out += ',';
-        out += fixed(row.moment_end, 1e-3, 4);
-        out += ',';
-        out += fixed(row.rotation_start, 1e3, 4);
-        out += ',';
-        out += fixed(row.rotation_end, 1e3, 4);
-        out += ',';
-        out += fixed(row.closure_rotation_start, 1e3, 4);
-        out += ',';
-        out += fixed(row.closure_rotation_end, 1e3, 4);
-        out += ',';
-        out += csv_cell(row.message);
-        out += '\n';
-    }
+    for (const auto& row : r.rows) out += row.summary_line.empty() ? summary_line(row) : row.summary_line;
     return out;
 }
 

@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 #include <sstream>
 #include <stdexcept>
 
@@ -167,6 +168,31 @@ beam_model::load_state beam_model::integrate(const std::vector<load>& loads, dou
     return out;
 }
 
+void beam_model::end_moments_grid(const std::vector<stiffness>& starts, const std::vector<stiffness>& ends,
+                                  std::vector<std::array<double, 2>>& out) const
+{
+    std::vector<condensed_row> rows_end(ends.size());
+    for (std::size_t j = 0; j < ends.size(); ++j) rows_end[j] = row_for(1, ends[j]);
+    out.resize(starts.size() * ends.size());
+    // The singularity test is gathered over the sweep and acted on once, so
+    // that the inner loop has no branch and the compiler can vectorise it.
+    bool regular = true;
+    for (std::size_t i = 0; i < starts.size(); ++i) {
+        const condensed_row r0 = row_for(0, starts[i]);
+        std::array<double, 2>* o = out.data() + i * ends.size();
+        for (std::size_t j = 0; j < ends.size(); ++j) {
+            const condensed_row& r1 = rows_end[j];
+            const double det = r0.own * r1.own - r0.other * r1.other;
+            regular &= std::abs(det) > 0.0 && std::abs(det) <= std::numeric_limits<double>::max();
+            o[j] = {(r0.rhs * r1.own - r0.other * r1.rhs) / det, (r0.own * r1.rhs - r1.other * r0.rhs) / det};
+        }
+    }
+    if (!regular) {
+        out.clear();
+        throw internal_error("end-spring system is singular");
+    }
+}
+
 beam_state beam_model::solve(stiffness start, stiffness end) const
 {
     const auto m = end_moments(start, end);
@@ -226,26 +252,29 @@ beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
         const auto w3 = polynomial::derivative(w2);
         // Bending moment M = -EI w''; its extremes are at the element ends or where
         // the shear (-EI w''') vanishes.
-        std::vector<double> at{0.0, e.length};
-        for (double r : polynomial::roots_in(w3, 0.0, e.length)) at.push_back(r);
-        for (double sx : at) {
+        const auto moment_candidate = [&](double sx) {
             const double M = -EI_ * polynomial::value(w2, sx);
             if (first || M > s.max_sagging_moment) {
                 s.max_sagging_moment = M;
                 s.max_sagging_at = e.x0 + sx;
                 first = false;
             }
-        }
-        std::vector<double> wat{0.0, e.length};
-        for (double r : polynomial::roots_in(w1, 0.0, e.length)) wat.push_back(r);
-        for (double sx : wat) {
+        };
+        moment_candidate(0.0);
+        moment_candidate(e.length);
+        for (double sx : polynomial::roots_in(w3, 0.0, e.length)) moment_candidate(sx);
+        // Deflection extremes: at the element ends or where the slope vanishes.
+        const auto deflection_candidate = [&](double sx) {
             const double v = polynomial::value(w, sx);
             if (first_w || std::abs(v) > std::abs(s.max_deflection)) {
                 s.max_deflection = v;
                 s.max_deflection_at = e.x0 + sx;
                 first_w = false;
             }
-        }
+        };
+        deflection_candidate(0.0);
+        deflection_candidate(e.length);
+        for (double sx : polynomial::roots_in(w1, 0.0, e.length)) deflection_candidate(sx);
     }
     check_equilibrium(s);
     return s;

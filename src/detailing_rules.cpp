@@ -2,7 +2,11 @@
 
 #include <algorithm>
 #include <cmath>
+#include <map>
 #include <string>
+#include <utility>
+
+#include "detail_key.hpp"
 
 namespace pinproof {
 namespace {
@@ -226,9 +230,18 @@ std::string to_string(finding_status s)
 
 std::vector<detailing_finding> check_detailing_rules(const connection_detail& detail, const section& beam)
 {
-    return {min_gap(detail),           plate_depth(detail, beam),   plate_ductility(detail, beam),
-            bolt_hole_clearance(detail), bolt_edge_distance(detail), long_fin_plate(detail),
-            end_plate_thickness(detail)};
+    // The findings depend on the detail and the section alone; a schedule
+    // repeats few pairs, so each is worked out once per thread.
+    thread_local std::map<std::string, std::vector<detailing_finding>> cache;
+    std::string key = detail_key(detail, beam);
+    const auto it = cache.find(key);
+    if (it != cache.end()) return it->second;
+    if (cache.size() > 1024) cache.clear();
+    std::vector<detailing_finding> findings{
+        min_gap(detail),           plate_depth(detail, beam),   plate_ductility(detail, beam),
+        bolt_hole_clearance(detail), bolt_edge_distance(detail), long_fin_plate(detail),
+        end_plate_thickness(detail)};
+    return cache.emplace(std::move(key), std::move(findings)).first->second;
 }
 
 }  // namespace pinproof

@@ -65,12 +65,13 @@ closed_state solve_with_closure(const beam_model& model, const closing_joint& st
     for (joint_phase pa : phases) {
         for (joint_phase pb : phases) {
             const joint_phase p[2] = {pa, pb};
-            std::optional<joint_row> rows[2] = {row_for(start, pa), row_for(end, pb)};
-            if (!rows[0] || !rows[1]) continue;
+            const std::optional<joint_row> row_start = row_for(start, pa), row_end = row_for(end, pb);
+            if (!row_start || !row_end) continue;
+            const joint_row rows[2] = {*row_start, *row_end};
             double a[2][2], rhs[2];
             for (int j = 0; j < 2; ++j) {
                 const int k = 1 - j;
-                const joint_row& r = *rows[j];
+                const joint_row& r = rows[j];
                 if (r.fixed_rotation) {
                     // rot0_j - F_j . m = target
                     a[j][j] = F[j][j];
@@ -102,7 +103,7 @@ closed_state solve_with_closure(const beam_model& model, const closing_joint& st
             // A rotation held at closure (or by a rigid joint) is that value, not round-off.
             double* rots[2] = {&out.state.rotation_start, &out.state.rotation_end};
             for (int j = 0; j < 2; ++j)
-                if (rows[j]->fixed_rotation) *rots[j] = rows[j]->target;
+                if (rows[j].fixed_rotation) *rots[j] = rows[j].target;
             return out;
         }
     }

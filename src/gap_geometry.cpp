@@ -12,6 +12,7 @@
 
 #include <boost/math/tools/toms748_solve.hpp>
 
+#include "detail_key.hpp"
 #include "pinproof/errors.hpp"
 
 namespace pinproof {
@@ -735,55 +736,6 @@ std::string gap_check::critical_point() const
 
 namespace {
 
-// Everything build_geometry reads, by value, as text: the key of the cache below.
-std::string fingerprint(const connection_detail& d, const section& beam)
-{
-    std::string key;
-    char buf[40];
-    const auto put = [&](double v) {
-        std::snprintf(buf, sizeof buf, "%.17g|", v);
-        key += buf;
-    };
-    const auto put_opt = [&](const std::optional<double>& v) { v ? put(*v) : (void)(key += "-|"); };
-    key += std::to_string(static_cast<int>(d.type)) + "|" + std::to_string(static_cast<int>(d.support)) + "|" +
-           std::to_string(static_cast<int>(d.grade)) + "|" + std::to_string(d.bolts.rows) + "|";
-    for (double v : {d.gap, d.gap_tolerance, d.plate_top, d.plate_depth, d.plate_thickness, d.bolts.diameter,
-                     d.bolts.hole_diameter, d.bolts.pitch, d.bolts.first_bolt, d.bolts.bolt_line})
-        put(v);
-    for (const auto* c : {&d.cope_top, &d.cope_bottom}) {
-        if (*c) {
-            put((*c)->depth);
-            put((*c)->length);
-        } else {
-            key += "-|";
-        }
-    }
-    if (d.support_beam) {
-        const auto& sb = *d.support_beam;
-        key += sb.name + "|";
-        for (double v : {sb.top, sb.depth, sb.flange_width, sb.flange_thickness, sb.web_thickness, sb.root_radius}) put(v);
-    } else {
-        key += "-|";
-    }
-    if (d.centre_of_rotation) {
-        put(d.centre_of_rotation->from_support);
-        put(d.centre_of_rotation->below_top);
-    } else {
-        key += "-|";
-    }
-    for (const auto& pt : d.outline) {
-        put(pt.from_support);
-        put(pt.below_top);
-    }
-    key += "#" + beam.name + "|";
-    put(beam.I);
-    put(beam.depth);
-    for (const auto* v : {&beam.area, &beam.flange_width, &beam.flange_thickness, &beam.web_thickness, &beam.root_radius,
-                          &beam.W_el, &beam.W_pl})
-        put_opt(*v);
-    return key;
-}
-
 // The geometry at the worst-case gap and its closures depend only on the
 // detail and the section, not on the demand: a schedule repeats few pairs, so
 // each is built once per thread.
@@ -795,7 +747,7 @@ struct closing_geometry {
 const closing_geometry& geometry_of(const connection_detail& d, const section& beam)
 {
     thread_local std::map<std::string, closing_geometry> cache;
-    const std::string key = fingerprint(d, beam);
+    const std::string key = detail_key(d, beam);
     auto it = cache.find(key);
     if (it != cache.end()) return it->second;
     if (cache.size() > 1024) cache.clear();

@@ -6,7 +6,6 @@
 #include <algorithm>
 #include <cctype>
 #include <cmath>
-#include <cstdio>
 #include <cstdlib>
 #include <fstream>
 #include <map>
@@ -507,32 +506,41 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     // The catalogue entry's geometry, with its type, for the end-gap check. A
     // problem in it is the catalogue's, named by its pointer there.
     // A schedule repeats few pairs of detail and section: each pair is read once
-    // per thread (the reading depends on nothing else).
-    // The key is everything the reading depends on, by value.
-    thread_local std::map<std::string, std::pair<connection_detail, problem_list>> read_details;
-    const auto number = [](const std::optional<double>& v) {
-        char buf[32];
-        std::snprintf(buf, sizeof buf, "%.17g", v.value_or(-1.0));
-        return std::string(buf);
+    // per thread (the reading depends on nothing else). The cache is found by
+    // the entry's address and the section, and a hit is used only when the
+    // entry still holds the same type, pointer and geometry (an address may be
+    // reused by another catalogue).
+    struct read_detail {
+        std::string type, pointer;
+        nlohmann::json geometry;
+        connection_detail detail;
+        problem_list problems;
     };
-    const std::string section_key = b.sec.name + "|" + number(b.sec.depth) + "|" + number(b.sec.flange_thickness) +
-                                    "|" + number(b.sec.flange_width) + "|" + number(b.sec.web_thickness) + "|" +
-                                    number(b.sec.root_radius);
+    thread_local std::map<std::pair<const catalogue_detail*, std::string>, read_detail> read_details;
+    std::string section_key = b.sec.name;
+    for (const auto& v : {std::optional<double>(b.sec.depth), b.sec.flange_thickness, b.sec.flange_width,
+                          b.sec.web_thickness, b.sec.root_radius}) {
+        const double x = v.value_or(-1.0);
+        section_key.append(reinterpret_cast<const char*>(&x), sizeof x);
+    }
     for (int i = 0; i < 2; ++i) {
         const catalogue_detail& d = *details[i];
         if (!d.geometry.is_object()) continue;
-        const std::string key = d.type + "|" + d.pointer + "|" + d.geometry.dump() + "|" + section_key;
-        auto cached = read_details.find(key);
-        if (cached == read_details.end()) {
+        auto cached = read_details.find({&d, section_key});
+        if (cached == read_details.end() || cached->second.type != d.type || cached->second.pointer != d.pointer ||
+            cached->second.geometry != d.geometry) {
             nlohmann::json g = d.geometry;
             g["type"] = d.type;
-            problem_list found;
-            connection_detail read = read_connection_detail(g, d.pointer + "/geometry", b.sec, found);
+            read_detail r;
+            r.type = d.type;
+            r.pointer = d.pointer;
+            r.geometry = d.geometry;
+            r.detail = read_connection_detail(g, d.pointer + "/geometry", b.sec, r.problems);
             if (read_details.size() > 4096) read_details.clear();
-            cached = read_details.emplace(key, std::make_pair(std::move(read), std::move(found))).first;
+            cached = read_details.insert_or_assign({&d, section_key}, std::move(r)).first;
         }
-        const problem_list& problems = cached->second.second;
-        const connection_detail& detail = cached->second.first;
+        const problem_list& problems = cached->second.problems;
+        const connection_detail& detail = cached->second.detail;
         if (!problems.empty()) {
             for (const auto& pr : problems.problems())
                 out.problems.push_back({at_line + " (" + (i == 0 ? "start" : "end") + " detail " + d.id + ", catalogue " +

@@ -264,10 +264,21 @@ section rolled_i_section(const section_dimensions& d)
 
 std::optional<section> find_catalogue_section(std::string_view name)
 {
+    // The properties of every catalogue section, computed once: a schedule
+    // looks up a few names many times.
+    struct indexed {
+        std::string key;
+        section properties;
+    };
+    static const std::vector<indexed> index = [] {
+        std::vector<indexed> out;
+        for (const auto& d : parsed_catalogue()) out.push_back({lookup_key(d.name), rolled_i_section(d)});
+        return out;
+    }();
     const std::string key = lookup_key(name);
     if (key.empty()) return std::nullopt;
-    for (const auto& d : parsed_catalogue()) {
-        if (lookup_key(d.name) == key) return rolled_i_section(d);
+    for (const auto& i : index) {
+        if (i.key == key) return i.properties;
     }
     return std::nullopt;
 }

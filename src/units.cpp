@@ -360,8 +360,12 @@ std::string format_quantity(double si_value, dimension d, unit_system system, in
     if (!std::isfinite(si_value))
         throw internal_error("non-finite value of " + describe(d) + " reached the output");
     const display_unit unit = display_unit_for(d, system);
-    const std::string number = format_number(si_value / unit.si_per_unit, significant);
-    return unit.symbol.empty() ? number : number + " " + unit.symbol;
+    std::string out = format_number(si_value / unit.si_per_unit, significant);
+    if (!unit.symbol.empty()) {
+        out += ' ';
+        out += unit.symbol;
+    }
+    return out;
 }
 
 std::string format_number(double value, int significant)
@@ -376,10 +380,11 @@ std::string format_number(double value, int significant)
     // decides the layout (9.9996 -> 1.000e+01 -> "10.00").
     auto r = std::to_chars(buf, buf + sizeof buf, value, std::chars_format::scientific, significant - 1);
     if (r.ec != std::errc()) throw internal_error("format_number: buffer too small");
-    const std::string scientific(buf, r.ptr);
-    const int exponent = std::atoi(scientific.c_str() + scientific.find('e') + 1);
+    const char* e = std::find(buf, r.ptr, 'e');
+    int exponent = 0;
+    std::from_chars(e + 1 + (e[1] == '+'), r.ptr, exponent);
     const int decimals = std::max(0, significant - 1 - exponent);
-    if (exponent >= 9 || decimals > 6) return scientific;
+    if (exponent >= 9 || decimals > 6) return std::string(buf, r.ptr);
     r = std::to_chars(buf, buf + sizeof buf, value, std::chars_format::fixed, decimals);
     if (r.ec != std::errc()) throw internal_error("format_number: buffer too small");
     return std::string(buf, r.ptr);

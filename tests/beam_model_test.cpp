@@ -15,6 +15,7 @@
 #include <Eigen/Dense>
 
 #include <algorithm>
+#include <array>
 #include <cmath>
 #include <cstdio>
 #include <string>
@@ -217,6 +218,32 @@ TEST_CASE("unequal end springs - full UDL [MW63 - pack 5 D]: M_A = (wL^2/4) rA (
     CHECK(close(s.moment_start, MA, 1e-9));
     CHECK(close(s.moment_end, MB, 1e-9));
     CHECK(close(s.reaction_start, w * L / 2 + (MA - MB) / L, 1e-9));
+}
+
+TEST_CASE("sweep grid - full UDL [MW63 - pack 5 D]: end_moments_grid gives M_A - M_B of the fixity-factor closed form for every pair - pin and rigid included - tol 1e-9")
+{
+    const beam_model m(L, EI, {udl(w)});
+    std::vector<stiffness> ks{stiffness::pinned(), stiffness::rigid()};
+    for (double kappa : {0.05, 0.5, 1.3, 7.0, 25.0, 1e4}) ks.push_back(stiffness::spring(kappa * EI / L));
+    const auto r = [](const stiffness& k) { return k.is_rigid() ? 1.0 : 1 / (1 + 3 * EI / (k.value() * L)); };
+    std::vector<std::array<double, 2>> grid;
+    m.end_moments_grid(ks, ks, grid);
+    REQUIRE(grid.size() == ks.size() * ks.size());
+    for (std::size_t i = 0; i < ks.size(); ++i)
+        for (std::size_t j = 0; j < ks.size(); ++j) {
+            const double rA = r(ks[i]), rB = r(ks[j]);
+            const double MA = w * L * L / 4 * rA * (2 - rB) / (4 - rA * rB);
+            const double MB = w * L * L / 4 * rB * (2 - rA) / (4 - rA * rB);
+            const auto& g = grid[i * ks.size() + j];
+            CHECK(close(g[0], MA, 1e-9, 1e-9 * w * L * L));
+            CHECK(close(g[1], MB, 1e-9, 1e-9 * w * L * L));
+            // The one-pair entry point forms the same rows: the same numbers.
+            const auto one = m.end_moments(ks[i], ks[j]);
+            CHECK(close(g[0], one[0], 1e-15, 1e-300));
+            CHECK(close(g[1], one[1], 1e-15, 1e-300));
+        }
+    m.end_moments_grid({}, ks, grid);
+    CHECK(grid.empty());
 }
 
 TEST_CASE("rigid limit is exact: S = 1e30 N*m/rad equals rigid to 1e-9 - S -> 0 tends to the pin (common practice - no source)")

@@ -37,11 +37,14 @@ struct batch_row {
     // (rad) over every combination (the rotation-demand checks).
     std::optional<double> moment_start, moment_end;
     std::optional<double> rotation_start, rotation_end;
-    // Rotation (rad) at which the end gap closes. Not computed yet: the end-gap
-    // check of a catalogue entry's geometry is not applied to schedules, so
-    // these stay empty.
+    // Rotation (rad) at which the end gap closes in sagging, at the worst-case
+    // gap of the catalogue entry's geometry; empty where the entry gives no
+    // geometry or nothing closes within 90 degrees.
     std::optional<double> closure_rotation_start, closure_rotation_end;
     std::vector<input_problem> problems;  // of a refused row
+    // The row's line of the summary CSV (batch_summary_csv), with its newline,
+    // formatted by the worker that assessed it.
+    std::string summary_line;
     std::string json;                     // the row as JSON text, when batch_options::json
 };
 

@@ -79,12 +79,26 @@ public:
     // Hogging end moments for a pair of joints from the condensed 2x2 system.
     std::array<double, 2> end_moments(stiffness start, stiffness end) const;
 
+    // End moments for every pair (starts[i], ends[j]) of a sweep, written to
+    // out[i * ends.size() + j]. Each joint's row of the condensed system is
+    // formed once for the whole sweep, so a pair costs one 2x2 elimination.
+    // Throws internal_error, writing nothing usable, if any pair is singular.
+    void end_moments_grid(const std::vector<stiffness>& starts, const std::vector<stiffness>& ends,
+                          std::vector<std::array<double, 2>>& out) const;
+
     // Deflection (m, downward) and bending moment (N*m, sagging) at x for the
     // state with the given hogging end moments.
     double deflection_at(double x, double moment_start, double moment_end) const;
     double moment_at(double x, double moment_start, double moment_end) const;
 
 private:
+    // Row j of the condensed system a[j][j] m_j + a[j][k] m_k = b_j for joint
+    // j (0 start, 1 end) with stiffness s; see end_moments.
+    struct condensed_row {
+        double own = 0, other = 0, rhs = 0;
+    };
+    condensed_row row_for(int j, stiffness s) const noexcept;
+
     struct element {
         double x0 = 0, length = 0;
         double qa = 0, qb = 0;  // line load at the element's ends, N/m
@@ -115,29 +129,28 @@ private:
     std::array<double, 6> closure_{};  // shear and moment closure of the three states
 };
 
-// Defined here so that a sweep over many stiffness pairs can inline it.
-inline std::array<double, 2> beam_model::end_moments(stiffness start, stiffness end) const
+// Defined here so that a sweep over many stiffness pairs can inline them.
+inline beam_model::condensed_row beam_model::row_for(int j, stiffness s) const noexcept
 {
-    // Unknown hogging moments m. For each end j (other end k), one equation:
+    // Unknown hogging moments m. For end j (other end k), one equation:
     //   spring or pin: m_j = S_j rotation_j, written for a soft spring as
     //                  (1 + S_j F_jj) m_j + S_j F_jk m_k = S_j rot0_j   (a pin, S_j = 0, gives m_j = 0)
     //   stiff spring:  (F_jj + 1/S_j) m_j + F_jk m_k = rot0_j           (divided through by S_j)
     //   rigid:         F_jj m_j + F_jk m_k = rot0_j                     (rotation_j = 0 exactly)
     // so that no term is huge; the form is chosen by S_j F_jj.
-    const stiffness joints[2] = {start, end};
-    double a[2][2], b[2];
-    for (int j = 0; j < 2; ++j) {
-        const int k = 1 - j;
-        const double S = joints[j].value();
-        const bool compliance_form = joints[j].is_rigid() || S * flex_[j][j] >= 1.0;
-        const double compliance = joints[j].is_rigid() ? 0.0 : (compliance_form ? 1.0 / S : 0.0);
-        a[j][j] = compliance_form ? flex_[j][j] + compliance : 1.0 + S * flex_[j][j];
-        a[j][k] = compliance_form ? flex_[j][k] : S * flex_[j][k];
-        b[j] = compliance_form ? rot0_[j] : S * rot0_[j];
-    }
-    const double det = a[0][0] * a[1][1] - a[0][1] * a[1][0];
+    const int k = 1 - j;
+    const double S = s.value();
+    if (s.is_rigid()) return {flex_[j][j], flex_[j][k], rot0_[j]};
+    if (S * flex_[j][j] >= 1.0) return {flex_[j][j] + 1.0 / S, flex_[j][k], rot0_[j]};
+    return {1.0 + S * flex_[j][j], S * flex_[j][k], S * rot0_[j]};
+}
+
+inline std::array<double, 2> beam_model::end_moments(stiffness start, stiffness end) const
+{
+    const condensed_row r0 = row_for(0, start), r1 = row_for(1, end);
+    const double det = r0.own * r1.own - r0.other * r1.other;
     if (!(std::abs(det) > 0.0) || !std::isfinite(det)) throw internal_error("end-spring system is singular");
-    return {(b[0] * a[1][1] - a[0][1] * b[1]) / det, (a[0][0] * b[1] - a[1][0] * b[0]) / det};
+    return {(r0.rhs * r1.own - r0.other * r1.rhs) / det, (r0.own * r1.rhs - r1.other * r0.rhs) / det};
 }
 
 }  // namespace pinproof
