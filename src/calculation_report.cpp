@@ -496,7 +496,7 @@ void report_writer::beam_line_chart(const beam& b, const combination& c, beam_en
     const double th_s = l.pinned_rotation * 1e3;  // mrad
     const double mf = u_.in(l.fixed_moment, md);
     line_chart ch;
-    ch.title = "Beam " + b.id + ", " + c.name + ": beam line, " + end + " end";
+    ch.title = "Beam " + b.id + ", " + c.name + ": beam line at the " + end + " joint";
     ch.x.label = "end rotation (mrad)";
     ch.y.label = "end moment (" + u_.sym(md) + "), hogging +";
     ch.width = 760;
@@ -516,17 +516,19 @@ void report_writer::beam_line_chart(const beam& b, const combination& c, beam_en
     };
     joint_line(l.lower, "S min", "#2ca02c");
     joint_line(l.upper, "S max", "#d62728");
-    // The intersections, each drawn as a small diamond.
-    const double dx = 0.02 * std::abs(th_s), dy = 0.03 * std::abs(mf);
+    // The intersections, each marked by a diamond in its joint line's colour.
     for (const auto* pt : {&l.lower, &l.upper}) {
         const double x = pt->rotation * 1e3, y = u_.in(pt->moment, md);
-        ch.series.push_back({(pt == &l.lower ? std::string("S min") : std::string("S max")) + ": " +
-                                 format_number(x, 4) + " mrad, " + u_.q(pt->moment, md),
-                             {{x - dx, y}, {x, y + dy}, {x + dx, y}, {x, y - dy}, {x - dx, y}},
-                             "#000000", false});
+        chart_series s{(pt == &l.lower ? std::string("S min") : std::string("S max")) + " on the beam line: " +
+                           format_number(x, 4) + " mrad, " + u_.q(pt->moment, md),
+                       {{x, y}},
+                       pt == &l.lower ? "#2ca02c" : "#d62728",
+                       false};
+        s.marks_only = true;
+        ch.series.push_back(s);
     }
     figure("beam-line", to_svg(ch),
-           "Beam line of the " + end + " end, combination " + c.name + ": M = M_F (1 - theta/theta_s) with M_F = " +
+           "Beam line at the " + end + " joint, combination " + c.name + ": M = M_F (1 - theta/theta_s) with M_F = " +
                u_.q(l.fixed_moment, md) + " (joint rigid) and theta_s = " + format_number(th_s, 4) +
                " mrad (joint pinned), the far joint held at its lower bound " + u_.stiff(l.far_end) +
                "; the joint lines M = S theta for the bounds of the stiffness range; the marked intersections are "
@@ -540,7 +542,7 @@ void report_writer::gap_drawings(const beam& b, const beam_assessment& ba)
         if (!svg) continue;
         o_ << "<h3>Gap detail, " << to_string(e) << " end</h3>\n";
         figure("gap-detail", *svg,
-               "Elevation of the " + to_string(e) + " end of beam " + b.id +
+               "Elevation at the " + to_string(e) + " joint of beam " + b.id +
                    " at the worst-case gap, turned to the rotation demand (exaggerated as stated).");
     }
 }
@@ -667,7 +669,7 @@ std::optional<std::string> gap_detail_svg(const beam& b, beam_end e, const beam_
         }
     }
     detail_drawing_options o;
-    o.title = "Beam " + b.id + ", " + to_string(e) + " end";
+    o.title = "Beam " + b.id + ", " + to_string(e) + " joint";
     o.mirror = e == beam_end::start;
     return detail_svg(build_geometry(*j.detail, b.sec), *j.detail, demand, o);
 }

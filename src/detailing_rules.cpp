@@ -1,6 +1,7 @@
 #include "pinproof/detailing_rules.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 #include <map>
 #include <string>
@@ -241,6 +242,12 @@ std::vector<detailing_finding> check_detailing_rules(const connection_detail& de
         min_gap(detail),           plate_depth(detail, beam),   plate_ductility(detail, beam),
         bolt_hole_clearance(detail), bolt_edge_distance(detail), long_fin_plate(detail),
         end_plate_thickness(detail)};
+    // Each message is a sentence: it starts with a capital and ends with a full stop.
+    for (auto& f : findings) {
+        if (f.message.empty()) continue;
+        f.message[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(f.message[0])));
+        if (f.message.back() != '.') f.message += '.';
+    }
     return cache.emplace(std::move(key), std::move(findings)).first->second;
 }
 

@@ -43,6 +43,15 @@ std::string num(double v)
     return b;
 }
 
+// A closed diamond path of half-width 5 px centred on (x, y), in pixels, so
+// that it keeps its shape whatever the axis scales.
+std::string diamond(double x, double y)
+{
+    constexpr double h = 5;
+    return "M" + num(x - h) + " " + num(y) + " L" + num(x) + " " + num(y - h) + " L" + num(x + h) + " " + num(y) +
+           " L" + num(x) + " " + num(y + h) + " Z";
+}
+
 struct axis_map {
     double lo, hi, p0, p1;  // data range -> pixel range
     bool log;
@@ -264,9 +273,17 @@ std::string to_svg(const line_chart& c)
         std::string d;
         for (const auto& [x, y] : s.points) {
             if ((c.x.log && !(x > 0)) || (c.y.log && !(y > 0))) continue;
+            if (s.marks_only) {
+                d += (d.empty() ? "" : " ") + diamond(X(x), Y(y));
+                continue;
+            }
             d += (d.empty() ? "M" : " L") + num(X(x)) + " " + num(Y(y));
         }
         if (d.empty()) continue;
+        if (s.marks_only) {
+            o << "<path d=\"" << d << "\" stroke=\"" << escape(col) << "\" fill=\"#ffffff\"/>\n";
+            continue;
+        }
         o << "<path d=\"" << d << "\" stroke=\"" << escape(col) << "\"" << (s.dashed ? " stroke-dasharray=\"7 4\"" : "")
           << "/>\n";
     }
@@ -277,9 +294,13 @@ std::string to_svg(const line_chart& c)
     const double lx = left + plot_w + 18;
     for (std::size_t i = 0; i < c.series.size(); ++i) {
         ly += 18;
-        o << "<line x1=\"" << num(lx) << "\" y1=\"" << num(ly - 4) << "\" x2=\"" << num(lx + 30) << "\" y2=\""
-          << num(ly - 4) << "\" stroke=\"" << escape(colours[i]) << "\" stroke-width=\"2\""
-          << (c.series[i].dashed ? " stroke-dasharray=\"7 4\"" : "") << "/>\n";
+        if (c.series[i].marks_only)
+            o << "<path d=\"" << diamond(lx + 15, ly - 4) << "\" stroke=\"" << escape(colours[i])
+              << "\" stroke-width=\"2\" fill=\"#ffffff\"/>\n";
+        else
+            o << "<line x1=\"" << num(lx) << "\" y1=\"" << num(ly - 4) << "\" x2=\"" << num(lx + 30) << "\" y2=\""
+              << num(ly - 4) << "\" stroke=\"" << escape(colours[i]) << "\" stroke-width=\"2\""
+              << (c.series[i].dashed ? " stroke-dasharray=\"7 4\"" : "") << "/>\n";
         o << "<text x=\"" << num(lx + 38) << "\" y=\"" << num(ly) << "\">" << escape(c.series[i].label) << "</text>\n";
     }
     for (const auto& b : c.bands) {

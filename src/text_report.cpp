@@ -16,14 +16,15 @@ std::string pad(const std::string& s, std::size_t w)
     // Width in characters, counting UTF-8 continuation bytes as none.
     std::size_t n = 0;
     for (unsigned char c : s) n += (c & 0xC0) != 0x80;
-    return n >= w ? s : s + std::string(w - n, ' ');
+    // A cell wider than its column still keeps one space before the next.
+    return n >= w ? s + " " : s + std::string(w - n, ' ');
 }
 
 std::string rpad(const std::string& s, std::size_t w)
 {
     std::size_t n = 0;
     for (unsigned char c : s) n += (c & 0xC0) != 0x80;
-    return n >= w ? s : std::string(w - n, ' ') + s;
+    return n >= w ? " " + s : std::string(w - n, ' ') + s;
 }
 
 // Wraps text to `width` columns, every line after the first indented.
@@ -108,13 +109,13 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
     for (const auto& n : a.notes) o << "  Note: " << wrap(n, 92, "        ") << "\n";
 
     o << "\n  Joints (stiffness in " << u.unit(dims::rotational_stiffness) << ")\n";
-    o << "    " << pad("end", 7) << pad("S min .. S max", 22) << pad("S*L/EI", 18) << pad("fixity r", 16) << "class (lower .. upper bound)\n";
+    o << "    " << pad("end", 7) << pad("S min .. S max", 22) << pad("S*L/EI", 18) << pad("fixity r", 18) << "class (lower .. upper bound)\n";
     for (const auto* j : {&a.start, &a.end}) {
         o << "    " << pad(to_string(j->end), 7) << pad(u.stiff(j->range.min) + " .. " + u.stiff(j->range.max), 22)
           << pad(ratio_text(j->ratio_lower) + " .. " + ratio_text(j->ratio_upper), 18)
-          << pad(format_number(j->fixity_lower, 3) + " .. " + format_number(j->fixity_upper, 3), 16)
+          << pad(format_number(j->fixity_lower, 3) + " .. " + format_number(j->fixity_upper, 3), 18)
           << "EN 1993-1-8 (" << to_string(p.frame) << "): " << to_string(j->en_lower) << " .. " << to_string(j->en_upper)
-          << "\n" << std::string(4 + 7 + 22 + 18 + 16, ' ') << "AISC 360: " << to_string(j->aisc_lower) << " .. "
+          << "\n" << std::string(4 + 7 + 22 + 18 + 18, ' ') << "AISC 360: " << to_string(j->aisc_lower) << " .. "
           << to_string(j->aisc_upper) << "\n";
         const auto& mr = b.at(j->end).moment_resistance;
         if (mr) o << "    " << pad("", 7) << "moment resistance " << u.num(*mr, dims::moment) << " " << u.unit(dims::moment) << "\n";

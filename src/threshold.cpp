@@ -204,17 +204,23 @@ std::vector<std::string> threshold_report_lines(const project& p, const beam& b)
         return "S = " + format_quantity(t.at.value(), dims::rotational_stiffness, p.units) +
                " (S*L/EI = " + format_number(t.ratio, 3) + ")";
     };
+    const auto gives = [](check_status s) -> std::string {
+        switch (s) {
+        case check_status::pass: return "passes";
+        case check_status::fail: return "fails";
+        case check_status::warn: return "warns";
+        case check_status::not_applicable: return "does not apply";
+        }
+        return "unknown";
+    };
     for (const auto& t : find_thresholds(p, b, {moving_end::both, stiffness::pinned()})) {
         const bool class_check = t.check.rfind("stiffness-class-", 0) == 0;
         if (class_check && t.below == check_status::pass && is_adverse(t.above))
             out.push_back(t.check + ": the pinned assumption stops holding above " + S(t) + ".");
         else if (t.below == check_status::pass)
-            out.push_back(t.check + ": passes up to " + S(t) + ", " + to_string(t.above) + " above.");
-        else if (t.above == check_status::pass)
-            out.push_back(t.check + ": " + to_string(t.below) + " below " + S(t) + ", passes above.");
+            out.push_back(t.check + ": passes up to " + S(t) + ", " + gives(t.above) + " above.");
         else
-            out.push_back(t.check + ": " + to_string(t.below) + " below and " + to_string(t.above) + " above " + S(t) +
-                          ".");
+            out.push_back(t.check + ": " + gives(t.below) + " below " + S(t) + ", " + gives(t.above) + " above.");
     }
     if (out.empty())
         out.push_back("No check changes its answer between a true pin and a rigid joint (both ends equal).");

@@ -78,3 +78,21 @@ TEST_CASE("non-finite data [project rules]: internal_error - never drawn")
     c.series.push_back({"bad", {{0, 0}, {1, std::nan("")}}, "", false});
     CHECK_THROWS_AS(to_svg(c), internal_error);
 }
+
+TEST_CASE("marked points (common practice - no source): a diamond of fixed pixel size at each point - not joined - a diamond in the legend")
+{
+    line_chart c;
+    c.x = {"x (-)", false, 0.0, 10.0};
+    c.y = {"y (-)", false, 0.0, 100.0};
+    chart_series marks{"two points", {{2, 10}, {8, 90}}, "#d62728", false};
+    marks.marks_only = true;
+    c.series.push_back(marks);
+    const std::string s = to_svg(c);
+    // Two diamonds on the plot and one in the legend: three closed paths, no line sample.
+    const std::regex diamond("<path d=\"M[0-9.]+ [0-9.]+ L[0-9.]+ [0-9.]+ L[0-9.]+ [0-9.]+ L[0-9.]+ [0-9.]+ Z( M[^\"]*)?\" stroke=\"#d62728\"");
+    std::size_t closed = 0;
+    for (std::size_t at = s.find(" Z"); at != std::string::npos; at = s.find(" Z", at + 1)) ++closed;
+    CHECK(closed == 3);
+    CHECK(std::regex_search(s, diamond));
+    CHECK_FALSE(std::regex_search(s, std::regex("<line [^>]*stroke=\"#d62728\"")));
+}

@@ -1,5 +1,5 @@
 // A small self-contained SVG line-chart writer: linear or log axes with
-// 1-2-5 tick numbers, axis labels with units, a legend outside the plot area,
+// 1-2-5 tick numbers, axis labels with units, lines or marked points, a legend outside the plot area,
 // vertical marker lines whose labels are staggered so that they never
 // overlap, and shaded x-ranges. Text is escaped; non-finite points are an
 // internal_error, never drawn.
@@ -17,6 +17,7 @@ struct chart_series {
     std::vector<std::pair<double, double>> points;  // (x, y); x ascending
     std::string colour;    // any SVG colour; empty: from the default palette
     bool dashed = false;
+    bool marks_only = false;  // each point drawn as a diamond, the points not joined
 };
 
 struct chart_marker {
