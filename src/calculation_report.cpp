@@ -540,7 +540,7 @@ void report_writer::gap_drawings(const beam& b, const beam_assessment& ba)
     for (beam_end e : {beam_end::start, beam_end::end}) {
         const auto svg = gap_detail_svg(b, e, ba);
         if (!svg) continue;
-        o_ << "<h3>Gap detail, " << to_string(e) << " end</h3>\n";
+        o_ << "<h3>Gap detail, " << to_string(e) << " joint</h3>\n";
         figure("gap-detail", *svg,
                "Elevation at the " + to_string(e) + " joint of beam " + b.id +
                    " at the worst-case gap, turned to the rotation demand (exaggerated as stated).");
