@@ -110,12 +110,8 @@ std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr
                          "stiffnesses, \"rigid\" or multiples of EI/L)");
         ok = false;
     } else if (it->is_object()) {
-        reject_unknown_keys(*it, sp, {"min", "max"}, problems);
-        std::optional<catalogue_stiffness> lo, hi;
-        if (!it->contains("min")) problems.add(child(sp, "min"), "missing required field \"min\"");
-        else lo = read_bound(it->at("min"), child(sp, "min"), problems);
-        if (!it->contains("max")) problems.add(child(sp, "max"), "missing required field \"max\"");
-        else hi = read_bound(it->at("max"), child(sp, "max"), problems);
+        const auto [lo, hi] = read_bounds<catalogue_stiffness>(
+            *it, sp, [&](const json& v, const std::string& at) { return read_bound(v, at, problems); }, problems);
         if (lo && hi && !comparable(*lo, *hi)) {
             problems.add(sp, "expected min and max in the same form (both absolute stiffnesses or both multiples of "
                              "EI/L), found min " + shown(it->at("min")) + " and max " + shown(it->at("max")));

@@ -73,4 +73,25 @@ bool expect_object(const json& value, const std::string& pointer, problem_list& 
 void reject_unknown_keys(const json& obj, const std::string& pointer, const std::vector<std::string>& known,
                          problem_list& problems);
 
+// The bounds of a range object {"min": ..., "max": ...} at `pointer`: an
+// unknown key or a missing bound is a problem; each present bound is read by
+// `read(value, pointer_of_the_bound)`, which returns std::optional<T>.
+template <class T>
+struct bounds {
+    std::optional<T> min, max;
+};
+template <class T, class Reader>
+bounds<T> read_bounds(const json& range, const std::string& pointer, Reader read, problem_list& problems)
+{
+    reject_unknown_keys(range, pointer, {"min", "max"}, problems);
+    bounds<T> out;
+    for (const char* key : {"min", "max"}) {
+        const std::string at = child(pointer, key);
+        std::optional<T>& bound = std::string_view(key) == "min" ? out.min : out.max;
+        if (!range.contains(key)) problems.add(at, std::string("missing required field \"") + key + "\"");
+        else bound = read(range.at(key), at);
+    }
+    return out;
+}
+
 }  // namespace pinproof::json_fields

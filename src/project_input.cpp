@@ -246,12 +246,9 @@ struct reader {
                                  "\"stiffness_distribution\"");
             ok = false;
         } else if (it->is_object()) {
-            reject_unknown_keys(*it, sp, {"min", "max"}, problems);
-            std::optional<stiffness> lo, hi;
-            if (!it->contains("min")) problems.add(child(sp, "min"), "missing required field \"min\"");
-            else lo = read_stiffness(it->at("min"), child(sp, "min"), EI_over_L);
-            if (!it->contains("max")) problems.add(child(sp, "max"), "missing required field \"max\"");
-            else hi = read_stiffness(it->at("max"), child(sp, "max"), EI_over_L);
+            const auto [lo, hi] = read_bounds<stiffness>(
+                *it, sp, [&](const json& v, const std::string& at) { return read_stiffness(v, at, EI_over_L); },
+                problems);
             if (lo && hi && *hi < *lo) {
                 problems.add(child(sp, "min"), "expected min not above max, found min " + shown(it->at("min")) +
                                                    " above max " + shown(it->at("max")));
