@@ -475,3 +475,34 @@ TEST_CASE("an outline overlapping the support at rest closes at zero")
     REQUIRE(c.contact);
     CHECK(c.contact->support_part.find("supporting beam top flange") != std::string::npos);
 }
+
+TEST_CASE("per-thread results of a detail on a section [closed form]: a detail that differs in one value - or a section that differs in one dimension - is never given another's closure - tol 1e-12")
+{
+    // check_gap keeps the closure geometry of each detail and section; every
+    // call must still equal the closure worked out afresh (find_closure on
+    // build_geometry, which nothing caches).
+    const auto fresh = [](const connection_detail& d, const section& s) {
+        return *find_closure(build_geometry(d, s), rotation_sense::sagging).rotation;
+    };
+    const auto cached = [](const connection_detail& d, const section& s) {
+        return *check_gap(d, s, {0.01, 0.0}, false).sagging.closing.rotation;
+    };
+    connection_detail a = fin_plate(10 * mm), b = fin_plate(10 * mm);
+    b.gap_tolerance = 1 * mm;
+    connection_detail c = fin_plate(10 * mm);
+    c.cope_top = cope{30 * mm, 120 * mm};
+    section deeper = ipe300();
+    deeper.depth = 310 * mm;
+    section renamed = ipe300();
+    renamed.name = "IPE 300 (as measured)";
+    for (int pass = 0; pass < 2; ++pass) {
+        CHECK(std::abs(cached(a, ipe300()) - fresh(a, ipe300())) <= 1e-12);
+        CHECK(std::abs(cached(b, ipe300()) - fresh(b, ipe300())) <= 1e-12);
+        CHECK(std::abs(cached(c, ipe300()) - fresh(c, ipe300())) <= 1e-12);
+        CHECK(std::abs(cached(a, deeper) - fresh(a, deeper)) <= 1e-12);
+        CHECK(std::abs(cached(a, renamed) - fresh(a, renamed)) <= 1e-12);
+    }
+    // The values differ, so a stale answer would have been seen.
+    CHECK(fresh(b, ipe300()) < fresh(a, ipe300()));
+    CHECK(fresh(a, deeper) != fresh(a, ipe300()));
+}
