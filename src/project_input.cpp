@@ -119,9 +119,8 @@ struct reader {
             auto s = find_catalogue_section(name);
             if (!s) {
                 problems.add(sp, "expected a section name from the built-in catalogue (IPE 80 to IPE 600, HE 100 A "
-                                 "to HE 600 A, HE 100 B to HE 600 B, W shapes such as W18x35) or an object with I "
-                                 "and depth, found \"" + name + "\", which is not in the catalogue (pinproof "
-                                 "sections lists it)");
+                                 "to HE 600 A, HE 100 B to HE 600 B, W shapes such as W18x35; pinproof sections "
+                                 "lists them) or an object with I and depth, " + unknown_section_text(name));
             }
             return s;
         }

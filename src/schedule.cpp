@@ -446,7 +446,8 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
         if (!sec)
             r.add(*s.column("section"),
                   "expected a section name from the built-in catalogue (IPE 80 to IPE 600, HE 100 A to HE 600 A, "
-                  "HE 100 B to HE 600 B, W shapes such as W18x35; pinproof sections lists them), found " + in_quotes(*name));
+                  "HE 100 B to HE 600 B, W shapes such as W18x35; pinproof sections lists them), " +
+                      unknown_section_text(*name));
     }
 
     std::optional<double> line_loads[2];

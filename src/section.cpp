@@ -1,11 +1,14 @@
 #include "pinproof/section.hpp"
 
+#include <algorithm>
+#include <cctype>
 #include <charconv>
 #include <cmath>
-#include <cctype>
 #include <stdexcept>
 #include <string>
 #include <system_error>
+#include <utility>
+#include <vector>
 
 #include "pinproof/errors.hpp"
 #include "section_catalogue_data.hpp"
@@ -262,25 +265,82 @@ section rolled_i_section(const section_dimensions& d)
     return s;
 }
 
-std::optional<section> find_catalogue_section(std::string_view name)
+namespace {
+
+// The properties of every catalogue section with its matching key, computed
+// once: a schedule looks up a few names many times.
+struct indexed_section {
+    std::string key;
+    section properties;
+};
+
+const std::vector<indexed_section>& catalogue_index()
 {
-    // The properties of every catalogue section, computed once: a schedule
-    // looks up a few names many times.
-    struct indexed {
-        std::string key;
-        section properties;
-    };
-    static const std::vector<indexed> index = [] {
-        std::vector<indexed> out;
+    static const std::vector<indexed_section> index = [] {
+        std::vector<indexed_section> out;
         for (const auto& d : parsed_catalogue()) out.push_back({lookup_key(d.name), rolled_i_section(d)});
         return out;
     }();
+    return index;
+}
+
+// Levenshtein distance (insertions, deletions and substitutions of one character).
+std::size_t edit_distance(const std::string& a, const std::string& b)
+{
+    std::vector<std::size_t> row(b.size() + 1);
+    for (std::size_t j = 0; j <= b.size(); ++j) row[j] = j;
+    for (std::size_t i = 1; i <= a.size(); ++i) {
+        std::size_t diagonal = row[0];
+        row[0] = i;
+        for (std::size_t j = 1; j <= b.size(); ++j) {
+            const std::size_t above = row[j];
+            row[j] = std::min({row[j] + 1, row[j - 1] + 1, diagonal + (a[i - 1] == b[j - 1] ? 0 : 1)});
+            diagonal = above;
+        }
+    }
+    return row[b.size()];
+}
+
+}  // namespace
+
+std::optional<section> find_catalogue_section(std::string_view name)
+{
     const std::string key = lookup_key(name);
     if (key.empty()) return std::nullopt;
-    for (const auto& i : index) {
+    for (const auto& i : catalogue_index()) {
         if (i.key == key) return i.properties;
     }
     return std::nullopt;
+}
+
+std::vector<std::string> similar_catalogue_sections(std::string_view name, std::size_t most)
+{
+    const std::string key = lookup_key(name);
+    if (key.empty() || most == 0) return {};
+    std::vector<std::pair<std::size_t, const indexed_section*>> near;
+    for (const auto& i : catalogue_index()) {
+        const std::size_t d = edit_distance(key, i.key);
+        if (d <= 2) near.emplace_back(d, &i);
+    }
+    // Only the nearest: a name one edit away is not listed beside names two away.
+    std::size_t best = 3;
+    for (const auto& n : near) best = std::min(best, n.first);
+    std::vector<std::string> out;
+    for (const auto& [d, i] : near) {
+        if (out.size() == most) break;
+        if (d == best) out.push_back(i->properties.name);
+    }
+    return out;
+}
+
+std::string unknown_section_text(std::string_view name)
+{
+    std::string out = "found \"" + std::string(name) + "\"";
+    const auto similar = similar_catalogue_sections(name);
+    for (std::size_t i = 0; i < similar.size(); ++i)
+        out += (i == 0 ? "; did you mean \"" : i + 1 == similar.size() ? " or \"" : ", \"") + similar[i] + "\"";
+    if (!similar.empty()) out += "?";
+    return out;
 }
 
 const std::vector<section_dimensions>& catalogue()

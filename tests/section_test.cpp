@@ -370,3 +370,14 @@ TEST_CASE("a malformed catalogue line is an internal error naming the line")
     CHECK(rows[0].name == "IPE 300");
     CHECK(rows[0].tw == doctest::Approx(0.0071).epsilon(1e-15));
 }
+
+TEST_CASE("unknown section names get the nearest catalogue names (common practice - no source): one edit away before two - none when nothing is near")
+{
+    CHECK(similar_catalogue_sections("IPE 301") == std::vector<std::string>{"IPE 300"});
+    CHECK(similar_catalogue_sections("w18x36") == std::vector<std::string>{"W18x35"});
+    CHECK(similar_catalogue_sections("HE300C") == std::vector<std::string>{"HE 300 A", "HE 300 B"});
+    CHECK(similar_catalogue_sections("UB 305x165x40").empty());
+    CHECK(similar_catalogue_sections("").empty());
+    CHECK(unknown_section_text("IPE 301") == "found \"IPE 301\"; did you mean \"IPE 300\"?");
+    CHECK(unknown_section_text("UB 305x165x40") == "found \"UB 305x165x40\"");
+}

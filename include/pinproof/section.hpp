@@ -43,6 +43,16 @@ section rolled_i_section(const section_dimensions& d);
 // "W18x35", "W 18 X 35"). Returns nullopt when the name is not listed.
 std::optional<section> find_catalogue_section(std::string_view name);
 
+// For a name that is not listed: the catalogue names nearest to it (at most
+// `most`, in catalogue order), for a "did you mean" in an error message. Near
+// means one or two characters inserted, deleted or changed in the matching
+// form above; only the names at the smallest such distance are given; empty
+// when nothing is that near.
+std::vector<std::string> similar_catalogue_sections(std::string_view name, std::size_t most = 3);
+
+// `found "NAME"` and, when similar names exist, `; did you mean "A" or "B"?`.
+std::string unknown_section_text(std::string_view name);
+
 // Every catalogue entry, as stored.
 const std::vector<section_dimensions>& catalogue();
 
