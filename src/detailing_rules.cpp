@@ -47,24 +47,11 @@ detailing_finding not_applicable(std::string id, std::string rule, std::string s
     return f;
 }
 
-detailing_finding at_least(std::string id, double value, double limit, dimension unit, std::string rule,
-                           std::string source, const std::string& what)
-{
-    detailing_finding f;
-    f.id = std::move(id);
-    f.value = value;
-    f.limit = limit;
-    f.unit = unit;
-    f.rule = std::move(rule);
-    f.source = std::move(source);
-    const bool ok = value >= limit * (1 - rel);
-    f.status = ok ? finding_status::pass : finding_status::warn;
-    const auto show = [&](double v) { return unit == dims::length ? length_text(v) : ratio_text(v); };
-    f.message = what + " " + show(value) + (ok ? " is at least " : " is less than ") + show(limit) + ": " + f.rule;
-    return f;
-}
+// A rule with a limit: `value` against `limit`, a bound from below (at least)
+// or from above (at most); a value at its limit passes.
+enum class bound { at_least, at_most };
 
-detailing_finding at_most(std::string id, double value, double limit, dimension unit, std::string rule,
+detailing_finding limited(bound kind, std::string id, double value, double limit, dimension unit, std::string rule,
                           std::string source, const std::string& what)
 {
     detailing_finding f;
@@ -74,11 +61,25 @@ detailing_finding at_most(std::string id, double value, double limit, dimension 
     f.unit = unit;
     f.rule = std::move(rule);
     f.source = std::move(source);
-    const bool ok = value <= limit * (1 + rel);
+    const bool below = kind == bound::at_least;
+    const bool ok = below ? value >= limit * (1 - rel) : value <= limit * (1 + rel);
     f.status = ok ? finding_status::pass : finding_status::warn;
     const auto show = [&](double v) { return unit == dims::length ? length_text(v) : ratio_text(v); };
-    f.message = what + " " + show(value) + (ok ? " is at most " : " exceeds ") + show(limit) + ": " + f.rule;
+    const char* verb = below ? (ok ? " is at least " : " is less than ") : (ok ? " is at most " : " exceeds ");
+    f.message = what + " " + show(value) + verb + show(limit) + ": " + f.rule;
     return f;
+}
+
+detailing_finding at_least(std::string id, double value, double limit, dimension unit, std::string rule,
+                           std::string source, const std::string& what)
+{
+    return limited(bound::at_least, std::move(id), value, limit, unit, std::move(rule), std::move(source), what);
+}
+
+detailing_finding at_most(std::string id, double value, double limit, dimension unit, std::string rule,
+                          std::string source, const std::string& what)
+{
+    return limited(bound::at_most, std::move(id), value, limit, unit, std::move(rule), std::move(source), what);
 }
 
 detailing_finding min_gap(const connection_detail& d)

@@ -10,6 +10,7 @@
 #include <string>
 #include <vector>
 
+#include "detail_fixtures.hpp"
 #include "pinproof/connection_detail.hpp"
 #include "pinproof/detail_drawing.hpp"
 #include "pinproof/gap_geometry.hpp"
@@ -18,36 +19,9 @@ using namespace pinproof;
 
 namespace {
 
-constexpr double mm = 1e-3;
-
-section ipe300()
-{
-    // EN 10365 IPE 300: h 300, b 150, tw 7.1, tf 10.7 mm.
-    section s;
-    s.name = "IPE 300";
-    s.depth = 300 * mm;
-    s.flange_width = 150 * mm;
-    s.web_thickness = 7.1 * mm;
-    s.flange_thickness = 10.7 * mm;
-    return s;
-}
-
-connection_detail fin_plate()
-{
-    connection_detail d;
-    d.type = detail_type::fin_plate;
-    d.gap = 10 * mm;
-    d.plate_top = 50 * mm;
-    d.plate_depth = 200 * mm;
-    d.plate_thickness = 10 * mm;
-    d.bolts.diameter = 20 * mm;
-    d.bolts.hole_diameter = 22 * mm;
-    d.bolts.rows = 3;
-    d.bolts.pitch = 60 * mm;
-    d.bolts.first_bolt = 40 * mm;
-    d.bolts.bolt_line = 50 * mm;
-    return d;
-}
+using test_data::fin_plate;
+using test_data::ipe300;
+using test_data::mm;
 
 // Baselines of the text lines, grouped by their x position.
 std::map<std::string, std::vector<double>> text_rows(const std::string& svg)

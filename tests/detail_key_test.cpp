@@ -7,43 +7,20 @@
 #include <set>
 #include <string>
 
+#include "detail_fixtures.hpp"
 #include "detail_key.hpp"
 
 using namespace pinproof;
 
 namespace {
 
-constexpr double mm = 1e-3;
+using test_data::mm;
 
 connection_detail base_detail()
 {
-    connection_detail d;
-    d.type = detail_type::fin_plate;
-    d.gap = 10 * mm;
+    connection_detail d = test_data::fin_plate();
     d.gap_tolerance = 3 * mm;
-    d.plate_top = 50 * mm;
-    d.plate_depth = 200 * mm;
-    d.plate_thickness = 10 * mm;
-    d.bolts.diameter = 20 * mm;
-    d.bolts.hole_diameter = 22 * mm;
-    d.bolts.rows = 3;
-    d.bolts.pitch = 60 * mm;
-    d.bolts.first_bolt = 40 * mm;
-    d.bolts.bolt_line = 50 * mm;
     return d;
-}
-
-section base_section()
-{
-    section s;
-    s.name = "IPE 300";
-    s.depth = 300 * mm;
-    s.flange_width = 150 * mm;
-    s.web_thickness = 7.1 * mm;
-    s.flange_thickness = 10.7 * mm;
-    s.root_radius = 15 * mm;
-    s.I = 8356e-8;
-    return s;
 }
 
 }  // namespace
@@ -51,7 +28,7 @@ section base_section()
 TEST_CASE("detail key: equal for copies - different for each changed value (common practice - no source)")
 {
     const connection_detail d = base_detail();
-    const section s = base_section();
+    const section s = test_data::ipe300();
     CHECK(detail_key(d, s) == detail_key(connection_detail(d), section(s)));
 
     std::set<std::string> keys{detail_key(d, s)};

@@ -23,6 +23,7 @@
 #include <memory>
 #include <string>
 
+#include "detail_fixtures.hpp"
 #include "pinproof/connection_detail.hpp"
 #include "pinproof/errors.hpp"
 #include "pinproof/gap_geometry.hpp"
@@ -31,21 +32,9 @@ using namespace pinproof;
 
 namespace {
 
-constexpr double mm = 1e-3;
-
-section ipe300()
-{
-    // EN 10365: h 300, b 150, tw 7.1, tf 10.7, r 15 mm.
-    section s;
-    s.name = "IPE 300";
-    s.depth = 300 * mm;
-    s.flange_width = 150 * mm;
-    s.web_thickness = 7.1 * mm;
-    s.flange_thickness = 10.7 * mm;
-    s.root_radius = 15 * mm;
-    s.I = 8356e-8;
-    return s;
-}
+using test_data::fin_plate;
+using test_data::ipe300;
+using test_data::mm;
 
 supporting_beam ipe400_support(double top)
 {
@@ -59,26 +48,6 @@ supporting_beam ipe400_support(double top)
     sb.root_radius = 21 * mm;
     sb.top = top;
     return sb;
-}
-
-// Fin plate on an IPE 300: plate top 50 mm, first bolt 40 mm, three rows at
-// 60 mm, so the bolt group centroid is 150 mm below the top (dc = 150 mm to
-// either flange); bolt line 50 mm from the beam end.
-connection_detail fin_plate(double gap)
-{
-    connection_detail d;
-    d.type = detail_type::fin_plate;
-    d.gap = gap;
-    d.plate_top = 50 * mm;
-    d.plate_depth = 200 * mm;
-    d.plate_thickness = 10 * mm;
-    d.bolts.diameter = 20 * mm;
-    d.bolts.hole_diameter = 22 * mm;
-    d.bolts.rows = 3;
-    d.bolts.pitch = 60 * mm;
-    d.bolts.first_bolt = 40 * mm;
-    d.bolts.bolt_line = 50 * mm;
-    return d;
 }
 
 connection_detail end_plate(double thickness)
