@@ -83,8 +83,8 @@ batch_row assess_schedule_row(const schedule& s, std::size_t index, const detail
 batch_result run_batch(const schedule& s, const detail_catalogue& catalogue, const batch_options& options = {});
 
 // The summary as CSV (RFC 4180): comment lines starting with '#' (the counts,
-// and that closure rotations are not computed yet), a header row, then one row
-// per beam. Moments in kN*m, rotations in mrad.
+// and what the closure rotations are), a header row, then one row per beam.
+// Moments in kN*m, rotations in mrad.
 std::string batch_summary_csv(const batch_result& r);
 
 // The JSON result: counts, and per beam the summary fields in SI base units
