@@ -6,7 +6,6 @@
 #include <cmath>
 #include <cstdlib>
 #include <fstream>
-#include <set>
 #include <sstream>
 
 #include "json_fields.hpp"
@@ -211,27 +210,16 @@ detail_catalogue read_detail_catalogue(const json& doc, const std::string& sourc
     out.source = source;
     if (expect_object(doc, "", problems)) {
         reject_unknown_keys(doc, "", {"format", "title", "description", "details", "$schema"}, problems);
-        auto format = string_field(doc, "", "format", true, problems);
-        if (format && *format != detail_catalogue_format)
-            problems.add("/format", std::string("expected \"") + detail_catalogue_format + "\", found \"" + *format + "\"");
+        format_field(doc, detail_catalogue_format, problems);
         out.format = detail_catalogue_format;
         out.title = string_field(doc, "", "title", false, problems).value_or("");
         string_field(doc, "", "description", false, problems);
-        auto it = doc.find("details");
-        if (it == doc.end()) {
-            problems.add("/details", "missing required field \"details\" (an array of details)");
-        } else if (!it->is_array() || it->empty()) {
-            problems.add("/details", "expected a non-empty array of details, found " + shown(*it));
-        } else {
-            std::set<std::string> ids;
-            for (std::size_t i = 0; i < it->size(); ++i) {
+        if (const json* details = non_empty_array_field(doc, "details", problems)) {
+            unique_ids ids("detail id");
+            for (std::size_t i = 0; i < details->size(); ++i) {
                 const std::string p = child("/details", i);
-                const json& e = (*it)[i];
-                if (e.is_object() && e.contains("id") && e["id"].is_string()) {
-                    const auto id = e["id"].get<std::string>();
-                    if (!id.empty() && !ids.insert(id).second)
-                        problems.add(child(p, "id"), "expected a unique detail id, found \"" + id + "\" a second time");
-                }
+                const json& e = (*details)[i];
+                ids.note(e, p, problems);
                 auto d = read_entry(e, p, problems);
                 if (d) out.details.push_back(std::move(*d));
             }

@@ -208,4 +208,35 @@ void reject_unknown_keys(const json& obj, const std::string& pointer, const std:
     }
 }
 
+void format_field(const json& doc, const std::string& expected, problem_list& problems)
+{
+    const auto format = string_field(doc, "", "format", true, problems);
+    if (format && *format != expected)
+        problems.add("/format", "expected \"" + expected + "\", found \"" + *format + "\"");
+}
+
+const json* non_empty_array_field(const json& doc, const std::string& key, problem_list& problems)
+{
+    const std::string at = child("", key);
+    const auto it = doc.find(key);
+    if (it == doc.end()) {
+        problems.add(at, "missing required field \"" + key + "\" (an array of " + key + ")");
+        return nullptr;
+    }
+    if (!it->is_array() || it->empty()) {
+        problems.add(at, "expected a non-empty array of " + key + ", found " + shown(*it));
+        return nullptr;
+    }
+    return &*it;
+}
+
+void unique_ids::note(const json& element, const std::string& pointer, problem_list& problems)
+{
+    if (!element.is_object() || !element.contains("id") || !element["id"].is_string()) return;
+    const auto id = element["id"].get<std::string>();
+    if (id.empty()) return;
+    if (!seen_.insert(id).second)
+        problems.add(child(pointer, "id"), "expected a unique " + what_ + ", found \"" + id + "\" a second time");
+}
+
 }  // namespace pinproof::json_fields

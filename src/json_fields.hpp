@@ -9,8 +9,10 @@
 #include <nlohmann/json.hpp>
 
 #include <optional>
+#include <set>
 #include <string>
 #include <string_view>
+#include <utility>
 #include <vector>
 
 #include "pinproof/errors.hpp"
@@ -72,6 +74,26 @@ bool expect_object(const json& value, const std::string& pointer, problem_list& 
 // Adds a problem for every key of `obj` not in `known` ("unknown field ...; known fields are ...").
 void reject_unknown_keys(const json& obj, const std::string& pointer, const std::vector<std::string>& known,
                          problem_list& problems);
+
+// The document's "format" field, which must be `expected`.
+void format_field(const json& doc, const std::string& expected, problem_list& problems);
+
+// Field `key` ("beams", "details") of the top-level object, a non-empty array
+// of `key`; nullptr (with a problem) when it is missing or not such an array.
+const json* non_empty_array_field(const json& doc, const std::string& key, problem_list& problems);
+
+// Ids of the elements of an array, each to be unique: `note` adds a problem at
+// ".../id" for an id seen before ("expected a unique beam id, found ... a
+// second time"). Elements without a string id are left to their reader.
+class unique_ids {
+public:
+    explicit unique_ids(std::string what) : what_(std::move(what)) {}
+    void note(const json& element, const std::string& pointer, problem_list& problems);
+
+private:
+    std::string what_;  // "beam id", "detail id"
+    std::set<std::string> seen_;
+};
 
 // The bounds of a range object {"min": ..., "max": ...} at `pointer`: an
 // unknown key or a missing bound is a problem; each present bound is read by

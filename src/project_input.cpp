@@ -596,9 +596,7 @@ project read_project(const json& doc)
     project out;
     if (!expect_object(doc, "", problems)) problems.throw_if_any();
     reject_unknown_keys(doc, "", {"format", "title", "standard", "frame", "units", "beams", "$schema"}, problems);
-    auto format = string_field(doc, "", "format", true, problems);
-    if (format && *format != project_format)
-        problems.add("/format", std::string("expected \"") + project_format + "\", found \"" + *format + "\"");
+    format_field(doc, project_format, problems);
     out.format = project_format;
     out.title = string_field(doc, "", "title", true, problems).value_or("");
     auto standard = choice_field(doc, "", "standard", {"EN1993-1-8", "AISC360"}, true, problems);
@@ -607,22 +605,12 @@ project read_project(const json& doc)
     if (standard) out.standard = parse_design_standard(*standard);
     if (frame) out.frame = parse_frame_bracing(*frame);
 
-    auto bit = doc.find("beams");
-    if (bit == doc.end()) {
-        problems.add("/beams", "missing required field \"beams\" (an array of beams)");
-    } else if (!bit->is_array() || bit->empty()) {
-        problems.add("/beams", "expected a non-empty array of beams, found " + shown(*bit));
-    } else {
-        std::set<std::string> ids;
-        for (std::size_t i = 0; i < bit->size(); ++i) {
+    if (const json* beams = non_empty_array_field(doc, "beams", problems)) {
+        unique_ids ids("beam id");
+        for (std::size_t i = 0; i < beams->size(); ++i) {
             const std::string p = child("/beams", i);
-            auto b = r.read_beam((*bit)[i], p, out.standard);
-            const json& bj = (*bit)[i];
-            if (bj.is_object() && bj.contains("id") && bj["id"].is_string()) {
-                const auto id = bj["id"].get<std::string>();
-                if (!id.empty() && !ids.insert(id).second)
-                    problems.add(child(p, "id"), "expected a unique beam id, found \"" + id + "\" a second time");
-            }
+            auto b = r.read_beam((*beams)[i], p, out.standard);
+            ids.note((*beams)[i], p, problems);
             if (b) out.beams.push_back(std::move(*b));
         }
     }
