@@ -36,21 +36,11 @@ std::optional<catalogue_stiffness> read_bound(const json& v, const std::string& 
             out.form = catalogue_stiffness::kind::rigid;
             return out;
         }
-        std::optional<double> relative;
-        bool ok = true;
-        try {
-            relative = json_fields::multiple_of_EI_over_L(t);
-        } catch (const std::invalid_argument&) {
-            ok = false;
-        }
-        if (!ok || relative) {
-            const double k = relative.value_or(0.0);
-            if (!ok) {
-                problems.add(ptr, "expected a non-negative multiple of EI/L such as \"0.5 EI/L\", found " + shown(v));
-                return std::nullopt;
-            }
+        const auto relative = read_EI_over_L_multiple(v, ptr, problems);
+        if (relative.relative) {
+            if (!relative.multiple) return std::nullopt;
             out.form = catalogue_stiffness::kind::relative;
-            out.value = k;
+            out.value = *relative.multiple;
             return out;
         }
     }

@@ -186,6 +186,20 @@ std::optional<double> multiple_of_EI_over_L(const std::string& text)
     return k.value;
 }
 
+EI_over_L_multiple read_EI_over_L_multiple(const json& value, const std::string& pointer, problem_list& problems)
+{
+    EI_over_L_multiple out;
+    if (!value.is_string()) return out;
+    try {
+        out.multiple = multiple_of_EI_over_L(value.get<std::string>());
+        out.relative = out.multiple.has_value();
+    } catch (const std::invalid_argument&) {
+        out.relative = true;
+        problems.add(pointer, "expected a non-negative multiple of EI/L such as \"0.5 EI/L\", found " + shown(value));
+    }
+    return out;
+}
+
 bool expect_object(const json& value, const std::string& pointer, problem_list& problems)
 {
     if (value.is_object()) return true;

@@ -68,6 +68,16 @@ std::string line_column(std::string_view text, std::size_t byte);
 // number (no hexadecimal, nan or inf: the rules of parse_quantity).
 std::optional<double> multiple_of_EI_over_L(const std::string& text);
 
+// A stiffness written relative to the beam: a string ending in "EI/L".
+// `relative` is false when `value` is not of that form (the caller reads it
+// otherwise); `multiple` is empty, after a problem at `pointer`, when the
+// multiple is not a plain non-negative number.
+struct EI_over_L_multiple {
+    bool relative = false;
+    std::optional<double> multiple;
+};
+EI_over_L_multiple read_EI_over_L_multiple(const json& value, const std::string& pointer, problem_list& problems);
+
 // Checks that `value` is a JSON object; adds a problem if not.
 bool expect_object(const json& value, const std::string& pointer, problem_list& problems);
 

@@ -169,25 +169,18 @@ struct reader {
             while (b < t.size() && std::isspace(static_cast<unsigned char>(t[b]))) ++b;
             t = t.substr(b);
             if (t == "rigid") return stiffness::rigid();
-            std::optional<double> k;
-            bool relative = false;
-            try {
-                k = multiple_of_EI_over_L(t);
-                relative = k.has_value();
-            } catch (const std::invalid_argument&) {
-                problems.add(ptr, "expected a non-negative multiple of EI/L such as \"0.5 EI/L\", found \"" +
-                                      v.get<std::string>() + "\"");
-                return std::nullopt;
-            }
-            if (relative) {
+            const auto relative = read_EI_over_L_multiple(v, ptr, problems);
+            if (relative.relative) {
+                if (!relative.multiple) return std::nullopt;
+                const double k = *relative.multiple;
                 if (!EI_over_L) return std::nullopt;  // span, E or I already reported
-                if (!(*k * *EI_over_L <= plausible_stiffness)) {
+                if (!(k * *EI_over_L <= plausible_stiffness)) {
                     problems.add(ptr, "expected a rotational stiffness of at most " +
                                           format_quantity(plausible_stiffness, dims::rotational_stiffness, system) +
                                           " (write \"rigid\" for a fixed end), found \"" + v.get<std::string>() + "\"");
                     return std::nullopt;
                 }
-                return stiffness::spring(*k * *EI_over_L);
+                return stiffness::spring(k * *EI_over_L);
             }
         }
         problem_list local;

@@ -163,28 +163,18 @@ std::optional<double> read_positive_stiffness(const json& obj, const std::string
         return std::nullopt;
     }
     std::optional<double> v;
-    if (it->is_string()) {
-        std::string t = it->get<std::string>();
-        while (!t.empty() && std::isspace(static_cast<unsigned char>(t.back()))) t.pop_back();
-        std::optional<double> relative;
-        bool ok = true;
-        try {
-            relative = json_fields::multiple_of_EI_over_L(t);
-        } catch (const std::invalid_argument&) {
-            ok = false;
+    const auto relative = read_EI_over_L_multiple(*it, p, problems);
+    if (relative.relative) {
+        if (!relative.multiple) return std::nullopt;
+        if (!(*relative.multiple > 0)) {
+            problems.add(p, "expected a positive multiple of EI/L such as \"0.5 EI/L\", found " + shown(*it));
+            return std::nullopt;
         }
-        if (!ok || relative) {
-            const double k = relative.value_or(0.0);
-            if (!ok || !(k > 0)) {
-                problems.add(p, "expected a positive multiple of EI/L such as \"0.5 EI/L\", found " + shown(*it));
-                return std::nullopt;
-            }
-            if (!(EI_over_L > 0)) {
-                unresolved = true;  // span, E or I is already reported
-                return std::nullopt;
-            }
-            v = k * EI_over_L;
+        if (!(EI_over_L > 0)) {
+            unresolved = true;  // span, E or I is already reported
+            return std::nullopt;
         }
+        v = *relative.multiple * EI_over_L;
     }
     if (!v) {
         problem_list local;
