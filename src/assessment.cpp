@@ -20,6 +20,17 @@ std::string to_string(check_status s)
     return "unknown";
 }
 
+std::string status_label(check_status s)
+{
+    switch (s) {
+    case check_status::pass: return "pass";
+    case check_status::fail: return "FAIL";
+    case check_status::warn: return "warn";
+    case check_status::not_applicable: return "n/a";
+    }
+    return "?";
+}
+
 const value_range& state_envelope::of(double beam_state::*member) const
 {
     const auto& f = result_fields();

@@ -101,17 +101,6 @@ struct units_view {
 
 std::string esc(const std::string& s) { return html_escape(s); }
 
-std::string status_word(check_status s)
-{
-    switch (s) {
-    case check_status::pass: return "pass";
-    case check_status::fail: return "FAIL";
-    case check_status::warn: return "warn";
-    case check_status::not_applicable: return "n/a";
-    }
-    return "?";
-}
-
 std::string status_class(check_status s)
 {
     switch (s) {
@@ -559,7 +548,7 @@ void report_writer::checks(const beam_assessment& ba)
             if (c.limit) vl += " / " + (ratio ? format_number(*c.limit, 3) : u_.q(*c.limit, c.dim));
         }
         o_ << "<tr class=\"" << status_class(c.status) << "\"><td class=\"status " << status_class(c.status) << "\">"
-           << status_word(c.status) << "</td><td>" << esc(c.id) << "</td><td class=\"num\">" << esc(vl) << "</td><td>"
+           << status_label(c.status) << "</td><td>" << esc(c.id) << "</td><td class=\"num\">" << esc(vl) << "</td><td>"
            << esc(c.message) << "</td></tr>\n";
     }
     o_ << "</table>\n<p class=\"note\">Statuses: pass; FAIL (the assumption does not hold); warn (to pass on or to "

@@ -78,17 +78,6 @@ struct units_view {
 
 std::string ratio_text(const std::optional<double>& r) { return r ? format_number(*r, 3) : std::string("rigid"); }
 
-std::string status_word(check_status s)
-{
-    switch (s) {
-    case check_status::pass: return "pass";
-    case check_status::fail: return "FAIL";
-    case check_status::warn: return "warn";
-    case check_status::not_applicable: return "n/a";
-    }
-    return "?";
-}
-
 void beam_block(std::ostringstream& o, const project& p, const beam_assessment& a)
 {
     const beam& b = *a.input;
@@ -189,7 +178,7 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
             vl = ratio ? format_number(*c.value, 3) : u.num(*c.value, c.dim) + " " + u.unit(c.dim);
             if (c.limit) vl += " / " + (ratio ? format_number(*c.limit, 3) : u.num(*c.limit, c.dim) + " " + u.unit(c.dim));
         }
-        o << "    " << pad(status_word(c.status), 6) << pad(c.id + "  ", 38) << vl << "\n";
+        o << "    " << pad(status_label(c.status), 6) << pad(c.id + "  ", 38) << vl << "\n";
         o << "          " << wrap(c.message, 88, "          ") << "\n";
     }
     if (hidden > 0)

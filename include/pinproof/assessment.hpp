@@ -19,6 +19,8 @@ namespace pinproof {
 
 enum class check_status { pass, fail, warn, not_applicable };
 std::string to_string(check_status s);  // "pass", "fail", "warn", "not-applicable"
+// The word the reports print, a failure in capitals: "pass", "FAIL", "warn", "n/a".
+std::string status_label(check_status s);
 
 struct check {
     std::string id;        // stable, e.g. "stiffness-class-start"
