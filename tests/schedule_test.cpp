@@ -14,6 +14,7 @@
 // for products of them.
 #include <doctest/doctest.h>
 
+#include <memory>
 #include <string>
 
 #include "pinproof/detail_catalogue.hpp"
@@ -209,4 +210,32 @@ TEST_CASE("schedule: row problems name line and column and header and what was f
     CHECK(where_of(empty, 1) == "line 6, column 2 (span)");
     CHECK(where_of(empty, 2) == "line 6, column 4 (g)");
     CHECK(message_of(empty, 2).find("g = 0 and q = 0") != std::string::npos);
+}
+
+TEST_CASE("a catalogue entry's geometry is read afresh when another catalogue takes its place (common practice - no source): the gap of each catalogue in turn - exact")
+{
+    // read_schedule_row keeps the detail read from each entry per thread; a
+    // later catalogue may sit at the same address with other geometry.
+    const auto catalogue_with_gap = [](const std::string& gap) {
+        return std::make_unique<detail_catalogue>(parse_detail_catalogue(R"({
+          "format": "pinproof-details/1",
+          "details": [
+            { "id": "FP-3-M20", "type": "fin-plate", "stiffness": { "min": "300 kN*m/rad", "max": "1400 kN*m/rad" },
+              "geometry": { "support": "column-flange", "gap": ")" + gap + R"(", "gap_tolerance": "5 mm",
+                "plate_top": "50 mm", "plate_depth": "230 mm", "plate_thickness": "10 mm", "plate_grade": "S275",
+                "bolt_diameter": "20 mm", "bolt_rows": 3, "bolt_pitch": "70 mm", "first_bolt": "45 mm",
+                "bolt_line": "50 mm" } }
+          ]
+        })", "test.json"));
+    };
+    const schedule s =
+        parse_schedule(std::string(header) + "B1,6 m,IPE 300,5 kN/m,3 kN/m,FP-3-M20,FP-3-M20,EN1990,span/360,\n");
+    for (const char* gap : {"20 mm", "12 mm", "20 mm", "15 mm"}) {
+        auto c = catalogue_with_gap(gap);
+        const schedule_row r = read_schedule_row(s, 0, *c);
+        REQUIRE(r.input);
+        REQUIRE(r.input->start.detail);
+        CHECK(r.input->start.detail->gap == parse_quantity(gap).value);
+        c.reset();
+    }
 }
