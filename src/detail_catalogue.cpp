@@ -44,17 +44,8 @@ std::optional<catalogue_stiffness> read_bound(const json& v, const std::string& 
             return out;
         }
     }
-    problem_list local;
-    auto s = json_fields::quantity(v, ptr, dims::rotational_stiffness, local);
-    if (!s) {
-        for (const auto& pr : local.problems())
-            problems.add(pr.where, pr.message + " (\"rigid\" and multiples such as \"0.5 EI/L\" are accepted too)");
-        return std::nullopt;
-    }
-    if (*s < 0) {
-        problems.add(ptr, "expected a rotational stiffness of zero or more, found " + shown(v));
-        return std::nullopt;
-    }
+    const auto s = absolute_stiffness(v, ptr, problems);
+    if (!s) return std::nullopt;
     out.value = *s;
     return out;
 }

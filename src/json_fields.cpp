@@ -200,6 +200,23 @@ EI_over_L_multiple read_EI_over_L_multiple(const json& value, const std::string&
     return out;
 }
 
+std::optional<double> absolute_stiffness(const json& value, const std::string& pointer, problem_list& problems,
+                                         unit_system* system)
+{
+    problem_list local;
+    const auto s = quantity(value, pointer, dims::rotational_stiffness, local, system);
+    if (!s) {
+        for (const auto& pr : local.problems())
+            problems.add(pr.where, pr.message + " (\"rigid\" and multiples such as \"0.5 EI/L\" are accepted too)");
+        return std::nullopt;
+    }
+    if (*s < 0) {
+        problems.add(pointer, "expected a rotational stiffness of zero or more, found " + shown(value));
+        return std::nullopt;
+    }
+    return s;
+}
+
 bool expect_object(const json& value, const std::string& pointer, problem_list& problems)
 {
     if (value.is_object()) return true;

@@ -78,6 +78,11 @@ struct EI_over_L_multiple {
 };
 EI_over_L_multiple read_EI_over_L_multiple(const json& value, const std::string& pointer, problem_list& problems);
 
+// A rotational stiffness written as a quantity, zero or more. Its problems
+// also name the other accepted forms, "rigid" and multiples of EI/L.
+std::optional<double> absolute_stiffness(const json& value, const std::string& pointer, problem_list& problems,
+                                         unit_system* system = nullptr);
+
 // Checks that `value` is a JSON object; adds a problem if not.
 bool expect_object(const json& value, const std::string& pointer, problem_list& problems);
 

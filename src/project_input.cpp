@@ -183,18 +183,8 @@ struct reader {
                 return stiffness::spring(k * *EI_over_L);
             }
         }
-        problem_list local;
-        auto s = json_fields::quantity(v, ptr, dims::rotational_stiffness, local, &system);
-        if (!s) {
-            // The message also names the two other accepted forms.
-            for (const auto& pr : local.problems())
-                problems.add(pr.where, pr.message + " (\"rigid\" and multiples such as \"0.5 EI/L\" are accepted too)");
-            return std::nullopt;
-        }
-        if (*s < 0) {
-            problems.add(ptr, "expected a rotational stiffness of zero or more, found " + shown(v));
-            return std::nullopt;
-        }
+        const auto s = absolute_stiffness(v, ptr, problems, &system);
+        if (!s) return std::nullopt;
         if (*s > plausible_stiffness) {
             problems.add(ptr, "expected a rotational stiffness of at most " +
                                   format_quantity(plausible_stiffness, dims::rotational_stiffness, system) +

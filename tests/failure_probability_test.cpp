@@ -25,8 +25,8 @@
 #include <memory>
 #include <optional>
 #include <string>
-#include <unistd.h>
 
+#include "python_output.hpp"
 #include "pinproof/failure_probability.hpp"
 #include "pinproof/project.hpp"
 
@@ -63,18 +63,7 @@ const monte_carlo_estimate& of(const std::vector<monte_carlo_estimate>& v, const
 
 double Phi(double z) { return boost::math::cdf(boost::math::normal(0, 1), z); }
 
-std::optional<std::string> python(const std::string& code)
-{
-    if (access("/usr/bin/python3", X_OK) != 0) return std::nullopt;
-    const std::string cmd = "/usr/bin/python3 -c \"" + code + "\" 2>/dev/null";
-    std::unique_ptr<FILE, int (*)(FILE*)> pipe(popen(cmd.c_str(), "r"), pclose);
-    if (!pipe) return std::nullopt;
-    std::string out;
-    std::array<char, 256> buf{};
-    while (fgets(buf.data(), buf.size(), pipe.get())) out += buf.data();
-    if (out.empty()) return std::nullopt;
-    return out;
-}
+using test_data::python_output;
 
 constexpr double w = 20e3, L = 6.0, MF = w * L * L / 12;
 
@@ -120,7 +109,7 @@ TEST_CASE("independent library [scipy.stats.lognorm.sf]: P(S > S*) for the joint
                   "from scipy.stats import lognorm; import math; print(repr(lognorm.sf(%.17g, math.sqrt(math.log(1+0.36)), "
                   "scale=%.17g)))",
                   2 * f / (1 - f) * EIL, 1.2 * EIL);
-    const auto out = python(code);
+    const auto out = python_output(code);
     if (!out) {
         MESSAGE("scipy not available at /usr/bin/python3: cross-check skipped");
         return;
@@ -211,7 +200,7 @@ TEST_CASE("independent ends - 2-D [MW63 - D]: joint moment against the closed-fo
                   "g=lambda u: (lambda rB: (lambda rA: 0.0 if rA>=1 else d.sf(3*rA/(1-rA)*E))(4*c/(2-rB+c*rB)))"
                   "(d.ppf(u)/E/(d.ppf(u)/E+3)); print(repr(quad(g, 0, 1, epsabs=1e-12, limit=200)[0]))",
                   median, EIL, c);
-    const auto out = python(code);
+    const auto out = python_output(code);
     if (!out) {
         MESSAGE("scipy not available at /usr/bin/python3: cross-check skipped");
         return;

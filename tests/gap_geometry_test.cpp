@@ -24,6 +24,7 @@
 #include <string>
 
 #include "detail_fixtures.hpp"
+#include "python_output.hpp"
 #include "pinproof/connection_detail.hpp"
 #include "pinproof/errors.hpp"
 #include "pinproof/gap_geometry.hpp"
@@ -82,15 +83,11 @@ double fin_plate_closed_form(double s, double g, double dc)
 // Runs a python expression printing one number; nullopt if python or scipy is missing.
 std::optional<double> python_value(const std::string& program)
 {
-    const std::string cmd = "/usr/bin/python3 -c \"" + program + "\" 2>/dev/null";
-    std::unique_ptr<FILE, int (*)(FILE*)> pipe(popen(cmd.c_str(), "r"), pclose);
-    if (!pipe) return std::nullopt;
-    std::array<char, 128> buf{};
-    std::string out;
-    while (fgets(buf.data(), buf.size(), pipe.get())) out += buf.data();
+    const auto out = test_data::python_output(program);
+    if (!out) return std::nullopt;
     try {
         std::size_t used = 0;
-        const double v = std::stod(out, &used);
+        const double v = std::stod(*out, &used);
         return used > 0 ? std::optional<double>(v) : std::nullopt;
     } catch (...) {
         return std::nullopt;

@@ -19,8 +19,8 @@
 #include <memory>
 #include <optional>
 #include <string>
-#include <unistd.h>
 
+#include "python_output.hpp"
 #include "pinproof/stiffness_distribution.hpp"
 
 using namespace pinproof;
@@ -29,19 +29,7 @@ namespace {
 
 bool close(double a, double b, double rel) { return std::abs(a - b) <= rel * std::max(std::abs(a), std::abs(b)); }
 
-// Output of a scipy one-liner, or nullopt where python3-scipy is not available.
-std::optional<std::string> python(const std::string& code)
-{
-    if (access("/usr/bin/python3", X_OK) != 0) return std::nullopt;
-    const std::string cmd = "/usr/bin/python3 -c \"" + code + "\" 2>/dev/null";
-    std::unique_ptr<FILE, int (*)(FILE*)> pipe(popen(cmd.c_str(), "r"), pclose);
-    if (!pipe) return std::nullopt;
-    std::string out;
-    std::array<char, 256> buf{};
-    while (fgets(buf.data(), buf.size(), pipe.get())) out += buf.data();
-    if (out.empty()) return std::nullopt;
-    return out;
-}
+using test_data::python_output;
 
 std::optional<stiffness_distribution> read(const std::string& text, problem_list& problems, double EI_over_L = 2.9e6)
 {
@@ -105,7 +93,7 @@ TEST_CASE("independent library [scipy.stats]: lognorm.ppf and truncnorm.cdf agre
 {
     const auto ln = stiffness_distribution::lognormal(1.5e6, 0.4);
     const auto tn = stiffness_distribution::normal(1e6, 0.8e6);
-    const auto out = python("from scipy.stats import lognorm, truncnorm; import math; s=math.sqrt(math.log(1+0.4**2)); "
+    const auto out = python_output("from scipy.stats import lognorm, truncnorm; import math; s=math.sqrt(math.log(1+0.4**2)); "
                             "print(repr(lognorm.ppf(0.9, s, scale=1.5e6))); "
                             "print(repr(truncnorm.cdf(1.3e6, -1e6/0.8e6, math.inf, loc=1e6, scale=0.8e6)))");
     if (!out) {
