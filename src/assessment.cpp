@@ -385,7 +385,7 @@ std::optional<double> beam_closure(const closure& c, double support_rotation)
     return std::max(0.0, *c.rotation - support_rotation);
 }
 
-void assess_details(const beam& b, beam_assessment& a, bool find_min_gap)
+void assess_details(const project& p, const beam& b, beam_assessment& a, bool find_min_gap)
 {
     for (beam_end e : {beam_end::start, beam_end::end}) {
         const joint& j = b.at(e);
@@ -402,7 +402,7 @@ void assess_details(const beam& b, beam_assessment& a, bool find_min_gap)
         d.strength_combination =
             strength.sagging >= strength.hogging ? strength.sagging_combination : strength.hogging_combination;
         d.gap = check_gap(*j.detail, b.sec, rotation_demand{d.demand_sagging, d.demand_hogging}, find_min_gap);
-        d.findings = check_detailing_rules(*j.detail, b.sec);
+        d.findings = check_detailing_rules(*j.detail, b.sec, p.units);
         const auto closes = [](const sense_check& sc, double demand) {
             return sc.closing.rotation && demand > *sc.closing.rotation;
         };
@@ -561,7 +561,7 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));
-    assess_details(b, a, options.find_min_gap);
+    assess_details(p, b, a, options.find_min_gap);
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(gap_closure_check(p, b, a.joint_at(e)));
     for (beam_end e : {beam_end::start, beam_end::end})
         if (a.joint_at(e).detail)

@@ -120,16 +120,15 @@ struct scenario {
     std::string text;
 };
 
-std::vector<scenario> scenarios(const beam& b, const stiffness_uncertainty& u)
+std::vector<scenario> scenarios(const project& p, const beam& b, const stiffness_uncertainty& u)
 {
     const auto options = [](const joint& j) {
         std::vector<stiffness> s{j.range.min};
         if (!(j.range.max == j.range.min)) s.push_back(j.range.max);
         return s;
     };
-    const auto text = [](stiffness s) {
-        return s.is_rigid() ? std::string("rigid")
-                            : format_quantity(s.value(), dims::rotational_stiffness, unit_system::si);
+    const auto text = [&p](stiffness s) {
+        return s.is_rigid() ? std::string("rigid") : format_quantity(s.value(), dims::rotational_stiffness, p.units);
     };
     std::vector<scenario> out;
     if (u.start && u.end) out.push_back({});
@@ -217,7 +216,7 @@ std::vector<failure_probability> one_scenario(const project& p, const beam& b, c
 std::vector<failure_probability> failure_probabilities(const project& p, const beam& b, const stiffness_uncertainty& u)
 {
     std::vector<failure_probability> best;
-    for (const auto& sc : scenarios(b, u)) {
+    for (const auto& sc : scenarios(p, b, u)) {
         auto r = one_scenario(p, b, u, sc);
         if (best.empty()) {
             best = std::move(r);
@@ -241,7 +240,7 @@ std::vector<monte_carlo_estimate> monte_carlo_probabilities(const project& p, co
     if (samples == 0) return best;
     const bool two_d = u.start && u.end && u.correlation == 0;
     const point_evaluation probe = evaluate_at(p, b, {stiffness::pinned(), stiffness::pinned()});
-    for (const auto& sc : scenarios(b, u)) {
+    for (const auto& sc : scenarios(p, b, u)) {
         std::mt19937_64 gen(seed);
         const auto uniform = [&gen] { return (static_cast<double>(gen() >> 11) + 0.5) * 0x1.0p-53; };
         std::vector<std::size_t> adverse(probe.checks.size(), 0);

@@ -178,6 +178,27 @@ TEST_CASE("bolt-hole-clearance: d + 2 mm up to M24 - d + 3 mm above [SBE end]")
     CHECK(rule(d, "bolt-hole-clearance").status == finding_status::pass);
 }
 
+TEST_CASE("bolt-hole-clearance: standard holes of AISC 360-16 Table J3.3 pass - 3/4 in bolt in 13/16 in - 1 in bolt in 1-1/8 in (from memory)")
+{
+    constexpr double inch = 0.0254;
+    auto d = fin_plate();
+    d.bolts.diameter = 0.75 * inch;
+    d.bolts.hole_diameter = 13.0 / 16 * inch;
+    auto f = rule(d, "bolt-hole-clearance");
+    CHECK(f.status == finding_status::pass);
+    CHECK(*f.limit == doctest::Approx(inch / 16));
+    d.bolts.diameter = 1.0 * inch;
+    d.bolts.hole_diameter = 1.125 * inch;
+    CHECK(rule(d, "bolt-hole-clearance").status == finding_status::pass);
+    d.bolts.hole_diameter = 1.0625 * inch;  // 1/16 in: tight for a 1 in bolt (1.59 mm, below 2 and 3.18 mm)
+    CHECK(rule(d, "bolt-hole-clearance").status == finding_status::warn);
+    d.bolts.diameter = 0.75 * inch;
+    d.bolts.hole_diameter = 0.75 * inch + 1.8 * mm;  // between 1/16 in and 2 mm: neither
+    f = rule(d, "bolt-hole-clearance");
+    CHECK(f.status == finding_status::warn);
+    CHECK(f.message.find("neither normal clearance") != std::string::npos);
+}
+
 TEST_CASE("bolt-edge-distance: at least 2d [SBE fin]")
 {
     auto d = fin_plate();

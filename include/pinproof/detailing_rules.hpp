@@ -37,8 +37,10 @@ struct detailing_finding {
     std::string message;  // what was found
 };
 
-// Every rule, in a fixed order, for one beam end.
-std::vector<detailing_finding> check_detailing_rules(const connection_detail& detail, const section& beam);
+// Every rule, in a fixed order, for one beam end; the lengths in the messages
+// are shown in `units`.
+std::vector<detailing_finding> check_detailing_rules(const connection_detail& detail, const section& beam,
+                                                     unit_system units = unit_system::si);
 
 // The rotation a simple connection is commonly required to accommodate when no
 // analysis gives the end rotation. Used only as a fallback demand.
