@@ -527,7 +527,7 @@ void report_writer::beam_line_chart(const beam& b, const combination& c, beam_en
 void report_writer::gap_drawings(const beam& b, const beam_assessment& ba)
 {
     for (beam_end e : {beam_end::start, beam_end::end}) {
-        const auto svg = gap_detail_svg(b, e, ba);
+        const auto svg = gap_detail_svg(b, e, ba, u_.system);
         if (!svg) continue;
         o_ << "<h3>Gap detail, " << to_string(e) << " joint</h3>\n";
         figure("gap-detail", *svg,
@@ -640,7 +640,7 @@ std::string report_writer::write()
 // rotation demand of the gap check (the larger sense; the support's own
 // rotation included), or to the largest end rotation when the detail was not
 // assessed.
-std::optional<std::string> gap_detail_svg(const beam& b, beam_end e, const beam_assessment& ba)
+std::optional<std::string> gap_detail_svg(const beam& b, beam_end e, const beam_assessment& ba, unit_system units)
 {
     const joint& j = b.at(e);
     if (!j.detail) return std::nullopt;
@@ -660,6 +660,7 @@ std::optional<std::string> gap_detail_svg(const beam& b, beam_end e, const beam_
     detail_drawing_options o;
     o.title = "Beam " + b.id + ", " + to_string(e) + " joint";
     o.mirror = e == beam_end::start;
+    o.units = units;
     return detail_svg(build_geometry(*j.detail, b.sec), *j.detail, demand, o);
 }
 

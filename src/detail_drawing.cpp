@@ -42,7 +42,6 @@ std::string num(double v)
     return s.str();
 }
 
-std::string len(double metres) { return format_quantity(metres, dims::length, unit_system::si, 3); }
 std::string rad(double r) { return format_number(r, 4) + " rad"; }
 
 // Exaggeration factors are round numbers: "5", "20", "1".
@@ -115,6 +114,7 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
                        const detail_drawing_options& options)
 {
     if (!std::isfinite(rotation_demand)) throw internal_error("detail_svg: the rotation demand is not finite");
+    const auto len = [&options](double metres) { return format_quantity(metres, dims::length, options.units, 3); };
     const rotation_sense sense = rotation_demand < 0 ? rotation_sense::hogging : rotation_sense::sagging;
     const double demand = std::abs(rotation_demand);
     const double sgn = sense == rotation_sense::sagging ? 1.0 : -1.0;
@@ -434,7 +434,8 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
             << (note_lines[i].rfind("FAILS", 0) == 0 ? " fill=\"#c0392b\" font-weight=\"bold\"" : "") << ">"
             << esc(note_lines[i]) << "</text>\n";
     {
-        double bar = 0.1;  // m
+        // A round length of the drawing's unit system: 100 mm or 4 in, halved or doubled to fit.
+        double bar = options.units == unit_system::us_customary ? 4 * 0.0254 : 0.1;  // m
         while (bar * v.scale > 250) bar /= 2;
         while (bar * v.scale < 60) bar *= 2;
         const double bx = margin, by = scale_bar_top + 10;

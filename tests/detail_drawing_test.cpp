@@ -101,3 +101,18 @@ TEST_CASE("a failing demand is drawn unexaggerated and said to fail")
     CHECK(svg.find("FAILS") != std::string::npos);
     CHECK(svg.find("overlaps the support") != std::string::npos);
 }
+
+TEST_CASE("labels and scale bar in the project's units (exact unit definitions: 1 in = 25.4 mm): US customary shows inches - SI shows millimetres")
+{
+    const auto d = fin_plate();
+    const auto g = build_geometry(d, ipe300());
+    detail_drawing_options us;
+    us.units = unit_system::us_customary;
+    const std::string svg_us = detail_svg(g, d, 0.01, us);
+    CHECK(svg_us.find("gap 0.394 in as detailed") != std::string::npos);  // 10 mm
+    CHECK(svg_us.find(" in (lengths to scale") != std::string::npos);
+    CHECK(svg_us.find(" mm") == std::string::npos);
+    const std::string svg_si = detail_svg(g, d, 0.01);
+    CHECK(svg_si.find("gap 10.0 mm as detailed") != std::string::npos);
+    CHECK(svg_si.find(" in (lengths") == std::string::npos);
+}

@@ -55,6 +55,7 @@ beam_line beam_line_of(const beam& b, const combination& c, beam_end e);
 
 // The elevation drawing (SVG) of a joint's gap detail at the worst-case gap,
 // turned to the gap check's rotation demand; nullopt when the joint has no detail.
-std::optional<std::string> gap_detail_svg(const beam& b, beam_end e, const beam_assessment& a);
+std::optional<std::string> gap_detail_svg(const beam& b, beam_end e, const beam_assessment& a,
+                                          unit_system units = unit_system::si);
 
 }  // namespace pinproof

@@ -9,6 +9,7 @@
 
 #include "pinproof/connection_detail.hpp"
 #include "pinproof/gap_geometry.hpp"
+#include "pinproof/units.hpp"
 
 namespace pinproof {
 
@@ -16,6 +17,7 @@ struct detail_drawing_options {
     std::string title;            // e.g. "Beam B1, end"; a default is made when empty
     bool mirror = false;          // true for the start end of a beam: support drawn on the left
     double shown_rotation = 0.1;  // rad the exaggerated rotation aims at
+    unit_system units = unit_system::si;  // of the lengths in the labels and the scale bar
 };
 
 // `rotation_demand` is signed as in sign_conventions.hpp: positive is the

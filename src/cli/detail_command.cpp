@@ -27,7 +27,7 @@ int detail_command(const detail_options& o, std::ostream& out, std::ostream& err
                           "expected a connection detail for the " + o.end + " joint of beam " + b->id +
                               ", found none (the drawing needs one)");
     const beam_assessment a = assess_beam(p, *b);
-    const auto svg = gap_detail_svg(*b, e, a);
+    const auto svg = gap_detail_svg(*b, e, a, p.units);
     if (!svg) throw internal_error("no drawing for a joint with a detail");
     // The summary line: the gap-closure check of this end.
     std::string summary;
