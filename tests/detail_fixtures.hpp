@@ -2,8 +2,8 @@
 // on it, the same in every test that uses them.
 #pragma once
 
-#include "pinproof/connection_detail.hpp"
-#include "pinproof/section.hpp"
+#include "pinproof/model/connection_detail.hpp"
+#include "pinproof/model/section.hpp"
 
 namespace pinproof::test_data {
 

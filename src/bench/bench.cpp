@@ -17,7 +17,7 @@
 #include <string>
 #include <vector>
 
-#include "pinproof/beam_model.hpp"
+#include "pinproof/model/beam_model.hpp"
 
 using namespace pinproof;
 

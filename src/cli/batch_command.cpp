@@ -8,11 +8,11 @@
 #include <ostream>
 
 #include "cli.hpp"
-#include "pinproof/batch.hpp"
-#include "pinproof/detail_catalogue.hpp"
-#include "pinproof/errors.hpp"
-#include "pinproof/output_file.hpp"
-#include "pinproof/schedule.hpp"
+#include "pinproof/batch/batch.hpp"
+#include "pinproof/io/detail_catalogue.hpp"
+#include "pinproof/core/errors.hpp"
+#include "pinproof/core/output_file.hpp"
+#include "pinproof/io/schedule.hpp"
 
 // After the library headers: <csignal> defines the macro si_value.
 #include <csignal>

@@ -6,11 +6,12 @@
 #include <ostream>
 #include <sstream>
 
-#include "pinproof/assessment.hpp"
-#include "pinproof/calculation_report.hpp"
-#include "pinproof/errors.hpp"
-#include "pinproof/output_file.hpp"
-#include "pinproof/project.hpp"
+#include "pinproof/checks/assessment.hpp"
+#include "pinproof/report/calculation_report.hpp"
+#include "pinproof/core/errors.hpp"
+#include "pinproof/core/output_file.hpp"
+#include "pinproof/model/project.hpp"
+#include "pinproof/io/project_input.hpp"
 
 namespace pinproof::cli {
 namespace {

@@ -9,13 +9,14 @@
 #include "report_command.hpp"
 #include "sweep_command.hpp"
 #include "detail_command.hpp"
-#include "pinproof/assessment.hpp"
-#include "pinproof/errors.hpp"
-#include "pinproof/output_file.hpp"
-#include "pinproof/project.hpp"
-#include "pinproof/result_json.hpp"
-#include "pinproof/section.hpp"
-#include "pinproof/text_report.hpp"
+#include "pinproof/checks/assessment.hpp"
+#include "pinproof/core/errors.hpp"
+#include "pinproof/core/output_file.hpp"
+#include "pinproof/model/project.hpp"
+#include "pinproof/report/result_json.hpp"
+#include "pinproof/model/section.hpp"
+#include "pinproof/report/text_report.hpp"
+#include "pinproof/io/project_input.hpp"
 
 namespace pinproof::cli {
 namespace {

@@ -9,12 +9,14 @@
 #include <ostream>
 #include <sstream>
 
-#include "pinproof/errors.hpp"
-#include "pinproof/failure_probability.hpp"
-#include "pinproof/output_file.hpp"
-#include "pinproof/project.hpp"
-#include "pinproof/result_json.hpp"
-#include "pinproof/sweep.hpp"
+#include "pinproof/core/errors.hpp"
+#include "pinproof/checks/failure_probability.hpp"
+#include "pinproof/core/output_file.hpp"
+#include "pinproof/model/project.hpp"
+#include "pinproof/report/result_json.hpp"
+#include "pinproof/checks/sweep.hpp"
+#include "pinproof/io/project_input.hpp"
+#include "pinproof/report/sweep_output.hpp"
 
 namespace pinproof::cli {
 

@@ -20,15 +20,16 @@
 #include <string>
 #include <string_view>
 
-#include "pinproof/assessment.hpp"
-#include "pinproof/batch.hpp"
-#include "pinproof/detail_catalogue.hpp"
-#include "pinproof/errors.hpp"
-#include "pinproof/project.hpp"
-#include "pinproof/result_json.hpp"
-#include "pinproof/schedule.hpp"
-#include "pinproof/text_report.hpp"
-#include "pinproof/units.hpp"
+#include "pinproof/checks/assessment.hpp"
+#include "pinproof/batch/batch.hpp"
+#include "pinproof/io/detail_catalogue.hpp"
+#include "pinproof/core/errors.hpp"
+#include "pinproof/model/project.hpp"
+#include "pinproof/report/result_json.hpp"
+#include "pinproof/io/schedule.hpp"
+#include "pinproof/report/text_report.hpp"
+#include "pinproof/core/units.hpp"
+#include "pinproof/io/project_input.hpp"
 
 namespace pinproof::fuzz {
 

@@ -6,6 +6,7 @@
 #include <exception>
 
 #include "fuzz_entry.hpp"
+#include "pinproof/io/project_input.hpp"
 
 #ifndef PINPROOF_SOURCE_DIR
 #error "PINPROOF_SOURCE_DIR must name the source tree (for the example catalogue)"

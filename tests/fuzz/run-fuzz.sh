@@ -9,7 +9,7 @@
 # after the other). Seed corpora come from catalog-examples/, tests/bad-input/,
 # a list of unit texts and the regression inputs. An input that crashes, leaks,
 # hangs or exhausts memory is copied to tests/fuzz/regressions/TARGET/ (where
-# tests/fuzz_regression_test.cpp replays it) and the script exits with 1.
+# tests/fuzz/fuzz_regression_test.cpp replays it) and the script exits with 1.
 #
 # Environment: PINPROOF_FUZZ_BUILD_DIR (default build-fuzz), PINPROOF_JOBS
 # (compile jobs, default: all cores), CXX_FUZZ (default clang++).

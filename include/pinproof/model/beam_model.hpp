@@ -1,0 +1,156 @@
+// Linear elastic analysis of a uniform straight beam between two vertical
+// supports, each end restrained by a rotational spring (pin, spring or rigid).
+//
+// Method (docs/method/beam-model.md):
+//  1. Nodes at each end, at every point load or point moment and at every
+//     boundary of a distributed load. On each element between two nodes the
+//     exact Euler-Bernoulli solution (a polynomial of degree <= 5) is found by
+//     integrating EI w'' = -M for the pinned-pinned beam, whose bending moment
+//     follows from statics. This is the exact solution that cubic elements with
+//     consistent loads and the clamped particular solution give at these
+//     nodes (tests/beam_model_test.cpp checks it against such an assembled
+//     stiffness model built with Eigen), without the ill-conditioning of an
+//     assembled matrix when two nodes are very close.
+//  2. The end moments are the two redundants. The load state and the states of
+//     a unit moment at each end are computed once; this static condensation onto
+//     the two end rotations makes any pair of end springs a 2x2 solve, and a
+//     rigid end the exact constraint rotation = 0, not a large spring number.
+//  3. Every state is checked for equilibrium of vertical forces and of moments
+//     about the start, and by the shear and moment left over past the end
+//     support after integrating along the beam; a residual above 1e-9 of the
+//     load scale throws internal_error.
+// Signs: sign_conventions.hpp. Units: SI base units.
+#pragma once
+
+#include <array>
+#include <cmath>
+#include <vector>
+
+#include "pinproof/core/errors.hpp"
+#include "pinproof/model/loads.hpp"
+#include "pinproof/model/sign_conventions.hpp"
+#include "pinproof/model/stiffness.hpp"
+
+namespace pinproof {
+
+struct beam_state {
+    stiffness stiffness_start = stiffness::pinned();
+    stiffness stiffness_end = stiffness::pinned();
+    double reaction_start = 0;      // N, upward positive
+    double reaction_end = 0;        // N, upward positive
+    double moment_start = 0;        // N*m, hogging positive
+    double moment_end = 0;          // N*m, hogging positive
+    double max_sagging_moment = 0;  // N*m, largest M(x) over the span (may be negative)
+    double max_sagging_at = 0;      // m from the start
+    double max_deflection = 0;      // m, downward positive: w(x) of largest magnitude
+    double max_deflection_at = 0;   // m from the start
+    double rotation_start = 0;      // rad, positive as a simply supported beam under gravity
+    double rotation_end = 0;        // rad, same sense
+};
+
+// Polynomial in the local coordinate s of one element: c[0] + c[1] s + ... + c[5] s^5.
+using element_polynomial = std::array<double, 6>;
+
+class beam_model {
+public:
+    // Throws std::invalid_argument for span <= 0, EI <= 0, non-finite values or
+    // a load outside [0, span] (the project loader reports these to the user
+    // with field names before a model is built).
+    beam_model(double span, double EI, std::vector<load> loads);
+
+    double span() const noexcept { return span_; }
+    double EI() const noexcept { return EI_; }
+    const std::vector<double>& nodes() const noexcept { return nodes_; }
+
+    // The full linear state for a pair of end joints.
+    beam_state solve(stiffness start, stiffness end) const;
+
+    // The state for given hogging end moments (N*m), whatever joint produced
+    // them. Used by non-linear joint models (gap closure) that iterate on the
+    // end moments.
+    beam_state state_for_end_moments(double moment_start, double moment_end) const;
+
+    // The condensed form: end rotations are
+    //   rotation = pinned_rotations() - flexibility() * {moment_start, moment_end}
+    // with rotations and hogging moments in the sign convention.
+    std::array<double, 2> pinned_rotations() const noexcept { return rot0_; }
+    std::array<std::array<double, 2>, 2> flexibility() const noexcept { return flex_; }
+
+    // Hogging end moments for a pair of joints from the condensed 2x2 system.
+    std::array<double, 2> end_moments(stiffness start, stiffness end) const;
+
+    // End moments for every pair (starts[i], ends[j]) of a sweep, written to
+    // out[i * ends.size() + j]. Each joint's row of the condensed system is
+    // formed once for the whole sweep, so a pair costs one 2x2 elimination.
+    // Throws internal_error, writing nothing usable, if any pair is singular.
+    void end_moments_grid(const std::vector<stiffness>& starts, const std::vector<stiffness>& ends,
+                          std::vector<std::array<double, 2>>& out) const;
+
+    // Deflection (m, downward) and bending moment (N*m, sagging) at x for the
+    // state with the given hogging end moments.
+    double deflection_at(double x, double moment_start, double moment_end) const;
+    double moment_at(double x, double moment_start, double moment_end) const;
+
+private:
+    // Row j of the condensed system a[j][j] m_j + a[j][k] m_k = b_j for joint
+    // j (0 start, 1 end) with stiffness s; see end_moments.
+    struct condensed_row {
+        double own = 0, other = 0, rhs = 0;
+    };
+    condensed_row row_for(int j, stiffness s) const noexcept;
+
+    struct element {
+        double x0 = 0, length = 0;
+        double qa = 0, qb = 0;  // line load at the element's ends, N/m
+        // Deflection polynomials for the load state and for unit hogging end
+        // moments at the start and at the end.
+        element_polynomial w_load{}, w_start{}, w_end{};
+    };
+    struct load_state {
+        std::vector<element_polynomial> w;  // deflection per element
+        double reaction_start = 0, reaction_end = 0, rotation_start = 0, rotation_end = 0;
+        double closure_shear = 0, closure_moment = 0;  // what is left past the end support
+    };
+    load_state integrate(const std::vector<load>& loads, double couple_start, double couple_end) const;
+    std::size_t nearest_node(double x) const;
+    element_polynomial combined(const element& e, double m_start, double m_end) const;
+    std::size_t element_index(double x) const;
+    void check_equilibrium(const beam_state& s) const;
+
+    double span_ = 0, EI_ = 0;
+    std::vector<load> loads_;
+    std::vector<double> nodes_;
+    std::vector<element> elements_;
+    std::array<double, 2> rot0_{};                 // pinned end rotations
+    std::array<std::array<double, 2>, 2> flex_{};  // d(rotation)/d(-moment)
+    // Reactions (upward) of the load state and per unit hogging end moment.
+    std::array<double, 2> reaction0_{}, reaction_per_start_{}, reaction_per_end_{};
+    double total_force_ = 0, total_moment_about_start_ = 0, load_scale_ = 0;
+    std::array<double, 6> closure_{};  // shear and moment closure of the three states
+};
+
+// Defined here so that a sweep over many stiffness pairs can inline them.
+inline beam_model::condensed_row beam_model::row_for(int j, stiffness s) const noexcept
+{
+    // Unknown hogging moments m. For end j (other end k), one equation:
+    //   spring or pin: m_j = S_j rotation_j, written for a soft spring as
+    //                  (1 + S_j F_jj) m_j + S_j F_jk m_k = S_j rot0_j   (a pin, S_j = 0, gives m_j = 0)
+    //   stiff spring:  (F_jj + 1/S_j) m_j + F_jk m_k = rot0_j           (divided through by S_j)
+    //   rigid:         F_jj m_j + F_jk m_k = rot0_j                     (rotation_j = 0 exactly)
+    // so that no term is huge; the form is chosen by S_j F_jj.
+    const int k = 1 - j;
+    const double S = s.value();
+    if (s.is_rigid()) return {flex_[j][j], flex_[j][k], rot0_[j]};
+    if (S * flex_[j][j] >= 1.0) return {flex_[j][j] + 1.0 / S, flex_[j][k], rot0_[j]};
+    return {1.0 + S * flex_[j][j], S * flex_[j][k], S * rot0_[j]};
+}
+
+inline std::array<double, 2> beam_model::end_moments(stiffness start, stiffness end) const
+{
+    const condensed_row r0 = row_for(0, start), r1 = row_for(1, end);
+    const double det = r0.own * r1.own - r0.other * r1.other;
+    if (!(std::abs(det) > 0.0) || !std::isfinite(det)) throw internal_error("end-spring system is singular");
+    return {(r0.rhs * r1.own - r0.other * r1.rhs) / det, (r0.own * r1.rhs - r1.other * r0.rhs) / det};
+}
+
+}  // namespace pinproof

@@ -1,0 +1,40 @@
+// A beam-end joint as the project file describes it: the range of its initial
+// rotational stiffness and, optionally, its design moment resistance.
+#pragma once
+
+#include <optional>
+#include <string>
+
+#include "pinproof/model/connection_detail.hpp"
+#include "pinproof/model/stiffness.hpp"
+#include "pinproof/model/stiffness_distribution.hpp"
+
+namespace pinproof {
+
+struct stiffness_range {
+    stiffness min = stiffness::pinned();
+    stiffness max = stiffness::pinned();
+};
+
+struct joint {
+    stiffness_range range;
+    std::optional<double> moment_resistance;  // N*m, design resistance of the joint
+    std::string description;
+    // The stiffness as a distribution, where given (stiffness_distribution.hpp);
+    // the range is then its 5 % to 95 % fractiles unless given too.
+    std::optional<stiffness_distribution> distribution;
+    // The connection as detailed, for the end-gap check (gap_geometry.hpp).
+    std::optional<connection_detail> detail;
+    // Rotation of the support itself (rad), added to the beam's end rotation
+    // in the gap check.
+    double support_rotation = 0;
+    // Stiffness added once the gap has closed; rigid by default.
+    stiffness contact_stiffness = stiffness::rigid();
+    // The joint is declared designed for the moment that develops after closure.
+    bool designed_for_closure = false;
+};
+
+enum class beam_end { start, end };
+std::string to_string(beam_end e);  // "start", "end"
+
+}  // namespace pinproof

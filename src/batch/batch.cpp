@@ -1,0 +1,332 @@
+#include "pinproof/batch/batch.hpp"
+
+#include <nlohmann/json.hpp>
+
+#include <algorithm>
+#include <charconv>
+#include <cmath>
+#include <condition_variable>
+#include <cstdio>
+#include <limits>
+#include <mutex>
+#include <thread>
+
+#include "pinproof/core/errors.hpp"
+#include "pinproof/report/result_json.hpp"
+
+namespace pinproof {
+namespace {
+
+using json = nlohmann::json;
+
+const char* const closure_note =
+    "Closure rotations are the sagging closure at the worst-case gap of the catalogue entry's geometry; empty where "
+    "the entry gives no geometry or nothing closes within 90 degrees.";
+
+std::optional<double> ratio_of(const check& c)
+{
+    if (!c.value || !c.limit || !(*c.limit > 0)) return std::nullopt;
+    const double r = *c.value / *c.limit;
+    if (!std::isfinite(r)) return std::nullopt;
+    return r;
+}
+
+std::optional<double> check_value(const beam_assessment& a, const std::string& id)
+{
+    for (const auto& c : a.checks)
+        if (c.id == id) return c.value;
+    return std::nullopt;
+}
+
+json number_or_null(const std::optional<double>& v)
+{
+    if (!v) return nullptr;
+    if (!std::isfinite(*v)) throw internal_error("a batch result value is not finite");
+    return *v;
+}
+
+void summarise(batch_row& row, const beam_assessment& a)
+{
+    row.verdict = a.holds() ? batch_verdict::holds : batch_verdict::does_not_hold;
+    // A failed check governs over any other; among failed checks, or among the
+    // others with a value and a limit, the largest value/limit governs. A failed
+    // check without a ratio (a rigid joint) outranks every ratio. Checks that
+    // only report (no limit) never govern.
+    const check* governing = nullptr;
+    int best_rank = 0;
+    double best_ratio = -1;
+    for (const auto& c : a.checks) {
+        // Detailing rules are advice (warn at most) and some are "at least" rules,
+        // for which value/limit is not a utilisation: they never govern.
+        if (c.id.rfind("detailing-", 0) == 0 || c.informative) continue;
+        const auto r = ratio_of(c);
+        const bool failed = c.status == check_status::fail;
+        const int rank = failed ? 2 : r ? 1 : 0;
+        if (rank == 0) continue;
+        const double key = r ? *r : std::numeric_limits<double>::infinity();
+        if (rank > best_rank || (rank == best_rank && key > best_ratio)) {
+            governing = &c;
+            best_rank = rank;
+            best_ratio = key;
+        }
+    }
+    if (governing) {
+        row.governing_check = governing->id;
+        row.worst_ratio = ratio_of(*governing);
+        row.message = governing->message;
+    }
+    row.moment_start = check_value(a, "joint-moment-start");
+    row.moment_end = check_value(a, "joint-moment-end");
+    row.rotation_start = check_value(a, "rotation-demand-start");
+    row.rotation_end = check_value(a, "rotation-demand-end");
+    if (a.start.detail) row.closure_rotation_start = a.start.detail->gap.sagging.closing.rotation;
+    if (a.end.detail) row.closure_rotation_end = a.end.detail->gap.sagging.closing.rotation;
+}
+
+json row_json(const batch_row& row, const beam_assessment* a)
+{
+    json out;
+    out["line"] = row.line;
+    out["id"] = row.id;
+    out["verdict"] = to_string(row.verdict);
+    if (row.verdict == batch_verdict::refused) {
+        json problems = json::array();
+        for (const auto& p : row.problems) problems.push_back({{"where", p.where}, {"message", p.message}});
+        out["problems"] = problems;
+        return out;
+    }
+    out["governing_check"] = row.governing_check;
+    out["worst_ratio"] = number_or_null(row.worst_ratio);
+    out["moment_start"] = number_or_null(row.moment_start);
+    out["moment_end"] = number_or_null(row.moment_end);
+    out["rotation_start"] = number_or_null(row.rotation_start);
+    out["rotation_end"] = number_or_null(row.rotation_end);
+    out["closure_rotation_start"] = number_or_null(row.closure_rotation_start);
+    out["closure_rotation_end"] = number_or_null(row.closure_rotation_end);
+    if (a) out["result"] = to_json(*a);
+    return out;
+}
+
+void refuse(batch_row& row, std::vector<input_problem> problems)
+{
+    row.verdict = batch_verdict::refused;
+    row.problems = std::move(problems);
+    row.governing_check.clear();
+    row.worst_ratio.reset();
+    row.message.clear();
+    for (const auto& p : row.problems) row.message += (row.message.empty() ? "" : "; ") + p.where + ": " + p.message;
+}
+
+// RFC 4180: a cell holding a comma, a quote or a line break is quoted, with
+// quotes doubled.
+std::string csv_cell(const std::string& s)
+{
+    if (s.find_first_of(",\"\r\n") == std::string::npos) return s;
+    std::string out = "\"";
+    for (char c : s) {
+        if (c == '"') out += '"';
+        out += c;
+    }
+    return out + "\"";
+}
+
+std::string fixed(const std::optional<double>& v, double scale, int decimals)
+{
+    if (!v) return "";
+    const double x = *v * scale;
+    if (!std::isfinite(x)) throw internal_error("a batch result value is not finite");
+    char buf[400];  // the longest fixed text of a finite double with a few decimals
+    const auto r = std::to_chars(buf, buf + sizeof buf, x, std::chars_format::fixed, decimals);
+    if (r.ec != std::errc()) throw internal_error("a batch result value does not fit its text");
+    std::string s(buf, r.ptr);
+    if (s.find_first_not_of("-0.") == std::string::npos && s[0] == '-') s.erase(0, 1);  // no "-0.000"
+    return s;
+}
+
+// One row of the summary CSV, with its newline.
+std::string summary_line(const batch_row& row)
+{
+    std::string out;
+    out.reserve(256 + row.message.size());
+    out += std::to_string(row.line);
+    out += ',';
+    out += csv_cell(row.id);
+    out += ',';
+    out += to_string(row.verdict);
+    out += ',';
+    out += row.governing_check;
+    out += ',';
+    out += fixed(row.worst_ratio, 1.0, 4);
+    out += ',';
+    out += fixed(row.moment_start, 1e-3, 4);
+    out += ',';
+    out += fixed(row.moment_end, 1e-3, 4);
+    out += ',';
+    out += fixed(row.rotation_start, 1e3, 4);
+    out += ',';
+    out += fixed(row.rotation_end, 1e3, 4);
+    out += ',';
+    out += fixed(row.closure_rotation_start, 1e3, 4);
+    out += ',';
+    out += fixed(row.closure_rotation_end, 1e3, 4);
+    out += ',';
+    out += csv_cell(row.message);
+    out += '\n';
+    return out;
+}
+
+}  // namespace
+
+std::string to_string(batch_verdict v)
+{
+    switch (v) {
+    case batch_verdict::holds: return "holds";
+    case batch_verdict::does_not_hold: return "does-not-hold";
+    case batch_verdict::refused: return "refused";
+    }
+    return "unknown";
+}
+
+batch_row assess_schedule_row(const schedule& s, std::size_t index, const detail_catalogue& catalogue,
+                              const batch_options& options)
+{
+    batch_row row;
+    row.line = s.rows.at(index).line;
+    try {
+        schedule_row in = read_schedule_row(s, index, catalogue);
+        row.line = in.line;
+        row.id = in.id;
+        if (!in.input) {
+            refuse(row, std::move(in.problems));
+        } else {
+            // The smallest passing gap is only written to the JSON result.
+            assessment_options ao = options.assessment;
+            ao.find_min_gap = ao.find_min_gap && options.json;
+            const beam_assessment a = assess_beam(in.settings, *in.input, ao);
+            summarise(row, a);
+            if (options.json) row.json = row_json(row, &a).dump();
+        }
+    } catch (const input_error& e) {
+        refuse(row, e.problems());
+    } catch (const std::exception& e) {
+        refuse(row, {{"line " + std::to_string(row.line),
+                      std::string("internal error (a fault of pinproof, not of the input): ") + e.what()}});
+    }
+    if (options.json && row.verdict == batch_verdict::refused) row.json = row_json(row, nullptr).dump();
+    row.summary_line = summary_line(row);
+    return row;
+}
+
+batch_result run_batch(const schedule& s, const detail_catalogue& catalogue, const batch_options& options)
+{
+    batch_result out;
+    const std::size_t total = s.rows.size();
+    out.rows.resize(total);
+    unsigned jobs = options.jobs ? options.jobs : std::max(1u, std::thread::hardware_concurrency());
+    jobs = static_cast<unsigned>(std::min<std::size_t>(jobs, std::max<std::size_t>(1, total)));
+
+    // Rows are handed out in small chunks from a shared counter; each worker
+    // writes only the rows it took, so the results stay in input order.
+    constexpr std::size_t chunk = 16;
+    std::atomic<std::size_t> next{0}, done{0};
+    std::atomic<bool> stopped{false};
+    std::mutex m;
+    std::condition_variable finished;
+    unsigned running = jobs;
+    const auto work = [&] {
+        for (;;) {
+            const std::size_t first = next.fetch_add(chunk);
+            if (first >= total) break;
+            const std::size_t last = std::min(total, first + chunk);
+            for (std::size_t i = first; i < last; ++i) {
+                if (options.cancel && options.cancel->load()) {
+                    stopped = true;
+                    break;
+                }
+                out.rows[i] = assess_schedule_row(s, i, catalogue, options);
+                done.fetch_add(1, std::memory_order_relaxed);
+            }
+            if (stopped) break;
+        }
+        std::lock_guard<std::mutex> lock(m);
+        if (--running == 0) finished.notify_all();
+    };
+    std::vector<std::thread> pool;
+    pool.reserve(jobs);
+    for (unsigned j = 0; j < jobs; ++j) pool.emplace_back(work);
+    {
+        std::unique_lock<std::mutex> lock(m);
+        while (running > 0) {
+            finished.wait_for(lock, options.progress_interval);
+            if (running > 0 && options.progress) {
+                lock.unlock();
+                options.progress(done.load(), total);
+                lock.lock();
+            }
+        }
+    }
+    for (auto& t : pool) t.join();
+    if (options.progress) options.progress(done.load(), total);
+
+    out.cancelled = stopped.load() || done.load() != total;
+    out.summary.rows = total;
+    for (const auto& r : out.rows) {
+        if (r.verdict == batch_verdict::refused) ++out.summary.refused;
+        else ++out.summary.checked;
+        if (r.verdict == batch_verdict::holds) ++out.summary.passed;
+        if (r.verdict == batch_verdict::does_not_hold) ++out.summary.failed;
+    }
+    return out;
+}
+
+std::string batch_counts_text(const batch_summary& s)
+{
+    return std::to_string(s.rows) + " row" + (s.rows == 1 ? "" : "s") + ": " + std::to_string(s.checked) +
+           " checked (" + std::to_string(s.passed) + " passed, " + std::to_string(s.failed) + " failed), " +
+           std::to_string(s.refused) + " refused";
+}
+
+std::string batch_summary_csv(const batch_result& r)
+{
+    std::string out;
+    out.reserve(r.rows.size() * 160 + 512);
+    out += "# pinproof batch summary: " + batch_counts_text(r.summary) + "\n";
+    out += std::string("# ") + closure_note + "\n";
+    out += "line,id,verdict,governing_check,worst_ratio,moment_start (kN*m),moment_end (kN*m),"
+           "rotation_start (mrad),rotation_end (mrad),closure_rotation_start (mrad),closure_rotation_end (mrad),"
+           "message\n";
+    for (const auto& row : r.rows) out += row.summary_line.empty() ? summary_line(row) : row.summary_line;
+    return out;
+}
+
+std::string batch_result_json(const batch_result& r, const schedule& s, const detail_catalogue& catalogue)
+{
+    json head;
+    head["format"] = batch_result_format;
+    head["schedule"] = s.source;
+    head["details"] = {{"source", catalogue.source}, {"title", catalogue.title}};
+    head["summary"] = {{"rows", r.summary.rows},
+                       {"checked", r.summary.checked},
+                       {"passed", r.summary.passed},
+                       {"failed", r.summary.failed},
+                       {"refused", r.summary.refused}};
+    head["verdict"] = r.summary.refused ? "refused" : r.summary.failed ? "does-not-hold" : "holds";
+    head["notes"] = json::array({closure_note});
+    head["caution"] = "Results support, and do not replace, the judgement of a qualified engineer; local codes and "
+                      "licensed practice govern.";
+    // The beams are already JSON text: splice them in rather than re-parse.
+    std::string text = head.dump(1);
+    text.pop_back();  // the closing brace
+    while (!text.empty() && (text.back() == '\n' || text.back() == ' ')) text.pop_back();
+    text += ",\n \"beams\": [\n";
+    for (std::size_t i = 0; i < r.rows.size(); ++i) {
+        if (r.rows[i].json.empty()) throw internal_error("batch row has no JSON result");
+        text += "  ";
+        text += r.rows[i].json;
+        text += i + 1 < r.rows.size() ? ",\n" : "\n";
+    }
+    text += " ]\n}\n";
+    return text;
+}
+
+}  // namespace pinproof

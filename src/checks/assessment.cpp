@@ -1,0 +1,590 @@
+#include "pinproof/checks/assessment.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <utility>
+
+#include "pinproof/core/errors.hpp"
+#include "pinproof/model/result_fields.hpp"
+
+namespace pinproof {
+
+std::string to_string(check_status s)
+{
+    switch (s) {
+    case check_status::pass: return "pass";
+    case check_status::fail: return "fail";
+    case check_status::warn: return "warn";
+    case check_status::not_applicable: return "not-applicable";
+    }
+    return "unknown";
+}
+
+std::string status_label(check_status s)
+{
+    switch (s) {
+    case check_status::pass: return "pass";
+    case check_status::fail: return "FAIL";
+    case check_status::warn: return "warn";
+    case check_status::not_applicable: return "n/a";
+    }
+    return "?";
+}
+
+const value_range& state_envelope::of(double beam_state::*member) const
+{
+    const auto& f = result_fields();
+    for (std::size_t i = 0; i < f.size(); ++i)
+        if (f[i].member == member) return ranges.at(i);
+    throw internal_error("unknown result field");
+}
+
+bool beam_assessment::holds() const
+{
+    return std::none_of(checks.begin(), checks.end(), [](const check& c) { return c.status == check_status::fail; });
+}
+
+bool project_assessment::all_hold() const
+{
+    return std::all_of(beams.begin(), beams.end(), [](const beam_assessment& b) { return b.holds(); });
+}
+
+namespace {
+
+void include(state_envelope& env, const beam_state& s, bool first)
+{
+    const auto& f = result_fields();
+    env.ranges.resize(f.size());
+    for (std::size_t i = 0; i < f.size(); ++i) {
+        const double v = s.*(f[i].member);
+        if (first) env.ranges[i] = {v, v};
+        env.ranges[i].min = std::min(env.ranges[i].min, v);
+        env.ranges[i].max = std::max(env.ranges[i].max, v);
+    }
+}
+
+// Stiffness of fixity factor r (Monforton and Wu, 1963): r = 1/(1 + 3EI/(S L)).
+stiffness from_fixity(double r, double EI, double span)
+{
+    if (r >= 1.0) return stiffness::rigid();
+    return stiffness::spring(3.0 * r * EI / (span * (1.0 - r)));
+}
+
+double fixity(stiffness s, double EI, double span)
+{
+    if (s.is_rigid()) return 1.0;
+    const double k = s.ratio(EI, span);
+    return k / (k + 3.0);
+}
+
+combination_result analyse_combination(const beam& b, const combination& c, bool search_interior)
+{
+    combination_result out;
+    out.comb = c;
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c));
+    out.pinned = model.solve(stiffness::pinned(), stiffness::pinned());
+    out.fixed = model.solve(stiffness::rigid(), stiffness::rigid());
+    const auto& rs = b.start.range;
+    const auto& re = b.end.range;
+    out.corners = {model.solve(rs.min, re.min), model.solve(rs.min, re.max), model.solve(rs.max, re.min),
+                   model.solve(rs.max, re.max)};
+    bool first = true;
+    for (const auto& s : out.corners) {
+        include(out.envelope, s, first);
+        first = false;
+    }
+    // Every result of a state is linear in the two end moments, and for a fixed
+    // stiffness at one end the end moments move monotonically along a line as
+    // the other end's stiffness grows, so each pointwise result is monotone in
+    // each stiffness and takes its extremes at the corners. The maximum sagging
+    // moment and the largest deflection are maxima over x of such results: their
+    // largest values are at the corners too, but their smallest may lie inside
+    // the box. A grid in fixity-factor space finds those (range-envelope.md).
+    const bool degenerate = rs.min == rs.max && re.min == re.max;
+    if (!degenerate && search_interior) {
+        const int n = 9;
+        const double EI = b.EI();
+        const double r0s = fixity(rs.min, EI, b.span), r1s = fixity(rs.max, EI, b.span);
+        const double r0e = fixity(re.min, EI, b.span), r1e = fixity(re.max, EI, b.span);
+        for (int i = 0; i < n; ++i)
+            for (int j = 0; j < n; ++j) {
+                const double fs = r0s + (r1s - r0s) * i / (n - 1.0);
+                const double fe = r0e + (r1e - r0e) * j / (n - 1.0);
+                const beam_state s = model.solve(i == 0 ? rs.min : i == n - 1 ? rs.max : from_fixity(fs, EI, b.span),
+                                                 j == 0 ? re.min : j == n - 1 ? re.max : from_fixity(fe, EI, b.span));
+                const auto& f = result_fields();
+                for (std::size_t k = 0; k < f.size(); ++k) {
+                    const bool searched = f[k].member == &beam_state::max_sagging_moment ||
+                                          f[k].member == &beam_state::max_deflection ||
+                                          f[k].member == &beam_state::max_sagging_at ||
+                                          f[k].member == &beam_state::max_deflection_at;
+                    if (!searched) continue;
+                    const double v = s.*(f[k].member);
+                    out.envelope.ranges[k].min = std::min(out.envelope.ranges[k].min, v);
+                    out.envelope.ranges[k].max = std::max(out.envelope.ranges[k].max, v);
+                }
+                ++out.interior_points;
+            }
+    }
+    return out;
+}
+
+joint_assessment assess_joint(const project& p, const beam& b, beam_end e)
+{
+    joint_assessment j;
+    j.end = e;
+    j.range = b.at(e).range;
+    const double EI = b.EI();
+    if (!j.range.min.is_rigid()) j.ratio_lower = j.range.min.ratio(EI, b.span);
+    if (!j.range.max.is_rigid()) j.ratio_upper = j.range.max.ratio(EI, b.span);
+    j.fixity_lower = fixity(j.range.min, EI, b.span);
+    j.fixity_upper = fixity(j.range.max, EI, b.span);
+    j.en_lower = classify_en(j.range.min, EI, b.span, p.frame);
+    j.en_upper = classify_en(j.range.max, EI, b.span, p.frame);
+    j.aisc_lower = classify_aisc(j.range.min, EI, b.span);
+    j.aisc_upper = classify_aisc(j.range.max, EI, b.span);
+    return j;
+}
+
+struct formatter {
+    unit_system system;
+    std::string operator()(double v, dimension d) const { return format_quantity(v, d, system); }
+};
+
+std::string stiffness_text(stiffness s, const formatter& fmt)
+{
+    return s.is_rigid() ? std::string("rigid") : fmt(s.value(), dims::rotational_stiffness);
+}
+
+check stiffness_class_check(const project& p, const joint_assessment& j)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "stiffness-class-" + to_string(j.end);
+    c.dim = dims::dimensionless;
+    c.limit = pinned_limit(p.standard);
+    const bool en = p.standard == design_standard::en1993_1_8;
+    const std::string clause = en ? "EN 1993-1-8 5.2.2.5(1)" : "AISC 360-16 Commentary B3.4";
+    const std::string pinned_word = en ? "nominally pinned" : "simple";
+    const std::string cls = en ? to_string(j.en_upper) : to_string(j.aisc_upper);
+    const std::string upper = "The upper-bound stiffness " + stiffness_text(j.range.max, fmt);
+    if (!j.ratio_upper) {
+        c.status = check_status::fail;
+        c.message = upper + " is a rigid joint, not " + pinned_word + " under " + clause +
+                    ": the beam end is fixed and the pinned assumption does not hold.";
+        return c;
+    }
+    c.value = *j.ratio_upper;
+    const std::string ratio = "S*L/EI = " + format_number(*j.ratio_upper, 3);
+    if (*j.ratio_upper <= *c.limit) {
+        c.status = check_status::pass;
+        c.message = upper + " gives " + ratio + " <= " + format_number(*c.limit, 2) + ": " + pinned_word +
+                    " under " + clause + ".";
+    } else {
+        c.status = check_status::fail;
+        c.message = upper + " gives " + ratio + " > " + format_number(*c.limit, 2) + ": " + cls + " under " + clause +
+                    ", so the joint may not be idealised as " + pinned_word +
+                    ". Design the beam with the semi-rigid joint, or use a more flexible detail.";
+    }
+    return c;
+}
+
+struct governing {
+    double value = 0;
+    std::string combination;
+    bool found = false;
+};
+
+check joint_moment_check(const project& p, const beam& b, const std::vector<combination_result>& combos, beam_end e)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "joint-moment-" + to_string(e);
+    c.dim = dims::moment;
+    double beam_state::*member = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
+    governing g;
+    for (const auto& r : combos) {
+        if (r.comb.use != limit_state::strength) continue;
+        const auto& range = r.envelope.of(member);
+        const double m = std::max(std::abs(range.min), std::abs(range.max));
+        if (!g.found || m > g.value) g = {m, r.comb.name, true};
+    }
+    const auto& mrd = b.at(e).moment_resistance;
+    if (!g.found) {
+        c.status = check_status::not_applicable;
+        c.message = "No strength combination is given, so the moment the joint attracts under design loads is not checked.";
+        return c;
+    }
+    c.value = g.value;
+    const std::string attracted = "Under strength combinations the joint attracts up to " + fmt(g.value, dims::moment) +
+                                  " (combination " + g.combination +
+                                  ", at this joint's upper-bound stiffness with the far joint at its lower bound)";
+    if (!mrd) {
+        c.status = check_status::not_applicable;
+        c.message = attracted + "; no moment resistance is declared for the joint, so this is not checked.";
+        return c;
+    }
+    c.limit = *mrd;
+    if (g.value <= *mrd) {
+        c.status = check_status::pass;
+        c.message = attracted + ", within its declared moment resistance " + fmt(*mrd, dims::moment) + ".";
+    } else {
+        c.status = check_status::fail;
+        c.message = attracted + ", more than its declared moment resistance " + fmt(*mrd, dims::moment) +
+                    ": the joint would have to yield to behave as a pin. Design it for the moment, or use a more "
+                    "flexible detail.";
+    }
+    return c;
+}
+
+check support_moment_check(const project& p, const std::vector<combination_result>& combos, beam_end e)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "support-moment-" + to_string(e);
+    c.dim = dims::moment;
+    c.informative = true;
+    double beam_state::*member = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
+    double beam_state::*reaction = e == beam_end::start ? &beam_state::reaction_start : &beam_state::reaction_end;
+    governing g;
+    double reaction_max = 0, reaction_pinned = 0;
+    for (const auto& r : combos) {
+        if (r.comb.use != limit_state::strength) continue;
+        const auto& range = r.envelope.of(member);
+        const double m = std::max(std::abs(range.min), std::abs(range.max));
+        if (!g.found || m > g.value) {
+            g = {m, r.comb.name, true};
+            reaction_max = r.envelope.of(reaction).max;
+            reaction_pinned = r.pinned.*reaction;
+        }
+    }
+    if (!g.found) {
+        c.status = check_status::not_applicable;
+        c.message = "No strength combination is given, so no support moment is reported.";
+        return c;
+    }
+    c.value = g.value;
+    if (g.value == 0.0) {
+        c.status = check_status::pass;
+        c.message = "For the supporting member: the joint transfers no moment (its upper-bound stiffness is a pin).";
+        return c;
+    }
+    // Reported for the designer of the supporting member; a warning because the
+    // pinned design of that member does not include it.
+    c.status = check_status::warn;
+    c.message = "For the supporting member: up to " + fmt(g.value, dims::moment) +
+                " is transferred into the support (combination " + g.combination +
+                ", this joint at its upper-bound stiffness), besides any moment from the eccentricity of the "
+                "reaction. The reaction reaches " + fmt(reaction_max, dims::force);
+    if (reaction_pinned > 0 && reaction_max > reaction_pinned * (1 + 1e-6)) {
+        c.message += " (" + format_number(100.0 * (reaction_max / reaction_pinned - 1.0), 2) + " % above the " +
+                     fmt(reaction_pinned, dims::force) + " with pins)";
+    }
+    c.message += ". Not a check of the support: pass these on to its designer.";
+    return c;
+}
+
+check rotation_demand_check(const project& p, const std::vector<combination_result>& combos, beam_end e)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "rotation-demand-" + to_string(e);
+    c.dim = dims::angle;
+    double beam_state::*member = e == beam_end::start ? &beam_state::rotation_start : &beam_state::rotation_end;
+    governing g;
+    for (const auto& r : combos) {
+        const auto& range = r.envelope.of(member);
+        const double m = std::max(std::abs(range.min), std::abs(range.max));
+        if (!g.found || m > g.value) g = {m, r.comb.name, true};
+    }
+    c.value = g.value;
+    c.limit = simple_connection_rotation_rule_of_thumb;
+    const std::string demand = "The end rotation demand is up to " + fmt(g.value, dims::angle) + " (combination " +
+                               g.combination + ", both joints at their lower-bound stiffness)";
+    if (g.value <= simple_connection_rotation_rule_of_thumb) {
+        c.status = check_status::pass;
+        c.message = demand + ", within the about 30 mrad a simple connection is commonly expected to accommodate "
+                             "(rule of thumb, not a check of the detail; check the end gap and the connection's "
+                             "rotation capacity).";
+    } else {
+        c.status = check_status::warn;
+        c.message = demand + ", more than the about 30 mrad a simple connection is commonly expected to accommodate "
+                             "(rule of thumb): confirm the connection's rotation capacity and the end gap.";
+    }
+    return c;
+}
+
+check deflection_check(const project& p, const beam& b, const std::vector<combination_result>& combos)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "deflection";
+    c.dim = dims::length;
+    governing g;
+    double pinned = 0;
+    for (const auto& r : combos) {
+        if (r.comb.use != limit_state::service) continue;
+        const auto& range = r.envelope.of(&beam_state::max_deflection);
+        const double d = std::max(std::abs(range.min), std::abs(range.max));
+        if (!g.found || d > g.value) {
+            g = {d, r.comb.name, true};
+            pinned = std::abs(r.pinned.max_deflection);
+        }
+    }
+    if (!b.deflection) {
+        c.status = check_status::not_applicable;
+        c.message = "No deflection limit is given (limits.deflection), so service deflection is not checked.";
+        if (g.found) c.value = g.value;
+        return c;
+    }
+    c.limit = b.deflection->value(b.span);
+    if (!g.found) {
+        c.status = check_status::not_applicable;
+        c.message = "No service combination is given, so the deflection limit " + b.deflection->text + " is not checked.";
+        return c;
+    }
+    c.value = g.value;
+    const std::string text = "The service deflection is up to " + fmt(g.value, dims::length) + " over the stiffness range (" +
+                             fmt(pinned, dims::length) + " with ideal pins), combination " + g.combination +
+                             ", against the limit " +
+                             (b.deflection->span_ratio ? b.deflection->text + " = " : std::string()) +
+                             fmt(*c.limit, dims::length);
+    c.status = g.value <= *c.limit ? check_status::pass : check_status::fail;
+    c.message = text + (c.status == check_status::pass ? "." : ": the beam is too flexible.");
+    return c;
+}
+
+struct rotation_extremes {
+    double sagging = 0, hogging = 0;
+    std::string sagging_combination, hogging_combination;
+};
+
+rotation_extremes end_rotation_extremes(const std::vector<combination_result>& combos, beam_end e, bool strength_only)
+{
+    double beam_state::*member = e == beam_end::start ? &beam_state::rotation_start : &beam_state::rotation_end;
+    rotation_extremes r;
+    for (const auto& c : combos) {
+        if (strength_only && c.comb.use != limit_state::strength) continue;
+        const auto& range = c.envelope.of(member);
+        if (range.max > r.sagging) {
+            r.sagging = range.max;
+            r.sagging_combination = c.comb.name;
+        }
+        if (-range.min > r.hogging) {
+            r.hogging = -range.min;
+            r.hogging_combination = c.comb.name;
+        }
+    }
+    return r;
+}
+
+// The beam end's own closure rotation: the support's rotation uses part of the gap.
+std::optional<double> beam_closure(const closure& c, double support_rotation)
+{
+    if (!c.rotation) return std::nullopt;
+    return std::max(0.0, *c.rotation - support_rotation);
+}
+
+void assess_details(const project& p, const beam& b, beam_assessment& a, bool find_min_gap)
+{
+    for (beam_end e : {beam_end::start, beam_end::end}) {
+        const joint& j = b.at(e);
+        if (!j.detail) continue;
+        detail_assessment d;
+        const auto all = end_rotation_extremes(a.combinations, e, false);
+        const auto strength = end_rotation_extremes(a.combinations, e, true);
+        // The demand on the gap is the relative rotation of beam end and support.
+        d.demand_sagging = all.sagging + j.support_rotation;
+        d.demand_hogging = all.hogging > 0 ? all.hogging + j.support_rotation : 0.0;
+        d.demand_combination = all.sagging >= all.hogging ? all.sagging_combination : all.hogging_combination;
+        d.strength_demand_sagging = strength.sagging + j.support_rotation;
+        d.strength_demand_hogging = strength.hogging > 0 ? strength.hogging + j.support_rotation : 0.0;
+        d.strength_combination =
+            strength.sagging >= strength.hogging ? strength.sagging_combination : strength.hogging_combination;
+        d.gap = check_gap(*j.detail, b.sec, rotation_demand{d.demand_sagging, d.demand_hogging}, find_min_gap);
+        d.findings = check_detailing_rules(*j.detail, b.sec, p.units);
+        const auto closes = [](const sense_check& sc, double demand) {
+            return sc.closing.rotation && demand > *sc.closing.rotation;
+        };
+        d.closes_under_strength = closes(d.gap.sagging, d.strength_demand_sagging) ||
+                                  closes(d.gap.hogging, d.strength_demand_hogging);
+        d.closes_under_service = !d.closes_under_strength && !d.gap.passes;
+        const auto clears = [](const sense_check& sc) {
+            return !sc.closing.rotation || *sc.closing.rotation >= fallback_rotation_demand.value;
+        };
+        d.clears_rule_of_thumb = clears(d.gap.sagging) && (d.demand_hogging == 0 || clears(d.gap.hogging));
+        (e == beam_end::start ? a.start : a.end).detail = std::move(d);
+    }
+
+    // Consequence of closure: the strength combination with the largest rotation,
+    // with both joints at their lower-bound stiffness (where the rotation is largest).
+    for (beam_end e : {beam_end::start, beam_end::end}) {
+        auto& ja = e == beam_end::start ? a.start : a.end;
+        if (!ja.detail || !ja.detail->closes_under_strength) continue;
+        const combination_result* governing = nullptr;
+        for (const auto& c : a.combinations)
+            if (c.comb.name == ja.detail->strength_combination) governing = &c;
+        if (!governing) continue;
+        const beam_model model(b.span, b.EI(), factored_loads(b.loads, governing->comb));
+        closing_joint cj[2];
+        for (beam_end k : {beam_end::start, beam_end::end}) {
+            const joint& j = b.at(k);
+            const auto& jk = k == beam_end::start ? a.start : a.end;
+            closing_joint& c = cj[k == beam_end::start ? 0 : 1];
+            c.before = j.range.min;
+            c.contact = j.contact_stiffness;
+            if (jk.detail) {
+                c.closure_sagging = beam_closure(jk.detail->gap.sagging.closing, j.support_rotation);
+                c.closure_hogging = beam_closure(jk.detail->gap.hogging.closing, j.support_rotation);
+            }
+        }
+        closure_consequence cc;
+        cc.combination = governing->comb.name;
+        cc.result = solve_with_closure(model, cj[0], cj[1]);
+        const bool start = e == beam_end::start;
+        const joint_phase phase = start ? cc.result.start : cc.result.end;
+        const sense_check& sc = phase == joint_phase::closed_hogging ? ja.detail->gap.hogging : ja.detail->gap.sagging;
+        const auto& c = cj[start ? 0 : 1];
+        cc.closure_rotation = (phase == joint_phase::closed_hogging ? c.closure_hogging : c.closure_sagging).value_or(0.0);
+        const double M = start ? cc.result.state.moment_start : cc.result.state.moment_end;
+        const double own = c.before.is_rigid() ? 0.0 : c.before.value() * cc.closure_rotation;
+        cc.lever_arm = sc.closing.contact ? sc.closing.contact->lever_arm : 0.0;
+        if (phase != joint_phase::open && cc.lever_arm > 0)
+            cc.contact_force = std::abs(std::abs(M) - own) / cc.lever_arm;
+        ja.detail->consequence = cc;
+    }
+}
+
+std::string closure_text(const std::optional<double>& r, const formatter& fmt)
+{
+    return r ? fmt(*r, dims::angle) : std::string("no closure within 90 degrees");
+}
+
+check gap_closure_check(const project& p, const beam& b, const joint_assessment& ja)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "gap-closure-" + to_string(ja.end);
+    c.dim = dims::angle;
+    if (!ja.detail) {
+        c.status = check_status::not_applicable;
+        c.message = "No connection detail is given for this joint, so the end gap is not checked.";
+        return c;
+    }
+    const detail_assessment& d = *ja.detail;
+    const joint& j = b.at(ja.end);
+    const bool sag = d.gap.governing == rotation_sense::sagging;
+    const sense_check& sc = d.gap.of(d.gap.governing);
+    c.value = sag ? d.demand_sagging : d.demand_hogging;
+    if (sc.closing.rotation) c.limit = *sc.closing.rotation;
+    const std::string where = sc.closing.contact ? sc.closing.contact->description() : std::string("the beam end");
+    const std::string gaps = "worst-case gap " + fmt(d.gap.worst_case_gap, dims::length) + " (" +
+                             fmt(d.gap.gap, dims::length) + " as detailed less " +
+                             fmt(d.gap.gap_tolerance, dims::length) + " tolerance)";
+    const std::string demand = std::string(sag ? "sagging" : "hogging") + " rotation demand " + fmt(*c.value, dims::angle) +
+                               (j.support_rotation > 0 ? " (incl. support rotation " + fmt(j.support_rotation, dims::angle) + ")" : "") +
+                               ", combination " + d.demand_combination;
+    const std::string closure = "closure rotation " + closure_text(sc.closing.rotation, fmt) + " (" + where + ")";
+    const std::string min_gap = d.gap.min_gap_required
+                                    ? "The smallest as-detailed gap that passes is " + fmt(*d.gap.min_gap_required, dims::length) + "."
+                                    : (d.gap.min_gap_note.empty() ? std::string() : d.gap.min_gap_note + ".");
+    if (!d.closes_under_strength && !d.closes_under_service) {
+        c.status = check_status::pass;
+        c.message = "With the " + gaps + " the " + closure + " exceeds the " + demand + "; clearance left at the demand " +
+                    fmt(sc.clearance_at_demand, dims::length) + ". " + min_gap;
+        return c;
+    }
+    if (!d.closes_under_strength) {
+        c.status = check_status::warn;
+        c.message = "With the " + gaps + " the " + closure + " is below the " + demand +
+                    " (a service combination): the beam end bears on the support in service. " + min_gap;
+        return c;
+    }
+    const auto& cc = *d.consequence;
+    const bool start = ja.end == beam_end::start;
+    const double M = start ? cc.result.state.moment_start : cc.result.state.moment_end;
+    const std::string effect = "Once closed (contact stiffness " +
+                               (j.contact_stiffness.is_rigid() ? std::string("rigid") : fmt(j.contact_stiffness.value(), dims::rotational_stiffness)) +
+                               ") the joint takes " + fmt(M, dims::moment) + " under " + cc.combination +
+                               ", a flange contact force of about " + fmt(cc.contact_force, dims::force) +
+                               ", and the same moment goes into the support.";
+    if (j.designed_for_closure) {
+        if (j.moment_resistance && std::abs(M) > *j.moment_resistance) {
+            c.status = check_status::fail;
+            c.message = "The gap closes under strength loads: " + closure + " is below the " + demand + ". " + effect +
+                        " The joint is declared designed for closure, but its moment resistance " +
+                        fmt(*j.moment_resistance, dims::moment) + " is less.";
+        } else {
+            c.status = check_status::pass;
+            c.message = "The gap closes under strength loads: " + closure + " is below the " + demand + ". " + effect +
+                        " The joint is declared designed for this moment (designed_for_closure).";
+        }
+        return c;
+    }
+    c.status = check_status::fail;
+    c.message = "The gap closes under strength loads: with the " + gaps + " the " + closure + " is below the " + demand +
+                ". " + effect + " The joint is then not a pin. " + min_gap +
+                " Or design the joint and the support for the moment and declare it (designed_for_closure).";
+    return c;
+}
+
+check detailing_check(const detailing_finding& f, beam_end e, const project& p)
+{
+    (void)p;
+    check c;
+    c.id = "detailing-" + f.id + "-" + to_string(e);
+    c.varies_with_stiffness = false;
+    c.status = f.status == finding_status::pass   ? check_status::pass
+               : f.status == finding_status::warn ? check_status::warn
+                                                  : check_status::not_applicable;
+    c.value = f.value;
+    c.limit = f.limit;
+    c.dim = f.unit;
+    // The finding's message states the rule; its source is added.
+    c.message = f.message + (f.source.empty() ? std::string() : " Source: " + f.source + ".");
+    return c;
+}
+
+}  // namespace
+
+beam_assessment assess_beam(const project& p, const beam& b, const assessment_options& options)
+{
+    beam_assessment a;
+    a.id = b.id;
+    a.input = &b;
+    for (const auto& c : b.combinations) a.combinations.push_back(analyse_combination(b, c, options.search_interior));
+    a.start = assess_joint(p, b, beam_end::start);
+    a.end = assess_joint(p, b, beam_end::end);
+    a.checks.reserve(32);
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(stiffness_class_check(p, a.joint_at(e)));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(joint_moment_check(p, b, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
+    a.checks.push_back(deflection_check(p, b, a.combinations));
+    assess_details(p, b, a, options.find_min_gap);
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(gap_closure_check(p, b, a.joint_at(e)));
+    for (beam_end e : {beam_end::start, beam_end::end})
+        if (a.joint_at(e).detail)
+            for (const auto& f : a.joint_at(e).detail->findings) a.checks.push_back(detailing_check(f, e, p));
+    if (b.E_is_default)
+        a.notes.push_back(p.standard == design_standard::en1993_1_8
+                              ? "E not given: 210 000 MPa is used (EN 1993-1-1 3.2.6(1))."
+                              : "E not given: 29 000 ksi is used (AISC 360-16, Section B2 / Symbols).");
+    if (p.standard == design_standard::aisc360)
+        a.notes.push_back("AISC 360-16 Commentary B3.4 classifies a connection by its secant stiffness at service "
+                          "loads: the stiffness range should be that secant stiffness.");
+    if (p.frame == frame_bracing::unbraced && p.standard == design_standard::en1993_1_8)
+        a.notes.push_back("Unbraced frame: the EN 1993-1-8 rigid boundary k_b = 25 applies only where K_b/K_c >= 0.1 in "
+                          "every storey; otherwise joints are semi-rigid (5.2.2.5(1)).");
+    return a;
+}
+
+project_assessment assess_project(const project& p, const assessment_options& options)
+{
+    project_assessment out;
+    out.input = &p;
+    for (const auto& b : p.beams) out.beams.push_back(assess_beam(p, b, options));
+    return out;
+}
+
+}  // namespace pinproof

@@ -1,0 +1,462 @@
+// Reading and validating the `detail` object of a joint.
+//
+// Defaults (docs/method/gap-geometry.md lists them with their sources):
+//   gap 10 mm, gap_tolerance 0, support column-flange, plate or cleat top
+//   50 mm below the beam top, first bolt 40 mm below the top of the fitting,
+//   pitch 70 mm, M20 bolts in holes d + 2 mm (d <= 24 mm) or d + 3 mm,
+//   plate and cleat thickness 10 mm, S275 plate, bolt line 50 mm from the
+//   beam end; bolt rows and fitting depth from each other, or else the fewest
+//   rows giving a fitting at least 0.6 x the beam depth.
+#include <algorithm>
+#include <cmath>
+#include <string>
+#include <vector>
+
+#include <nlohmann/json.hpp>
+
+#include "io/json_fields.hpp"
+#include "pinproof/io/connection_detail_input.hpp"
+#include "pinproof/model/end_geometry.hpp"
+#include "pinproof/core/units.hpp"
+
+namespace pinproof {
+
+namespace {
+
+using json = nlohmann::json;
+namespace jf = json_fields;
+
+constexpr double mm = 1e-3;
+
+// Standard components of simple joints (Steel Buildings in Europe, Part 5: Joint design, MSB05 p. 14): first bolt
+// 90 mm below the top of the beam with the fitting 50 mm below it, pitch
+// 70 mm, M20 bolts in 22 mm holes, 10 mm plates and cleats.
+constexpr double default_gap = 10 * mm;  // usual fin plate gap, from memory (SCI P212)
+constexpr double default_plate_top = 50 * mm;
+constexpr double default_first_bolt = 40 * mm;
+constexpr double default_pitch = 70 * mm;
+constexpr double default_bolt = 20 * mm;
+constexpr double default_thickness = 10 * mm;
+constexpr double default_bolt_line = 50 * mm;  // common practice, no source
+constexpr double min_depth_ratio = 0.6;        // fitting depth >= 0.6 h (SBE Part 5, MSB05 p. 16, 32)
+
+// Normal round clearance holes: d + 2 mm up to M24, d + 3 mm above (SBE Part 5, MSB05 p. 16).
+double default_hole(double d) { return d <= 24 * mm + 1e-9 ? d + 2 * mm : d + 3 * mm; }
+
+class reader {
+public:
+    reader(const json& obj, const std::string& pointer, problem_list& problems)
+        : obj_(obj), ptr_(pointer), problems_(problems)
+    {
+    }
+
+    std::string at(const std::string& key) const { return jf::child(ptr_, key); }
+    bool has(const std::string& key) const { return obj_.contains(key); }
+    std::string show(double metres) const { return format_quantity(metres, dims::length, system_); }
+    void problem(const std::string& key, const std::string& message) { problems_.add(at(key), message); }
+
+    // A length; `fallback` when absent. Checks the value is positive (or >= 0).
+    std::optional<double> length(const std::string& key, std::optional<double> fallback, bool allow_zero = false)
+    {
+        auto v = jf::quantity_field(obj_, ptr_, key, dims::length, !fallback.has_value(), problems_, &system_);
+        if (!has(key)) return fallback;
+        if (!v) return std::nullopt;
+        if (allow_zero ? *v < 0 : *v <= 0) {
+            problem(key, std::string("expected a ") + (allow_zero ? "non-negative" : "positive") + " length, found " +
+                             show(*v));
+            return std::nullopt;
+        }
+        return v;
+    }
+
+    // A length that may be negative (a level).
+    std::optional<double> level(const std::string& key, double fallback)
+    {
+        if (!has(key)) return fallback;
+        return jf::quantity_field(obj_, ptr_, key, dims::length, false, problems_, &system_);
+    }
+
+    const json& obj() const { return obj_; }
+    const std::string& pointer() const { return ptr_; }
+    problem_list& problems() { return problems_; }
+    unit_system system() const { return system_; }
+    void inherit(unit_system s)
+    {
+        if (system_ == unit_system::neutral) system_ = s;
+    }
+
+private:
+    const json& obj_;
+    std::string ptr_;
+    problem_list& problems_;
+    unit_system system_ = unit_system::neutral;
+};
+
+std::optional<cope> read_cope(reader& parent, const std::string& key, double h)
+{
+    const json& v = parent.obj()[key];
+    const std::string p = parent.at(key);
+    if (!jf::expect_object(v, p, parent.problems())) return std::nullopt;
+    jf::reject_unknown_keys(v, p, {"depth", "length"}, parent.problems());
+    reader r(v, p, parent.problems());
+    r.inherit(parent.system());
+    const auto depth = r.length("depth", std::nullopt);
+    const auto length = r.length("length", std::nullopt);
+    if (!depth || !length) return std::nullopt;
+    if (*depth >= h) {
+        r.problem("depth", "a cope must be shallower than the beam (depth " + r.show(h) + "), found " + r.show(*depth));
+        return std::nullopt;
+    }
+    return cope{*depth, *length};
+}
+
+std::optional<detail_point> read_point(const json& v, const std::string& p, problem_list& problems)
+{
+    if (!jf::expect_object(v, p, problems)) return std::nullopt;
+    jf::reject_unknown_keys(v, p, {"x", "y"}, problems);
+    const auto x = jf::quantity_field(v, p, "x", dims::length, true, problems);
+    const auto y = jf::quantity_field(v, p, "y", dims::length, true, problems);
+    if (!x || !y) return std::nullopt;
+    return detail_point{*x, *y};
+}
+
+std::optional<supporting_beam> read_supporting_beam(reader& parent)
+{
+    const std::string key = "supporting_beam";
+    const json& v = parent.obj()[key];
+    const std::string p = parent.at(key);
+    problem_list& problems = parent.problems();
+    if (!jf::expect_object(v, p, problems)) return std::nullopt;
+    jf::reject_unknown_keys(v, p, {"section", "top", "depth", "flange_width", "flange_thickness", "web_thickness", "root_radius"},
+                            problems);
+    reader r(v, p, problems);
+    r.inherit(parent.system());
+    supporting_beam sb;
+    sb.name = "user-defined";
+    std::optional<section> cat;
+    if (auto name = jf::string_field(v, p, "section", false, problems)) {
+        cat = find_catalogue_section(*name);
+        if (!cat) {
+            r.problem("section", "expected a section of the catalogue (for example \"IPE 400\"), found \"" + *name + "\"");
+            return std::nullopt;
+        }
+        sb.name = cat->name;
+    }
+    if (!cat && !r.has("depth") && !r.has("flange_width") && !r.has("flange_thickness") && !r.has("web_thickness")) {
+        problems.add(p, "give the supporting beam's \"section\", or its depth, flange_width, flange_thickness and "
+                        "web_thickness");
+        return std::nullopt;
+    }
+    // Explicit dimensions replace the catalogue's.
+    const auto depth = r.length("depth", cat ? std::optional<double>(cat->depth) : std::nullopt);
+    const auto b = r.length("flange_width", cat ? cat->flange_width : std::nullopt);
+    const auto tf = r.length("flange_thickness", cat ? cat->flange_thickness : std::nullopt);
+    const auto tw = r.length("web_thickness", cat ? cat->web_thickness : std::nullopt);
+    const auto rr = r.length("root_radius", cat ? cat->root_radius.value_or(0.0) : 0.0, true);
+    const auto top = r.level("top", 0.0);
+    if (!depth || !b || !tf || !tw || !rr || !top) return std::nullopt;
+    if (*tw >= *b) {
+        r.problem("web_thickness", "expected less than the flange width " + r.show(*b) + ", found " + r.show(*tw));
+        return std::nullopt;
+    }
+    if (2 * (*tf + *rr) >= *depth) {
+        r.problem("depth", "expected more than twice the flange thickness plus root radius (" +
+                               r.show(2 * (*tf + *rr)) + "), found " + r.show(*depth));
+        return std::nullopt;
+    }
+    if (*rr >= 0.5 * (*b - *tw)) {
+        r.problem("root_radius", "expected less than the flange outstand " + r.show(0.5 * (*b - *tw)) + ", found " +
+                                     r.show(*rr));
+        return std::nullopt;
+    }
+    sb.depth = *depth;
+    sb.flange_width = *b;
+    sb.flange_thickness = *tf;
+    sb.web_thickness = *tw;
+    sb.root_radius = *rr;
+    sb.top = *top;
+    return sb;
+}
+
+// Whether two outline edges (a, b) and (c, d) share any point.
+bool edges_touch(point2 a, point2 b, point2 c, point2 d)
+{
+    auto orient = [](point2 p, point2 q, point2 r) {
+        const double v = (q.x - p.x) * (r.y - p.y) - (q.y - p.y) * (r.x - p.x);
+        return v > 0 ? 1 : (v < 0 ? -1 : 0);
+    };
+    auto on = [](point2 p, point2 q, point2 r) {  // r on segment pq, given collinear
+        return std::min(p.x, q.x) <= r.x && r.x <= std::max(p.x, q.x) && std::min(p.y, q.y) <= r.y &&
+               r.y <= std::max(p.y, q.y);
+    };
+    const int o1 = orient(a, b, c), o2 = orient(a, b, d), o3 = orient(c, d, a), o4 = orient(c, d, b);
+    if (o1 != o2 && o3 != o4) return true;
+    return (o1 == 0 && on(a, b, c)) || (o2 == 0 && on(a, b, d)) || (o3 == 0 && on(c, d, a)) || (o4 == 0 && on(c, d, b));
+}
+
+}  // namespace
+
+connection_detail read_connection_detail(const nlohmann::json& value, const std::string& pointer, const section& beam,
+                                         problem_list& problems)
+{
+    connection_detail d;
+    const std::size_t before = problems.size();
+    if (!jf::expect_object(value, pointer, problems)) return d;
+    reader r(value, pointer, problems);
+
+    const auto type_text = jf::choice_field(value, pointer, "type", detail_type_names(), true, problems);
+    if (!type_text) return d;  // which fields apply depends on the type
+    d.type = *parse_detail_type(*type_text);
+    const bool fin = d.type == detail_type::fin_plate, cleats = d.type == detail_type::web_cleats,
+               end = d.type == detail_type::end_plate, custom = d.type == detail_type::custom;
+
+    // Field names of the fitting differ by type.
+    const std::string top_key = cleats ? "cleat_top" : "plate_top";
+    const std::string depth_key = cleats ? "cleat_depth" : "plate_depth";
+    const std::string thick_key = cleats ? "cleat_thickness" : "plate_thickness";
+
+    std::vector<std::string> known = {"type", "gap_tolerance", "support", "supporting_beam", "centre_of_rotation"};
+    if (custom) {
+        known.push_back("outline");
+    } else {
+        for (const char* k : {"cope_top", "cope_bottom", "bolt_diameter", "hole_diameter", "bolt_rows", "bolt_pitch",
+                              "first_bolt"})
+            known.push_back(k);
+        known.push_back(top_key);
+        known.push_back(depth_key);
+        known.push_back(thick_key);
+        if (!end) known.push_back("gap");
+        if (fin || end) known.push_back("plate_grade");
+        if (fin) known.push_back("bolt_line");
+    }
+    jf::reject_unknown_keys(value, pointer, known, problems);
+
+    const double h = beam.depth;
+    if (!(h > 0) || !std::isfinite(h)) {
+        problems.add(pointer, "the beam's section must give its depth to check the detail");
+        return d;
+    }
+
+    if (auto s = jf::choice_field(value, pointer, "support", support_type_names(), false, problems))
+        d.support = *parse_support_type(*s);
+
+    const auto tolerance = r.length("gap_tolerance", 0.0, true);
+    if (tolerance) d.gap_tolerance = *tolerance;
+
+    if (!custom) {
+        const auto gap = end ? std::optional<double>(0.0) : r.length("gap", default_gap);
+        const auto thickness = r.length(thick_key, default_thickness);
+        const auto bolt = r.length("bolt_diameter", default_bolt);
+        const auto hole = r.length("hole_diameter", default_hole(bolt.value_or(default_bolt)));
+        const auto pitch = r.length("bolt_pitch", default_pitch);
+        const auto first = r.length("first_bolt", default_first_bolt);
+        const auto top = r.length(top_key, default_plate_top, true);
+        const auto line = fin ? r.length("bolt_line", default_bolt_line) : std::optional<double>(0.0);
+        long long rows = 0;  // 0: not given
+        if (const auto v = jf::integer_field(value, pointer, "bolt_rows", false, problems)) {
+            if (*v < 1)
+                r.problem("bolt_rows", "expected at least 1 bolt row, found " + std::to_string(*v));
+            else if (*v > 50)
+                r.problem("bolt_rows", "expected at most 50 bolt rows, found " + std::to_string(*v));
+            else
+                rows = *v;
+        }
+        std::optional<double> depth;
+        if (r.has(depth_key)) depth = r.length(depth_key, std::nullopt);
+        if (fin || end)
+            if (auto g = jf::choice_field(value, pointer, "plate_grade", {"S275", "S355"}, false, problems))
+                d.grade = *g == "S355" ? plate_grade::s355 : plate_grade::s275;
+
+        if (gap && thickness && bolt && hole && pitch && first && top && line && problems.size() == before) {
+            // Rows and depth from each other, or the fewest rows reaching 0.6 h.
+            long long n = rows;
+            if (n < 1 && depth)
+                n = std::max(1LL, static_cast<long long>(std::floor((*depth - 2 * *first) / *pitch + 1e-9)) + 1);
+            if (n < 1)
+                for (n = 1; 2 * *first + (n - 1) * *pitch < min_depth_ratio * h - 1e-9 && n < 50;) ++n;
+            const double hp = depth ? *depth : 2 * *first + (n - 1) * *pitch;
+
+            d.gap = end ? *thickness : *gap;
+            d.plate_top = *top;
+            d.plate_depth = hp;
+            d.plate_thickness = *thickness;
+            d.bolts.diameter = *bolt;
+            d.bolts.hole_diameter = *hole;
+            d.bolts.rows = static_cast<int>(n);
+            d.bolts.pitch = *pitch;
+            d.bolts.first_bolt = *first;
+            d.bolts.bolt_line = *line;
+
+            if (*hole < *bolt)
+                r.problem("hole_diameter", "expected a hole at least as large as the bolt (" + r.show(*bolt) +
+                                               "), found " + r.show(*hole));
+            const std::string what = fin ? "fin plate" : cleats ? "cleats" : "end plate";
+            if (hp > h)
+                r.problem(depth_key, "the " + what + " is deeper than the beam (depth " + r.show(h) + "): found " +
+                                         r.show(hp));
+            else if (d.plate_top + hp > h + 1e-12)
+                r.problem(depth_key, "the " + what + " extends below the beam: top " + r.show(d.plate_top) + " + depth " +
+                                         r.show(hp) + " = " + r.show(d.plate_top + hp) + ", beam depth " + r.show(h));
+            if (*first + (n - 1) * *pitch >= hp)
+                r.problem(rows > 0 ? "bolt_rows" : depth_key,
+                          std::to_string(n) + " bolt row(s) at " + r.show(*pitch) + " pitch from " + r.show(*first) +
+                              " need a " + what + " deeper than " + r.show(*first + (n - 1) * *pitch) + ", found " +
+                              r.show(hp));
+        }
+    } else {
+        // custom: the outline gives the gap.
+        if (!r.has("outline")) {
+            problems.add(jf::child(pointer, "outline"), "missing required field \"outline\" (a list of points {x, y})");
+        } else {
+            const json& list = value["outline"];
+            const std::string lp = jf::child(pointer, "outline");
+            if (!list.is_array() || list.size() < 3) {
+                problems.add(lp, "expected a list of at least 3 points {\"x\": ..., \"y\": ...}, found " + jf::shown(list));
+            } else {
+                bool ok = true;
+                for (std::size_t i = 0; i < list.size(); ++i) {
+                    auto pnt = read_point(list[i], jf::child(lp, i), problems);
+                    if (pnt)
+                        d.outline.push_back(*pnt);
+                    else
+                        ok = false;
+                }
+                if (ok) {
+                    const std::size_t n = d.outline.size();
+                    std::vector<point2> q;
+                    for (const auto& p : d.outline) q.push_back({p.from_support, p.below_top});
+                    for (std::size_t i = 0; i < n && ok; ++i)
+                        for (std::size_t j = i + 1; j < n && ok; ++j) {
+                            const bool adjacent = j == i + 1 || (i == 0 && j == n - 1);
+                            if (adjacent) {
+                                if (q[i].x == q[j].x && q[i].y == q[j].y) {
+                                    problems.add(jf::child(lp, j), "repeats point " + std::to_string(i + 1));
+                                    ok = false;
+                                }
+                                continue;
+                            }
+                            if (edges_touch(q[i], q[(i + 1) % n], q[j], q[(j + 1) % n])) {
+                                problems.add(lp, "the outline crosses or touches itself (edges " + std::to_string(i + 1) +
+                                                     "-" + std::to_string((i + 1) % n + 1) + " and " +
+                                                     std::to_string(j + 1) + "-" + std::to_string((j + 1) % n + 1) + ")");
+                                ok = false;
+                            }
+                        }
+                    if (ok) {
+                        d.gap = d.outline.front().from_support;
+                        for (const auto& p : d.outline) d.gap = std::min(d.gap, p.from_support);
+                        for (std::size_t i = 0; i < n; ++i)
+                            if (d.outline[i].from_support <= d.gap_tolerance)
+                                problems.add(jf::child(jf::child(lp, i), "x"),
+                                             "every outline point must stand clear of the support face by more than "
+                                             "gap_tolerance (" + r.show(d.gap_tolerance) + "), found " +
+                                                 r.show(d.outline[i].from_support));
+                    }
+                }
+            }
+        }
+        if (!r.has("centre_of_rotation"))
+            problems.add(jf::child(pointer, "centre_of_rotation"),
+                         "missing required field \"centre_of_rotation\": a custom detail has no default centre");
+    }
+
+    // Gap and tolerance.
+    if (!custom && problems.size() == before && d.gap_tolerance >= d.gap)
+        r.problem("gap_tolerance", "expected less than the " + std::string(end ? "plate thickness" : "gap") + " (" +
+                                       r.show(d.gap) + "), found " + r.show(d.gap_tolerance));
+
+    // Copes.
+    if (!custom) {
+        if (r.has("cope_top")) d.cope_top = read_cope(r, "cope_top", h);
+        if (r.has("cope_bottom")) d.cope_bottom = read_cope(r, "cope_bottom", h);
+        if (d.cope_top && d.cope_bottom && d.cope_top->depth + d.cope_bottom->depth >= h)
+            r.problem("cope_bottom", "the copes leave no web: top " + r.show(d.cope_top->depth) + " + bottom " +
+                                         r.show(d.cope_bottom->depth) + " >= beam depth " + r.show(h));
+        if (problems.size() == before) {
+            const double bottom = d.plate_top + d.plate_depth;
+            const std::string what = fin ? "fin plate bolts" : cleats ? "cleats" : "end plate";
+            if (fin) {
+                // Bolts within the cope length must sit in the remaining web.
+                for (int i = 0; i < d.bolts.rows; ++i) {
+                    const double y = d.plate_top + d.bolts.first_bolt + i * d.bolts.pitch;
+                    if (d.cope_top && d.bolts.bolt_line < d.cope_top->length && y <= d.cope_top->depth) {
+                        r.problem("first_bolt", "bolt row " + std::to_string(i + 1) + " (" + r.show(y) +
+                                                    " below the top) falls in the top cope (depth " +
+                                                    r.show(d.cope_top->depth) + ")");
+                        break;
+                    }
+                    if (d.cope_bottom && d.bolts.bolt_line < d.cope_bottom->length && y >= h - d.cope_bottom->depth) {
+                        r.problem("bolt_rows", "bolt row " + std::to_string(i + 1) + " (" + r.show(y) +
+                                                   " below the top) falls in the bottom cope (depth " +
+                                                   r.show(d.cope_bottom->depth) + ")");
+                        break;
+                    }
+                }
+            } else {
+                if (d.cope_top && d.plate_top < d.cope_top->depth)
+                    r.problem(top_key, "the " + what + " start within the top cope: top " + r.show(d.plate_top) +
+                                           ", cope depth " + r.show(d.cope_top->depth));
+                if (d.cope_bottom && bottom > h - d.cope_bottom->depth)
+                    r.problem(depth_key, "the " + what + " reach into the bottom cope: bottom " + r.show(bottom) +
+                                             " below the top, cope starts at " + r.show(h - d.cope_bottom->depth));
+            }
+        }
+    }
+
+    // Support.
+    if (d.support == support_type::beam_web) {
+        if (!r.has("supporting_beam"))
+            problems.add(jf::child(pointer, "supporting_beam"),
+                         "missing required field \"supporting_beam\" for a beam-web support (its \"section\" or "
+                         "dimensions and \"top\", the level of its top below the top of this beam)");
+        else
+            d.support_beam = read_supporting_beam(r);
+    } else if (r.has("supporting_beam")) {
+        r.problem("supporting_beam", "applies only to a \"beam-web\" support, found support \"" + to_string(d.support) + "\"");
+    }
+
+    // Centre of rotation.
+    if (r.has("centre_of_rotation")) {
+        const std::string cp = jf::child(pointer, "centre_of_rotation");
+        if (auto c = read_point(value["centre_of_rotation"], cp, problems)) {
+            if (c->from_support < 0)
+                problems.add(jf::child(cp, "x"), "the centre of rotation lies inside the support: x is measured from "
+                                                 "the support face along the beam and must be 0 or more, found " +
+                                                     r.show(c->from_support));
+            else if (c->below_top < 0 || c->below_top > h)
+                problems.add(jf::child(cp, "y"), "the centre of rotation lies outside the beam depth: expected 0 to " +
+                                                     r.show(h) + " below the top, found " + r.show(c->below_top));
+            else
+                d.centre_of_rotation = c;
+        }
+    }
+
+    // The beam end must stand clear of the support at rest, at the worst-case gap.
+    if (problems.size() == before) {
+        const beam_end_geometry g = build_geometry(d, beam);
+        if (const auto hit = overlap(g, rotation_sense::sagging, 0.0)) {
+            std::string where = "gap";
+            if (custom)
+                where = "outline";
+            else if (d.support_beam)
+                where = hit->support_part.find("bottom") != std::string::npos ? "cope_bottom" : "cope_top";
+            std::string hint;
+            if (d.support_beam) {
+                const supporting_beam& sb = *d.support_beam;
+                const auto level = [&](double v) {
+                    return r.show(std::abs(v)) + (v >= 0 ? " below" : " above") + " the top of this beam";
+                };
+                hint = "; a cope must clear the supporting beam's flanges and root fillets: its top flange with the "
+                       "fillet reaches down to " + level(sb.top_flange_underside() + sb.root_radius) +
+                       ", its bottom flange with the fillet rises to " + level(sb.bottom_flange_top() - sb.root_radius) +
+                       ", and the flange tips stand " + r.show(sb.flange_outstand()) +
+                       " out from the web face (worst-case gap " + r.show(d.worst_case_gap()) + ")";
+            }
+            problems.add(jf::child(pointer, where),
+                         "the beam end overlaps the support at rest: " + hit->description() + hint);
+        }
+    }
+    return d;
+}
+
+}  // namespace pinproof

@@ -1,0 +1,661 @@
+// Reading a project file (docs/file-format.md). Every problem is collected
+// with its JSON pointer so that one run reports all of them.
+#include <nlohmann/json.hpp>
+
+#include <cctype>
+#include <cmath>
+#include <fstream>
+#include <set>
+#include <sstream>
+
+#include "io/json_fields.hpp"
+#include "pinproof/model/connection_detail.hpp"
+#include "pinproof/io/detail_catalogue.hpp"
+#include "pinproof/model/stiffness_distribution.hpp"
+#include "pinproof/io/project_input.hpp"
+#include "pinproof/io/stiffness_distribution_input.hpp"
+#include "pinproof/io/connection_detail_input.hpp"
+
+namespace pinproof {
+namespace {
+
+using json = nlohmann::json;
+using namespace json_fields;
+
+// Default moduli when a beam gives no E: EN 1993-1-1 3.2.6(1) E = 210 000 MPa;
+// AISC 360-16 Symbols / B2: E = 29 000 ksi.
+constexpr double default_E_en = 210e9;
+constexpr double default_E_aisc = 29000.0 * 6894757.293168361;
+
+// Bounds far outside any building beam. They keep the analysis where double
+// arithmetic and the equilibrium check of beam_model are meaningful, so that an
+// absurd value is reported at its field instead of failing inside the engine
+// (common practice, no source).
+struct plausible_range {
+    double lo, hi;  // SI
+};
+constexpr plausible_range plausible_span{0.01, 1000.0};      // m
+constexpr plausible_range plausible_E{1e9, 1e12};            // Pa (structural steel: about 2.1e11)
+constexpr plausible_range plausible_I{1e-10, 10.0};          // m^4 (IPE 80: 8.0e-7)
+constexpr double plausible_load_magnitude = 1e12;            // N, N/m, N*m
+constexpr double plausible_factor_magnitude = 1e3;
+constexpr plausible_range plausible_section_size{1e-4, 10.0};   // m: depth, flange and web sizes
+constexpr plausible_range plausible_section_area{1e-6, 10.0};   // m^2
+constexpr double plausible_deflection_limit = 10.0;          // m, an absolute limit
+constexpr double plausible_support_rotation = 0.5;           // rad
+constexpr double plausible_stiffness = 1e40;                 // N*m/rad; "rigid" is exact (1e30 agrees with it)
+
+// A plain decimal number (no unit), by the units parser's number rules: no
+// hexadecimal, nan or inf.
+std::optional<double> plain_number(const std::string& text)
+{
+    try {
+        const pinproof::quantity q = parse_quantity(text);
+        if (q.dim != dims::dimensionless) return std::nullopt;
+        return q.value;
+    } catch (const std::invalid_argument&) {
+        return std::nullopt;
+    }
+}
+
+struct reader {
+    problem_list& problems;
+    unit_system system = unit_system::neutral;
+
+    std::optional<double> q(const json& obj, const std::string& ptr, const std::string& key, dimension d,
+                            bool required)
+    {
+        return quantity_field(obj, ptr, key, d, required, problems, &system);
+    }
+
+    std::optional<double> positive(const json& obj, const std::string& ptr, const std::string& key, dimension d,
+                                   bool required)
+    {
+        auto v = q(obj, ptr, key, d, required);
+        if (v && !(*v > 0)) {
+            problems.add(child(ptr, key), "expected a positive " + describe(d) + ", found " + shown(obj.at(key)));
+            return std::nullopt;
+        }
+        return v;
+    }
+
+    // A positive quantity that must also lie in a plausible range.
+    std::optional<double> plausible(const json& obj, const std::string& ptr, const std::string& key, dimension d,
+                                    bool required, plausible_range r)
+    {
+        auto v = positive(obj, ptr, key, d, required);
+        if (v && (*v < r.lo || *v > r.hi)) {
+            problems.add(child(ptr, key), "expected a " + describe(d) + " between " + format_quantity(r.lo, d, system) +
+                                              " and " + format_quantity(r.hi, d, system) +
+                                              " (a value outside this range is not a building beam), found " +
+                                              shown(obj.at(key)));
+            return std::nullopt;
+        }
+        return v;
+    }
+
+    // A load value whose magnitude must stay below plausible_load_magnitude.
+    std::optional<double> load_value(const json& obj, const std::string& ptr, const std::string& key, dimension d)
+    {
+        auto v = q(obj, ptr, key, d, true);
+        if (v && std::abs(*v) > plausible_load_magnitude) {
+            problems.add(child(ptr, key), "expected a " + describe(d) + " of magnitude at most " +
+                                              format_quantity(plausible_load_magnitude, d, system) + ", found " +
+                                              shown(obj.at(key)));
+            return std::nullopt;
+        }
+        return v;
+    }
+
+    std::optional<section> read_section(const json& b, const std::string& ptr)
+    {
+        auto it = b.find("section");
+        const std::string sp = child(ptr, "section");
+        if (it == b.end()) {
+            problems.add(sp, "missing required field \"section\" (a catalogue name such as \"IPE 300\", or an "
+                             "object with at least I and depth)");
+            return std::nullopt;
+        }
+        if (it->is_string()) {
+            const auto name = it->get<std::string>();
+            auto s = find_catalogue_section(name);
+            if (!s) {
+                problems.add(sp, "expected a section name from the built-in catalogue (IPE 80 to IPE 600, HE 100 A "
+                                 "to HE 600 A, HE 100 B to HE 600 B, W shapes such as W18x35; pinproof sections "
+                                 "lists them) or an object with I and depth, " + unknown_section_text(name));
+            }
+            return s;
+        }
+        if (!it->is_object()) {
+            problems.add(sp, "expected a section name or an object with I and depth, found " + shown(*it));
+            return std::nullopt;
+        }
+        const json& o = *it;
+        reject_unknown_keys(o, sp, {"name", "I", "depth", "area", "flange_width", "flange_thickness",
+                                    "web_thickness", "root_radius"},
+                            problems);
+        section s;
+        s.name = string_field(o, sp, "name", false, problems).value_or("user-defined");
+        auto I = plausible(o, sp, "I", dims::second_moment, true, plausible_I);
+        auto depth = plausible(o, sp, "depth", dims::length, true, plausible_section_size);
+        s.area = plausible(o, sp, "area", dims::area, false, plausible_section_area);
+        s.flange_width = plausible(o, sp, "flange_width", dims::length, false, plausible_section_size);
+        s.flange_thickness = plausible(o, sp, "flange_thickness", dims::length, false, plausible_section_size);
+        s.web_thickness = plausible(o, sp, "web_thickness", dims::length, false, plausible_section_size);
+        s.root_radius = q(o, sp, "root_radius", dims::length, false);
+        if (s.root_radius && !(*s.root_radius <= plausible_section_size.hi)) {
+            problems.add(child(sp, "root_radius"), "expected a root radius of at most " +
+                                                       format_quantity(plausible_section_size.hi, dims::length, system) +
+                                                       ", found " + shown(o.at("root_radius")));
+            s.root_radius.reset();
+        }
+        if (s.root_radius && *s.root_radius < 0) {
+            problems.add(child(sp, "root_radius"), "expected a root radius of zero or more, found " +
+                                                       shown(o.at("root_radius")));
+        }
+        if (depth && s.flange_thickness && 2 * *s.flange_thickness >= *depth)
+            problems.add(child(sp, "flange_thickness"), "expected two flange thicknesses to be less than the depth");
+        if (!I || !depth) return std::nullopt;
+        s.I = *I;
+        s.depth = *depth;
+        return s;
+    }
+
+    // "rigid", a rotational stiffness, or a multiple of EI/L such as "0.5 EI/L".
+    std::optional<stiffness> read_stiffness(const json& v, const std::string& ptr, std::optional<double> EI_over_L)
+    {
+        if (v.is_string()) {
+            std::string t = v.get<std::string>();
+            while (!t.empty() && std::isspace(static_cast<unsigned char>(t.back()))) t.pop_back();
+            std::size_t b = 0;
+            while (b < t.size() && std::isspace(static_cast<unsigned char>(t[b]))) ++b;
+            t = t.substr(b);
+            if (t == "rigid") return stiffness::rigid();
+            const auto relative = read_EI_over_L_multiple(v, ptr, problems);
+            if (relative.relative) {
+                if (!relative.multiple) return std::nullopt;
+                const double k = *relative.multiple;
+                if (!EI_over_L) return std::nullopt;  // span, E or I already reported
+                if (!(k * *EI_over_L <= plausible_stiffness)) {
+                    problems.add(ptr, "expected a rotational stiffness of at most " +
+                                          format_quantity(plausible_stiffness, dims::rotational_stiffness, system) +
+                                          " (write \"rigid\" for a fixed end), found \"" + v.get<std::string>() + "\"");
+                    return std::nullopt;
+                }
+                return stiffness::spring(k * *EI_over_L);
+            }
+        }
+        const auto s = absolute_stiffness(v, ptr, problems, &system);
+        if (!s) return std::nullopt;
+        if (*s > plausible_stiffness) {
+            problems.add(ptr, "expected a rotational stiffness of at most " +
+                                  format_quantity(plausible_stiffness, dims::rotational_stiffness, system) +
+                                  " (write \"rigid\" for a fixed end), found " + shown(v));
+            return std::nullopt;
+        }
+        return stiffness::spring(*s);
+    }
+
+    std::optional<joint> read_joint(const json& j, const std::string& ptr, std::optional<double> EI_over_L,
+                                    const std::optional<section>& sec)
+    {
+        if (j.is_string()) {
+            problems.add(ptr, "expected an inline joint object, found the detail id \"" + j.get<std::string>() +
+                                  "\": a detail id needs a detail catalogue (--details FILE, or a \"details\" key "
+                                  "naming the catalogue file)");
+            return std::nullopt;
+        }
+        if (!expect_object(j, ptr, problems)) return std::nullopt;
+        reject_unknown_keys(j, ptr, {"stiffness", "stiffness_distribution", "moment_resistance", "description", "detail",
+                                     "support_rotation",
+                                     "contact_stiffness", "designed_for_closure"},
+                            problems);
+        joint out;
+        const std::string sp = child(ptr, "stiffness");
+        auto it = j.find("stiffness");
+        bool ok = true;
+        std::optional<stiffness_distribution> dist;
+        if (j.contains("stiffness_distribution"))
+            dist = read_stiffness_distribution(j.at("stiffness_distribution"), child(ptr, "stiffness_distribution"),
+                                               EI_over_L.value_or(0.0), problems);
+        out.distribution = dist;
+        if (it == j.end() && dist) {
+            // Only a distribution: the range is its 5 % to 95 % fractiles.
+            const auto f = dist->fractile_range();
+            out.range = {stiffness::spring(f.p05), stiffness::spring(f.p95)};
+        } else if (it == j.end()) {
+            if (!j.contains("stiffness_distribution"))
+                problems.add(sp, "missing required field \"stiffness\" (an object {\"min\": ..., \"max\": ...} of "
+                                 "rotational stiffnesses, \"rigid\" or multiples of EI/L), or a "
+                                 "\"stiffness_distribution\"");
+            ok = false;
+        } else if (it->is_object()) {
+            const auto [lo, hi] = read_bounds<stiffness>(
+                *it, sp, [&](const json& v, const std::string& at) { return read_stiffness(v, at, EI_over_L); },
+                problems);
+            if (lo && hi && *hi < *lo) {
+                problems.add(child(sp, "min"), "expected min not above max, found min " + shown(it->at("min")) +
+                                                   " above max " + shown(it->at("max")));
+                ok = false;
+            }
+            ok = ok && lo && hi;
+            if (ok) out.range = {*lo, *hi};
+        } else {
+            // A single value: the stiffness is known exactly.
+            auto s = read_stiffness(*it, sp, EI_over_L);
+            ok = s.has_value();
+            if (ok) out.range = {*s, *s};
+        }
+        auto mr = q(j, ptr, "moment_resistance", dims::moment, false);
+        if (mr && *mr < 0)
+            problems.add(child(ptr, "moment_resistance"), "expected a moment resistance of zero or more, found " +
+                                                              shown(j.at("moment_resistance")));
+        else out.moment_resistance = mr;
+        out.description = string_field(j, ptr, "description", false, problems).value_or("");
+        if (j.contains("detail")) {
+            // The reader needs the beam's section; a bad section is reported already.
+            if (sec) out.detail = read_connection_detail(j.at("detail"), child(ptr, "detail"), *sec, problems);
+        }
+        auto sr = q(j, ptr, "support_rotation", dims::angle, false);
+        if (sr && *sr > plausible_support_rotation)
+            problems.add(child(ptr, "support_rotation"), "expected a support rotation of at most " +
+                                                             format_quantity(plausible_support_rotation, dims::angle, system) +
+                                                             ", found " + shown(j.at("support_rotation")));
+        else if (sr && *sr < 0)
+            problems.add(child(ptr, "support_rotation"), "expected a support rotation of zero or more, found " +
+                                                             shown(j.at("support_rotation")));
+        else if (sr) out.support_rotation = *sr;
+        if (j.contains("contact_stiffness")) {
+            auto cs = read_stiffness(j.at("contact_stiffness"), child(ptr, "contact_stiffness"), EI_over_L);
+            if (cs) out.contact_stiffness = *cs;
+        }
+        out.designed_for_closure = bool_field(j, ptr, "designed_for_closure", false, problems).value_or(false);
+        if (!ok) return std::nullopt;
+        return out;
+    }
+
+    std::vector<load> read_loads(const json& b, const std::string& ptr, std::optional<double> span)
+    {
+        std::vector<load> out;
+        const std::string lp = child(ptr, "loads");
+        auto it = b.find("loads");
+        if (it == b.end()) {
+            problems.add(lp, "missing required field \"loads\" (an array of loads)");
+            return out;
+        }
+        if (!it->is_array() || it->empty()) {
+            problems.add(lp, "expected a non-empty array of loads, found " + shown(*it));
+            return out;
+        }
+        for (std::size_t i = 0; i < it->size(); ++i) {
+            const json& l = (*it)[i];
+            const std::string p = child(lp, i);
+            if (!expect_object(l, p, problems)) continue;
+            auto c = string_field(l, p, "case", true, problems);
+            auto kind = choice_field(l, p, "kind", {"point", "udl", "linear", "moment"}, true, problems);
+            if (c && c->empty()) problems.add(child(p, "case"), "expected a load case name, found an empty string");
+            if (!kind) continue;
+            load ld;
+            ld.load_case = c.value_or("");
+            bool ok = c.has_value();
+            const auto position = [&](const std::string& key, bool required, double fallback) -> std::optional<double> {
+                auto x = q(l, p, key, dims::length, required);
+                if (!x) return l.contains(key) || required ? std::nullopt : std::optional<double>(fallback);
+                if (span && (*x < 0 || *x > *span)) {
+                    problems.add(child(p, key), "expected a position within the span, 0 to " +
+                                                    format_quantity(*span, dims::length, system) + " from the start, found " +
+                                                    shown(l.at(key)));
+                    return std::nullopt;
+                }
+                return x;
+            };
+            if (*kind == "point" || *kind == "moment") {
+                const bool point = *kind == "point";
+                reject_unknown_keys(l, p, {"case", "kind", point ? "P" : "M", "at"}, problems);
+                ld.kind = point ? load_kind::point : load_kind::moment;
+                auto v = load_value(l, p, point ? "P" : "M", point ? dims::force : dims::moment);
+                auto at = position("at", true, 0.0);
+                ok = ok && v && at;
+                if (ok) {
+                    ld.value = *v;
+                    ld.from = ld.to = *at;
+                }
+            } else {
+                const bool udl = *kind == "udl";
+                if (udl) reject_unknown_keys(l, p, {"case", "kind", "w", "from", "to"}, problems);
+                else reject_unknown_keys(l, p, {"case", "kind", "w_start", "w_end", "from", "to"}, problems);
+                ld.kind = udl ? load_kind::udl : load_kind::linear;
+                auto w0 = load_value(l, p, udl ? "w" : "w_start", dims::line_load);
+                auto w1 = udl ? w0 : load_value(l, p, "w_end", dims::line_load);
+                auto from = position("from", false, 0.0);
+                // Without a valid span the default "to" is unknown (the span is reported).
+                auto to = span || l.contains("to") ? position("to", false, span.value_or(0.0)) : std::nullopt;
+                // beam_model needs a length above 1e-9 of the span; a shorter one is a point load.
+                if (from && to && span && !(*to - *from > 1e-9 * *span)) {
+                    problems.add(child(p, l.contains("to") ? "to" : "from"),
+                                 "expected \"to\" to lie beyond \"from\" by more than 1e-9 of the span (a distributed load "
+                                 "needs a length), found from " +
+                                     format_quantity(*from, dims::length, system) + " and to " +
+                                     format_quantity(*to, dims::length, system));
+                    ok = false;
+                }
+                ok = ok && w0 && w1 && from && to && span;
+                if (ok) {
+                    ld.value = *w0;
+                    ld.value_end = *w1;
+                    ld.from = *from;
+                    ld.to = *to;
+                }
+            }
+            if (ok) out.push_back(ld);
+        }
+        return out;
+    }
+
+    // `cases_known`: every load names its case, so a factor of another case is a mistake.
+    std::vector<combination> read_combinations(const json& b, const std::string& ptr, const std::set<std::string>& cases,
+                                               bool cases_known)
+    {
+        std::vector<combination> out;
+        const std::string cp = child(ptr, "combinations");
+        auto it = b.find("combinations");
+        if (it == b.end()) {
+            problems.add(cp, "missing required field \"combinations\" (an array of named load combinations)");
+            return out;
+        }
+        if (!it->is_array() || it->empty()) {
+            problems.add(cp, "expected a non-empty array of combinations, found " + shown(*it));
+            return out;
+        }
+        std::set<std::string> names;
+        for (std::size_t i = 0; i < it->size(); ++i) {
+            const json& c = (*it)[i];
+            const std::string p = child(cp, i);
+            if (!expect_object(c, p, problems)) continue;
+            reject_unknown_keys(c, p, {"name", "use", "factors"}, problems);
+            combination out_c;
+            auto name = string_field(c, p, "name", true, problems);
+            auto use = choice_field(c, p, "use", {"strength", "service"}, true, problems);
+            if (name && name->empty()) problems.add(child(p, "name"), "expected a combination name, found an empty string");
+            if (name && !names.insert(*name).second)
+                problems.add(child(p, "name"), "expected a unique combination name, found \"" + *name +
+                                                   "\" a second time");
+            bool ok = name && use;
+            const std::string fp = child(p, "factors");
+            auto f = c.find("factors");
+            if (f == c.end()) {
+                problems.add(fp, "missing required field \"factors\" (an object such as {\"G\": 1.35, \"Q\": 1.5})");
+                ok = false;
+            } else if (!f->is_object() || f->empty()) {
+                problems.add(fp, "expected an object of load-case factors such as {\"G\": 1.35, \"Q\": 1.5}, found " +
+                                     shown(*f));
+                ok = false;
+            } else {
+                for (auto e = f->begin(); e != f->end(); ++e) {
+                    if (!e->is_number() || !std::isfinite(e->get<double>())) {
+                        problems.add(child(fp, e.key()), "expected a finite number, found " + shown(*e));
+                        ok = false;
+                        continue;
+                    }
+                    if (std::abs(e->get<double>()) > plausible_factor_magnitude) {
+                        problems.add(child(fp, e.key()), "expected a factor between -" +
+                                                             format_number(plausible_factor_magnitude) + " and " +
+                                                             format_number(plausible_factor_magnitude) + ", found " +
+                                                             shown(*e));
+                        ok = false;
+                        continue;
+                    }
+                    if (cases_known && !cases.count(e.key())) {
+                        std::string list;
+                        for (const auto& k : cases) list += (list.empty() ? "\"" : ", \"") + k + "\"";
+                        problems.add(child(fp, e.key()), "expected a load case used by this beam's loads (" + list +
+                                                             "), found \"" + e.key() + "\"");
+                        ok = false;
+                        continue;
+                    }
+                    out_c.factors[e.key()] = e->get<double>();
+                }
+            }
+            if (!ok) continue;
+            out_c.name = *name;
+            out_c.use = *use == "strength" ? limit_state::strength : limit_state::service;
+            out.push_back(out_c);
+        }
+        return out;
+    }
+
+    std::optional<deflection_limit> read_deflection_limit(const json& lim, const std::string& ptr)
+    {
+        const std::string p = child(ptr, "deflection");
+        auto it = lim.find("deflection");
+        if (it == lim.end()) return std::nullopt;
+        deflection_limit out;
+        if (it->is_string()) {
+            std::string t = it->get<std::string>();
+            out.text = t;
+            std::string compact;
+            for (char ch : t)
+                if (!std::isspace(static_cast<unsigned char>(ch))) compact += ch;
+            for (const std::string prefix : {"span/", "L/"}) {
+                if (compact.rfind(prefix, 0) == 0) {
+                    const std::string num = compact.substr(prefix.size());
+                    const auto r = plain_number(num);
+                    if (!r || *r <= 0) {
+                        problems.add(p, "expected a deflection limit such as \"span/360\" or \"20 mm\", found \"" + t + "\"");
+                        return std::nullopt;
+                    }
+                    out.span_ratio = *r;
+                    return out;
+                }
+            }
+        }
+        auto v = json_fields::quantity(*it, p, dims::length, problems, &system);
+        if (!v) return std::nullopt;
+        if (!(*v > 0) || *v > plausible_deflection_limit) {
+            problems.add(p, "expected a positive deflection limit of at most " +
+                                format_quantity(plausible_deflection_limit, dims::length, system) + ", found " + shown(*it));
+            return std::nullopt;
+        }
+        out.absolute = *v;
+        if (out.text.empty()) out.text = format_quantity(*v, dims::length, unit_system::si);
+        return out;
+    }
+
+    std::optional<beam> read_beam(const json& b, const std::string& ptr, design_standard standard)
+    {
+        if (!expect_object(b, ptr, problems)) return std::nullopt;
+        reject_unknown_keys(b, ptr, {"id", "description", "span", "E", "section", "loads", "combinations", "joints",
+                                     "limits", "stiffness_correlation"},
+                            problems);
+        beam out;
+        out.pointer = ptr;
+        auto id = string_field(b, ptr, "id", true, problems);
+        if (id && id->empty()) problems.add(child(ptr, "id"), "expected a beam id, found an empty string");
+        out.description = string_field(b, ptr, "description", false, problems).value_or("");
+        auto span = plausible(b, ptr, "span", dims::length, true, plausible_span);
+        auto E = plausible(b, ptr, "E", dims::pressure, false, plausible_E);
+        if (!b.contains("E")) E = standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
+        auto sec = read_section(b, ptr);
+        std::optional<double> EI_over_L;
+        if (span && E && sec) EI_over_L = *E * sec->I / *span;
+
+        auto loads = read_loads(b, ptr, span);
+        std::set<std::string> cases;
+        for (const auto& l : loads) cases.insert(l.load_case);
+        bool cases_known = b.contains("loads") && b["loads"].is_array() && !b["loads"].empty();
+        if (cases_known)
+            for (const auto& l : b["loads"]) {
+                if (l.is_object() && l.contains("case") && l["case"].is_string() && !l["case"].get<std::string>().empty())
+                    cases.insert(l["case"].get<std::string>());
+                else cases_known = false;
+            }
+        auto combos = read_combinations(b, ptr, cases, cases_known);
+
+        const std::string jp = child(ptr, "joints");
+        std::optional<joint> js, je;
+        auto jit = b.find("joints");
+        if (jit == b.end()) {
+            problems.add(jp, "missing required field \"joints\" (an object with \"start\" and \"end\")");
+        } else if (expect_object(*jit, jp, problems)) {
+            reject_unknown_keys(*jit, jp, {"start", "end"}, problems);
+            for (const char* e : {"start", "end"}) {
+                if (!jit->contains(e)) {
+                    problems.add(child(jp, e), std::string("missing required field \"") + e + "\"");
+                    continue;
+                }
+                (std::string(e) == "start" ? js : je) = read_joint(jit->at(e), child(jp, e), EI_over_L, sec);
+            }
+        }
+        auto lim = b.find("limits");
+        if (lim != b.end() && expect_object(*lim, child(ptr, "limits"), problems)) {
+            reject_unknown_keys(*lim, child(ptr, "limits"), {"deflection"}, problems);
+            out.deflection = read_deflection_limit(*lim, child(ptr, "limits"));
+        }
+        out.stiffness_correlation = read_stiffness_correlation(b, ptr, problems).value_or(1);
+        if (!id || !span || !E || !sec || !js || !je) return std::nullopt;
+        out.id = *id;
+        out.span = *span;
+        out.E = *E;
+        out.E_is_default = !b.contains("E");
+        out.sec = *sec;
+        out.loads = std::move(loads);
+        out.combinations = std::move(combos);
+        out.start = *js;
+        out.end = *je;
+        return out;
+    }
+};
+
+// The parser's message quotes the bytes it read, which may be invalid UTF-8:
+// bytes outside ASCII are shown as \xNN so that the message itself stays valid text.
+std::string printable(const std::string& message)
+{
+    static const char hex[] = "0123456789ABCDEF";
+    std::string out;
+    for (unsigned char c : message) {
+        if (c < 0x80) {
+            out += static_cast<char>(c);
+        } else {
+            out += "\\x";
+            out += hex[c >> 4];
+            out += hex[c & 15];
+        }
+    }
+    return out;
+}
+
+// Finds where parsing stopped. nlohmann_json reports a number too large for a
+// double ("1e400") as out_of_range without its position, so the text is
+// scanned again with a handler that only records the error.
+struct error_locator : nlohmann::json_sax<json> {
+    std::size_t byte = 0;
+    std::string message;
+    bool null() override { return true; }
+    bool boolean(bool) override { return true; }
+    bool number_integer(number_integer_t) override { return true; }
+    bool number_unsigned(number_unsigned_t) override { return true; }
+    bool number_float(number_float_t, const string_t&) override { return true; }
+    bool string(string_t&) override { return true; }
+    bool binary(binary_t&) override { return true; }
+    bool start_object(std::size_t) override { return true; }
+    bool key(string_t&) override { return true; }
+    bool end_object() override { return true; }
+    bool start_array(std::size_t) override { return true; }
+    bool end_array() override { return true; }
+    bool parse_error(std::size_t position, const std::string&, const json::exception& e) override
+    {
+        byte = position;
+        message = e.what();
+        const auto tag = message.find("] ");
+        if (tag != std::string::npos) message = message.substr(tag + 2);
+        return false;
+    }
+};
+
+}  // namespace
+
+project read_project(const json& doc)
+{
+    problem_list problems;
+    reader r{problems};
+    project out;
+    if (!expect_object(doc, "", problems)) problems.throw_if_any();
+    reject_unknown_keys(doc, "", {"format", "title", "standard", "frame", "units", "beams", "$schema"}, problems);
+    format_field(doc, project_format, problems);
+    out.format = project_format;
+    out.title = string_field(doc, "", "title", true, problems).value_or("");
+    auto standard = choice_field(doc, "", "standard", {"EN1993-1-8", "AISC360"}, true, problems);
+    auto frame = choice_field(doc, "", "frame", {"braced", "unbraced"}, true, problems);
+    auto units = choice_field(doc, "", "units", {"SI", "US"}, false, problems);
+    if (standard) out.standard = parse_design_standard(*standard);
+    if (frame) out.frame = parse_frame_bracing(*frame);
+
+    if (const json* beams = non_empty_array_field(doc, "beams", problems)) {
+        unique_ids ids("beam id");
+        for (std::size_t i = 0; i < beams->size(); ++i) {
+            const std::string p = child("/beams", i);
+            auto b = r.read_beam((*beams)[i], p, out.standard);
+            ids.note((*beams)[i], p, problems);
+            if (b) out.beams.push_back(std::move(*b));
+        }
+    }
+    problems.throw_if_any();
+    if (units) out.units = *units == "US" ? unit_system::us_customary : unit_system::si;
+    else out.units = r.system == unit_system::us_customary ? unit_system::us_customary : unit_system::si;
+    return out;
+}
+
+project parse_project(std::string_view text, const project_sources& sources)
+{
+    json doc;
+    try {
+        doc = json::parse(text.begin(), text.end());
+    } catch (const json::parse_error& e) {
+        const std::string what = e.what();
+        const auto pos = what.find("syntax error");
+        throw input_error(line_column(text, e.byte > 0 ? e.byte - 1 : 0),
+                          "the file is not valid JSON: " + printable(pos == std::string::npos ? what : what.substr(pos)));
+    } catch (const json::exception& e) {
+        error_locator locator;
+        json::sax_parse(text.begin(), text.end(), &locator);
+        if (locator.message.empty()) throw input_error("/", std::string("the file cannot be read as JSON: ") + e.what());
+        throw input_error(line_column(text, locator.byte > 0 ? locator.byte - 1 : 0),
+                          "expected every number within the range of a double (about 1.8e308), found " +
+                              locator.message);
+    }
+    // Joints given as detail ids are replaced by the catalogue's entries first:
+    // the catalogue named on the command line, or the file named by "details".
+    std::string catalogue_path = sources.details_file;
+    if (catalogue_path.empty() && doc.is_object() && doc.contains("details")) {
+        if (!doc["details"].is_string() || doc["details"].get<std::string>().empty())
+            throw input_error("/details", "expected the path of a detail catalogue file (format pinproof-details/1), found " +
+                                              json_fields::shown(doc["details"]));
+        catalogue_path = doc["details"].get<std::string>();
+        if (!catalogue_path.empty() && catalogue_path.front() != '/' && !sources.base_dir.empty())
+            catalogue_path = sources.base_dir + "/" + catalogue_path;
+    }
+    if (doc.is_object()) doc.erase("details");
+    if (!catalogue_path.empty()) {
+        const detail_catalogue catalogue = load_detail_catalogue_file(catalogue_path);
+        problem_list problems;
+        resolve_detail_references(doc, catalogue, problems);
+        problems.throw_if_any();
+    }
+    return read_project(doc);
+}
+
+project load_project_file(const std::string& path, const std::string& details_file)
+{
+    std::ifstream in(path, std::ios::binary);
+    if (!in) throw input_error(path, "cannot open the project file for reading");
+    std::ostringstream buf;
+    buf << in.rdbuf();
+    if (in.bad()) throw input_error(path, "cannot read the project file");
+    project_sources sources;
+    sources.details_file = details_file;
+    const auto slash = path.find_last_of('/');
+    sources.base_dir = slash == std::string::npos ? "." : path.substr(0, slash == 0 ? 1 : slash);
+    return parse_project(buf.str(), sources);
+}
+
+}  // namespace pinproof

@@ -1,7 +1,0 @@
-#include "pinproof/joint.hpp"
-
-namespace pinproof {
-
-std::string to_string(beam_end e) { return e == beam_end::start ? "start" : "end"; }
-
-}  // namespace pinproof

@@ -1,0 +1,675 @@
+#include "pinproof/report/calculation_report.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <optional>
+#include <sstream>
+#include <utility>
+
+#include "pinproof/joints/classification.hpp"
+#include "pinproof/report/detail_drawing.hpp"
+#include "pinproof/core/errors.hpp"
+#include "pinproof/checks/gap_geometry.hpp"
+#include "pinproof/model/result_fields.hpp"
+#include "pinproof/report/svg_chart.hpp"
+#include "pinproof/checks/sweep.hpp"
+#include "pinproof/report/text_report.hpp"
+#include "pinproof/report/sweep_output.hpp"
+#include "core/sha256.hpp"
+
+namespace pinproof {
+
+std::string html_escape(std::string_view text)
+{
+    std::string out;
+    out.reserve(text.size());
+    for (char c : text) {
+        switch (c) {
+        case '&': out += "&amp;"; break;
+        case '<': out += "&lt;"; break;
+        case '>': out += "&gt;"; break;
+        case '"': out += "&quot;"; break;
+        case '\'': out += "&#39;"; break;
+        default: out += c;
+        }
+    }
+    return out;
+}
+
+std::string input_hash(std::string_view bytes) { return sha256_hex(bytes); }
+
+beam_line beam_line_of(const beam& b, const combination& c, beam_end e)
+{
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c));
+    const bool start = e == beam_end::start;
+    beam_line l;
+    l.end = e;
+    l.far_end = start ? b.end.range.min : b.start.range.min;
+    const auto fixed = start ? model.end_moments(stiffness::rigid(), l.far_end)
+                             : model.end_moments(l.far_end, stiffness::rigid());
+    l.fixed_moment = start ? fixed[0] : fixed[1];
+    const beam_state pinned = start ? model.solve(stiffness::pinned(), l.far_end)
+                                    : model.solve(l.far_end, stiffness::pinned());
+    l.pinned_rotation = start ? pinned.rotation_start : pinned.rotation_end;
+    // M = S theta and M = M_F (1 - theta / theta_s) meet at
+    // theta = M_F theta_s / (S theta_s + M_F).
+    auto meet = [&](stiffness s) {
+        beam_line_point p;
+        p.joint = s;
+        if (s.is_rigid()) {
+            p.rotation = 0;
+            p.moment = l.fixed_moment;
+            return p;
+        }
+        const double den = s.value() * l.pinned_rotation + l.fixed_moment;
+        p.rotation = den == 0.0 ? 0.0 : l.fixed_moment * l.pinned_rotation / den;
+        p.moment = s.value() * p.rotation;
+        return p;
+    };
+    const stiffness_range& r = b.at(e).range;
+    l.lower = meet(r.min);
+    l.upper = meet(r.max);
+    return l;
+}
+
+namespace {
+
+struct units_view {
+    unit_system system;
+    display_unit unit(dimension d) const { return display_unit_for(d, system); }
+    std::string sym(dimension d) const { return unit(d).symbol; }
+    double in(double si, dimension d) const
+    {
+        const double v = si / unit(d).si_per_unit;
+        return std::abs(v) < 1e-12 ? 0.0 : v;
+    }
+    std::string num(double si, dimension d, int sig = 4) const { return format_number(in(si, d), sig); }
+    std::string q(double si, dimension d, int sig = 4) const
+    {
+        const std::string s = sym(d);
+        return num(si, d, sig) + (s.empty() ? "" : " " + s);
+    }
+    // Positions along the beam in m (ft).
+    bool us() const { return system == unit_system::us_customary; }
+    std::string pos_unit() const { return us() ? "ft" : "m"; }
+    double pos_in(double m) const { return us() ? m / 0.3048 : m; }
+    std::string pos(double m) const { return format_number(std::abs(m) < 1e-12 ? 0.0 : pos_in(m), 4) + " " + pos_unit(); }
+    std::string stiff(stiffness s) const
+    {
+        return s.is_rigid() ? std::string("rigid") : q(s.value(), dims::rotational_stiffness);
+    }
+};
+
+std::string esc(const std::string& s) { return html_escape(s); }
+
+std::string status_class(check_status s)
+{
+    switch (s) {
+    case check_status::pass: return "pass";
+    case check_status::fail: return "fail";
+    case check_status::warn: return "warn";
+    case check_status::not_applicable: return "na";
+    }
+    return "na";
+}
+
+std::string standard_name(design_standard s)
+{
+    return s == design_standard::en1993_1_8 ? "EN 1993-1-8:2005" : "AISC 360-16";
+}
+
+// An SVG document made fit to sit inline in the report: no XML declaration or
+// namespace attributes (HTML supplies the namespace), scaled to the column
+// width by its viewBox, and every id (and reference to it) made unique in the
+// page so that two charts never share a clip path.
+std::string inline_svg(std::string svg, int index)
+{
+    if (svg.compare(0, 5, "<?xml") == 0) svg.erase(0, svg.find("?>") + 2);
+    const std::size_t open = svg.find("<svg");
+    if (open == std::string::npos) throw internal_error("a report figure is not an SVG document");
+    svg.erase(0, open);
+    std::size_t tag_end = svg.find('>');
+    std::string tag = svg.substr(0, tag_end);
+    auto drop_attribute = [&tag](const std::string& name) {
+        for (;;) {
+            const std::size_t at = tag.find(" " + name + "=\"");
+            if (at == std::string::npos) return;
+            const std::size_t close = tag.find('"', at + name.size() + 3);
+            tag.erase(at, close + 1 - at);
+        }
+    };
+    drop_attribute("xmlns");
+    drop_attribute("xmlns:xlink");
+    drop_attribute("width");
+    drop_attribute("height");
+    drop_attribute("style");
+    tag += " width=\"100%\" preserveAspectRatio=\"xMidYMid meet\" role=\"img\"";
+    svg = tag + svg.substr(tag_end);
+    // Unique ids.
+    std::vector<std::string> ids;
+    for (std::size_t at = svg.find(" id=\""); at != std::string::npos; at = svg.find(" id=\"", at + 1)) {
+        const std::size_t b = at + 5, e = svg.find('"', b);
+        ids.push_back(svg.substr(b, e - b));
+    }
+    const std::string prefix = "f" + std::to_string(index) + "-";
+    auto replace_all = [&svg](const std::string& from, const std::string& to) {
+        for (std::size_t at = svg.find(from); at != std::string::npos; at = svg.find(from, at + to.size()))
+            svg.replace(at, from.size(), to);
+    };
+    for (const auto& id : ids) {
+        replace_all(" id=\"" + id + "\"", " id=\"" + prefix + id + "\"");
+        replace_all("url(#" + id + ")", "url(#" + prefix + id + ")");
+        replace_all("href=\"#" + id + "\"", "href=\"#" + prefix + id + "\"");
+    }
+    return svg;
+}
+
+class report_writer {
+public:
+    report_writer(const project& p, const project_assessment& a, const report_info& info)
+        : p_(p), a_(a), info_(info), u_{p.units}
+    {
+    }
+    std::string write();
+
+private:
+    void figure(const std::string& kind, const std::string& svg, const std::string& caption);
+    void head();
+    void title_block();
+    void method();
+    void beam_section(const beam_assessment& ba);
+    void inputs(const beam& b);
+    void joints(const beam& b, const beam_assessment& ba);
+    void combination_block(const beam& b, const combination_result& r);
+    void sweep_chart(const beam& b);
+    void beam_line_chart(const beam& b, const combination& c, beam_end e);
+    void gap_drawings(const beam& b, const beam_assessment& ba);
+    void checks(const beam_assessment& ba);
+    void verdict(const beam_assessment& ba);
+    void closing();
+
+    const project& p_;
+    const project_assessment& a_;
+    const report_info& info_;
+    units_view u_;
+    std::ostringstream o_;
+    int figures_ = 0;
+    int beams_ = 0;
+};
+
+void report_writer::figure(const std::string& kind, const std::string& svg, const std::string& caption)
+{
+    ++figures_;
+    o_ << "<figure class=\"chart\" data-chart=\"" << esc(kind) << "\">\n" << inline_svg(svg, figures_)
+       << "<figcaption>Figure " << figures_ << ". " << esc(caption) << "</figcaption>\n</figure>\n";
+}
+
+void report_writer::head()
+{
+    o_ << "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n"
+       << "<meta name=\"generator\" content=\"pinproof " << esc(info_.version) << "\">\n"
+       << "<title>" << esc(p_.title.empty() ? std::string("pinproof calculation report") : p_.title)
+       << " - calculation report</title>\n"
+       // A4 with margins that leave a column also inside a Letter page
+       // (174 mm wide, 255 mm high at most).
+       << "<style>\n"
+          "@page { size: A4; margin: 14mm 18mm 18mm 18mm; }\n"
+          "html { font-family: 'DejaVu Sans', 'Liberation Sans', Arial, sans-serif; font-size: 10pt; color: #111; }\n"
+          "body { margin: 0 auto; max-width: 174mm; padding: 4mm 0; line-height: 1.35; }\n"
+          "h1 { font-size: 17pt; margin: 0 0 3mm 0; }\n"
+          "h2 { font-size: 13.5pt; margin: 6mm 0 2mm 0; border-bottom: 1.5px solid #333; }\n"
+          "h3 { font-size: 11.5pt; margin: 5mm 0 2mm 0; }\n"
+          "h4 { font-size: 10.5pt; margin: 4mm 0 1.5mm 0; }\n"
+          "p, li { margin: 1.2mm 0; }\n"
+          "table { border-collapse: collapse; width: 100%; margin: 2mm 0 3mm 0; table-layout: auto; }\n"
+          "th, td { border: 1px solid #999; padding: 1mm 1.6mm; text-align: left; vertical-align: top; "
+          "overflow-wrap: break-word; }\n"
+          "th { background: #eceff3; }\n"
+          "td.num { text-align: right; white-space: nowrap; }\n"
+          "td.id { white-space: nowrap; }\n"
+          "table.kv th { width: 32%; }\n"
+          "code, .hash { font-family: 'DejaVu Sans Mono', monospace; font-size: 8.5pt; overflow-wrap: break-word; }\n"
+          "figure.chart { margin: 3mm 0 4mm 0; break-inside: avoid; page-break-inside: avoid; }\n"
+          "figure.chart svg { display: block; width: 100%; height: auto; max-width: 100%; }\n"
+          "figcaption { font-size: 9pt; color: #333; margin-top: 1mm; }\n"
+          "section.beam { break-before: page; page-break-before: always; }\n"
+          ".status { font-weight: bold; white-space: nowrap; }\n"
+          ".status.fail { color: #b00000; }\n"
+          ".status.pass { color: #1b6e20; }\n"
+          ".status.warn { color: #8a5a00; }\n"
+          ".status.na { color: #555; }\n"
+          ".verdict { border: 2px solid #333; padding: 2mm 3mm; margin: 3mm 0; font-weight: bold; "
+          "break-inside: avoid; }\n"
+          ".verdict.fail { border-color: #b00000; color: #b00000; }\n"
+          ".verdict.pass { border-color: #1b6e20; color: #1b6e20; }\n"
+          ".caution { border: 1px solid #8a5a00; background: #fff8e6; padding: 2mm 3mm; margin: 3mm 0; }\n"
+          ".note { font-size: 9pt; color: #333; }\n"
+          "@media print { body { padding: 0; } a { color: inherit; text-decoration: none; } }\n"
+          "</style>\n</head>\n<body>\n";
+}
+
+void report_writer::title_block()
+{
+    o_ << "<header>\n<h1>Calculation report: simple-support assumption of beams on semi-rigid joints</h1>\n";
+    std::string ids;
+    for (const auto& b : a_.beams) ids += (ids.empty() ? "" : ", ") + b.id;
+    o_ << "<table class=\"kv\" id=\"title-block\">\n"
+       << "<tr><th>Project</th><td>" << esc(p_.title) << "</td></tr>\n"
+       << "<tr><th>Beams</th><td>" << esc(ids) << "</td></tr>\n"
+       << "<tr><th>Date</th><td>" << esc(info_.date) << "</td></tr>\n"
+       << "<tr><th>Software</th><td>pinproof " << esc(info_.version) << "</td></tr>\n"
+       << "<tr><th>Input file</th><td>" << esc(info_.input_file) << "</td></tr>\n"
+       << "<tr><th>Input SHA-256</th><td class=\"hash\">" << esc(info_.input_sha256) << "</td></tr>\n"
+       << "<tr><th>Standard</th><td>" << standard_name(p_.standard) << ", " << esc(to_string(p_.frame))
+       << " frame</td></tr>\n"
+       << "<tr><th>Units shown</th><td>" << (u_.us() ? "US customary" : "SI") << "</td></tr>\n"
+       << "</table>\n";
+    const auto holding = std::count_if(a_.beams.begin(), a_.beams.end(), [](const beam_assessment& b) { return b.holds(); });
+    const bool all = a_.all_hold();
+    o_ << "<div class=\"verdict " << (all ? "pass" : "fail") << "\" id=\"overall-verdict\">Verdict: ";
+    if (all)
+        o_ << "the simple-support (pinned) assumption HOLDS for every beam (" << a_.beams.size() << " of "
+           << a_.beams.size() << ").";
+    else
+        o_ << "the simple-support (pinned) assumption DOES NOT HOLD for " << a_.beams.size() - holding << " of "
+           << a_.beams.size() << " beams.";
+    o_ << "</div>\n<table>\n<tr><th>Beam</th><th>Verdict</th><th>Failed checks</th></tr>\n";
+    for (const auto& b : a_.beams) {
+        std::string failed;
+        for (const auto& c : b.checks)
+            if (c.status == check_status::fail) failed += (failed.empty() ? "" : ", ") + c.id;
+        o_ << "<tr><td class=\"id\">" << esc(b.id) << "</td><td class=\"status " << (b.holds() ? "pass\">HOLDS" : "fail\">DOES NOT HOLD")
+           << "</td><td>" << (failed.empty() ? "none" : esc(failed)) << "</td></tr>\n";
+    }
+    o_ << "</table>\n";
+    o_ << "<div class=\"caution\"><strong>Caution.</strong> " << esc(caution_text)
+       << " This report is for review by a qualified engineer.</div>\n</header>\n";
+}
+
+void report_writer::method()
+{
+    const double kb = en_rigid_limit(p_.frame);
+    o_ << "<section id=\"method\">\n<h2>Assumptions and method</h2>\n<ul>\n"
+       << "<li>Each beam is a uniform, straight, linear elastic Euler-Bernoulli beam between two vertical supports; "
+          "each end is restrained by a rotational spring of stiffness S (0 a pin, rigid an exact fixity). "
+          "Shear deformation, axial force and second-order effects are not included.</li>\n"
+       << "<li>The joint stiffness is not known exactly: each end is given a range S<sub>min</sub> .. S<sub>max</sub>. "
+          "Results are given for ideal pins, ideal fixity and the four corners of the range box; every result at a "
+          "point is monotone in each stiffness, so its extremes lie at the corners. The smallest span moment and "
+          "deflection are also searched inside the box.</li>\n"
+       << "<li>Joints are classified by &kappa; = S L / (E I): EN 1993-1-8:2005 5.2.2.5(1), nominally pinned for "
+          "&kappa; &le; 0.5 and rigid for &kappa; &ge; "
+       << format_number(kb, 2) << " (" << esc(to_string(p_.frame))
+       << " frame); AISC 360-16 Commentary B3.4, simple for &kappa; &le; 2 and fully restrained for &kappa; &ge; 20. "
+          "The fixity factor is r = &kappa; / (&kappa; + 3) (Monforton and Wu, 1963).</li>\n"
+       << "<li>A joint with a declared moment resistance is checked against the largest end moment it attracts "
+          "under strength combinations; the end rotation is compared with about 30 mrad, a rule of thumb for simple "
+          "connections (advisory, a warning only); the service deflection with the given limit.</li>\n"
+       << "<li>Signs: loads and deflections downward positive, bending moment sagging positive, end moments hogging "
+          "positive, end rotations positive in the sense a simply supported beam turns under gravity load.</li>\n"
+       << "<li>The beam line of an end: with the far joint held at its lower-bound stiffness, the end moment falls "
+          "linearly from M<sub>F</sub> (this joint rigid) at zero rotation to zero at &theta;<sub>s</sub> (this joint "
+          "pinned). A joint carries M = S &theta;; where the lines meet is the analysed state.</li>\n"
+       << "<li>The verdict for a beam holds when no check fails. A warning is information to pass on; it does not "
+          "change the verdict.</li>\n"
+       << "</ul>\n</section>\n";
+}
+
+void report_writer::inputs(const beam& b)
+{
+    o_ << "<h3>Inputs</h3>\n<table class=\"kv\">\n"
+       << "<tr><th>Description</th><td>" << esc(b.description) << "</td></tr>\n"
+       << "<tr><th>Section</th><td>" << esc(b.sec.name) << "</td></tr>\n"
+       << "<tr><th>Span L</th><td>" << u_.pos(b.span) << "</td></tr>\n"
+       << "<tr><th>Young's modulus E</th><td>" << u_.q(b.E, dims::pressure)
+       << (b.E_is_default ? " (not given: the standard's value)" : "") << "</td></tr>\n"
+       << "<tr><th>Second moment of area I</th><td>" << u_.q(b.sec.I, dims::second_moment) << "</td></tr>\n"
+       << "<tr><th>Depth</th><td>" << u_.q(b.sec.depth, dims::length) << "</td></tr>\n"
+       << "<tr><th>EI / L</th><td>" << u_.q(b.EI() / b.span, dims::rotational_stiffness) << "</td></tr>\n"
+       << "<tr><th>Deflection limit</th><td>"
+       << (b.deflection ? esc(b.deflection->text) + " = " + u_.q(b.deflection->value(b.span), dims::length)
+                        : std::string("none given"))
+       << "</td></tr>\n</table>\n";
+    o_ << "<h4>Loads (unfactored)</h4>\n<table>\n<tr><th>Case</th><th>Kind</th><th>Value</th><th>Position</th></tr>\n";
+    for (const auto& l : b.loads) {
+        std::string value, where;
+        switch (l.kind) {
+        case load_kind::point:
+            value = u_.q(l.value, dims::force);
+            where = "at " + u_.pos(l.from);
+            break;
+        case load_kind::moment:
+            value = u_.q(l.value, dims::moment) + " (clockwise +)";
+            where = "at " + u_.pos(l.from);
+            break;
+        case load_kind::udl:
+            value = u_.q(l.value, dims::line_load);
+            where = u_.pos(l.from) + " to " + u_.pos(l.to);
+            break;
+        case load_kind::linear:
+            value = u_.q(l.value, dims::line_load) + " to " + u_.q(l.value_end, dims::line_load);
+            where = u_.pos(l.from) + " to " + u_.pos(l.to);
+            break;
+        }
+        o_ << "<tr><td>" << esc(l.load_case) << "</td><td>" << esc(to_string(l.kind)) << "</td><td>" << esc(value)
+           << "</td><td>" << esc(where) << "</td></tr>\n";
+    }
+    o_ << "</table>\n<h4>Combinations</h4>\n<table>\n<tr><th>Name</th><th>Use</th><th>Factors</th></tr>\n";
+    for (const auto& c : b.combinations)
+        o_ << "<tr><td>" << esc(c.name) << "</td><td>" << esc(to_string(c.use)) << "</td><td>"
+           << esc(combination_text(c)) << "</td></tr>\n";
+    o_ << "</table>\n";
+}
+
+void report_writer::joints(const beam& b, const beam_assessment& ba)
+{
+    const bool en = p_.standard == design_standard::en1993_1_8;
+    auto ratio = [](const std::optional<double>& r) { return r ? format_number(*r, 3) : std::string("rigid"); };
+    o_ << "<h4>Joints</h4>\n<table>\n<tr><th>End</th><th>S<sub>min</sub> .. S<sub>max</sub></th>"
+          "<th>&kappa; = S L / EI</th><th>Fixity r</th><th>Class (lower .. upper bound)</th>"
+          "<th>Moment resistance</th></tr>\n";
+    for (const auto* j : {&ba.start, &ba.end}) {
+        const auto& mr = b.at(j->end).moment_resistance;
+        o_ << "<tr><td>" << to_string(j->end) << "</td><td>" << esc(u_.stiff(j->range.min)) << " .. "
+           << esc(u_.stiff(j->range.max)) << "</td><td class=\"num\">" << ratio(j->ratio_lower) << " .. "
+           << ratio(j->ratio_upper) << "</td><td class=\"num\">" << format_number(j->fixity_lower, 3) << " .. "
+           << format_number(j->fixity_upper, 3) << "</td><td>"
+           << (en ? "EN 1993-1-8: " + to_string(j->en_lower) + " .. " + to_string(j->en_upper)
+                  : "AISC 360: " + to_string(j->aisc_lower) + " .. " + to_string(j->aisc_upper))
+           << "</td><td>" << (mr ? u_.q(*mr, dims::moment) : std::string("not declared")) << "</td></tr>\n";
+    }
+    o_ << "</table>\n";
+    for (const auto& n : ba.notes) o_ << "<p class=\"note\">Note: " << esc(n) << "</p>\n";
+}
+
+void report_writer::combination_block(const beam& b, const combination_result& r)
+{
+    o_ << "<h3>Combination " << esc(r.comb.name) << " (" << esc(to_string(r.comb.use)) << "): "
+       << esc(combination_text(r.comb)) << "</h3>\n";
+    o_ << "<table>\n<tr><th>Result</th><th>Unit</th><th>Pinned</th><th>Range min</th><th>Range max</th>"
+          "<th>Fixed</th></tr>\n";
+    const auto& f = result_fields();
+    for (std::size_t i = 0; i < f.size(); ++i) {
+        const bool position = f[i].member == &beam_state::max_sagging_at || f[i].member == &beam_state::max_deflection_at;
+        auto cell = [&](double v) {
+            return position ? format_number(std::abs(v) < 1e-12 ? 0.0 : u_.pos_in(v), 4) : u_.num(v, f[i].dim);
+        };
+        std::string label = f[i].label;
+        while (!label.empty() && label.front() == ' ') label.erase(0, 1);
+        o_ << "<tr><td>" << esc(label) << "</td><td>" << esc(position ? u_.pos_unit() : u_.sym(f[i].dim))
+           << "</td><td class=\"num\">" << cell(r.pinned.*(f[i].member)) << "</td><td class=\"num\">"
+           << cell(r.envelope.ranges[i].min) << "</td><td class=\"num\">" << cell(r.envelope.ranges[i].max)
+           << "</td><td class=\"num\">" << cell(r.fixed.*(f[i].member)) << "</td></tr>\n";
+    }
+    o_ << "</table>\n";
+
+    // Diagrams, pointwise over the span, from the same model the assessment used.
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, r.comb));
+    std::vector<double> xs;
+    const int n = 160;
+    for (int i = 0; i <= n; ++i) xs.push_back(b.span * i / n);
+    for (double x : model.nodes()) xs.push_back(x);
+    std::sort(xs.begin(), xs.end());
+    xs.erase(std::unique(xs.begin(), xs.end(), [&](double a, double c) { return std::abs(a - c) < 1e-12 * b.span; }),
+             xs.end());
+    auto curves = [&](bool moment, dimension d) {
+        auto value = [&](double x, const beam_state& s) {
+            return moment ? model.moment_at(x, s.moment_start, s.moment_end)
+                          : model.deflection_at(x, s.moment_start, s.moment_end);
+        };
+        chart_series pinned{"pinned ends", {}, "#1f77b4", true};
+        chart_series fixed{"fixed ends", {}, "#7f7f7f", true};
+        chart_series lo{"range envelope, min", {}, "#d62728", false};
+        chart_series hi{"range envelope, max", {}, "#2ca02c", false};
+        for (double x : xs) {
+            const double px = u_.pos_in(x);
+            pinned.points.emplace_back(px, u_.in(value(x, r.pinned), d));
+            fixed.points.emplace_back(px, u_.in(value(x, r.fixed), d));
+            double mn = 0, mx = 0;
+            for (std::size_t k = 0; k < r.corners.size(); ++k) {
+                const double v = value(x, r.corners[k]);
+                mn = k == 0 ? v : std::min(mn, v);
+                mx = k == 0 ? v : std::max(mx, v);
+            }
+            lo.points.emplace_back(px, u_.in(mn, d));
+            hi.points.emplace_back(px, u_.in(mx, d));
+        }
+        line_chart c;
+        c.x.label = "x from the start support (" + u_.pos_unit() + ")";
+        c.x.min = 0.0;
+        c.x.max = u_.pos_in(b.span);
+        c.series = {pinned, fixed, lo, hi};
+        c.width = 760;
+        c.height = 380;
+        return c;
+    };
+    line_chart m = curves(true, dims::moment);
+    m.title = "Beam " + b.id + ", " + r.comb.name + ": bending moment";
+    m.y.label = "M (" + u_.sym(dims::moment) + "), sagging +";
+    figure("moment", to_svg(m),
+           "Bending moment along the span, combination " + r.comb.name +
+               ": ideal pinned and fixed ends, and the pointwise envelope over the four corners of the stiffness range.");
+    line_chart w = curves(false, dims::length);
+    w.title = "Beam " + b.id + ", " + r.comb.name + ": deflection";
+    w.y.label = "w (" + u_.sym(dims::length) + "), downward +";
+    figure("deflection", to_svg(w),
+           "Deflection along the span, combination " + r.comb.name +
+               ": ideal pinned and fixed ends, and the pointwise envelope over the four corners of the stiffness range.");
+}
+
+void report_writer::sweep_chart(const beam& b)
+{
+    if (b.combinations.empty()) return;
+    sweep_settings settings;
+    settings.combination = b.combinations.front().name;
+    const sweep_result s = sweep_beam(p_, b, settings);
+    o_ << "<h3>Joint-stiffness sweep</h3>\n<p>Both joints together from a true pin to rigid, combination "
+       << esc(settings.combination)
+       << ": each result divided by its value with pins (end moments by their value with fixed ends) against "
+          "&kappa; = S L / EI, with the code boundaries and the given stiffness range.</p>\n";
+    figure("sweep", sweep_svg(p_, b, s),
+           "Stiffness sweep of beam " + b.id + ", combination " + settings.combination +
+               ": EN 1993-1-8 boundaries 0.5 and " + format_number(en_rigid_limit(p_.frame), 2) +
+               ", AISC 360 boundaries 2 and 20.");
+}
+
+void report_writer::beam_line_chart(const beam& b, const combination& c, beam_end e)
+{
+    const beam_line l = beam_line_of(b, c, e);
+    const std::string end = to_string(e);
+    if (l.fixed_moment == 0.0 || l.pinned_rotation == 0.0) {
+        o_ << "<p>Beam line, " << end << " end: the combination bends no moment into a rigid joint here, so there "
+           << "is no beam line to draw.</p>\n";
+        return;
+    }
+    const dimension md = dims::moment;
+    const double th_s = l.pinned_rotation * 1e3;  // mrad
+    const double mf = u_.in(l.fixed_moment, md);
+    line_chart ch;
+    ch.title = "Beam " + b.id + ", " + c.name + ": beam line at the " + end + " joint";
+    ch.x.label = "end rotation (mrad)";
+    ch.y.label = "end moment (" + u_.sym(md) + "), hogging +";
+    ch.width = 760;
+    ch.height = 400;
+    ch.series.push_back({"beam line", {{0.0, mf}, {th_s, 0.0}}, "#1f77b4", false});
+    auto joint_line = [&](const beam_line_point& pt, const std::string& name, const std::string& colour) {
+        chart_series s{name + " = " + u_.stiff(pt.joint), {}, colour, true};
+        if (pt.joint.is_rigid()) {
+            s.points = {{0.0, 0.0}, {0.0, 1.1 * mf}};
+        } else {
+            const double k = u_.in(pt.joint.value(), md) / 1e3;  // per mrad
+            double x1 = th_s;
+            if (std::abs(k * x1) > std::abs(1.1 * mf)) x1 = 1.1 * mf / k;
+            s.points = {{0.0, 0.0}, {x1, k * x1}};
+        }
+        ch.series.push_back(s);
+    };
+    joint_line(l.lower, "S min", "#2ca02c");
+    joint_line(l.upper, "S max", "#d62728");
+    // The intersections, each marked by a diamond in its joint line's colour.
+    for (const auto* pt : {&l.lower, &l.upper}) {
+        const double x = pt->rotation * 1e3, y = u_.in(pt->moment, md);
+        chart_series s{(pt == &l.lower ? std::string("S min") : std::string("S max")) + " on the beam line: " +
+                           format_number(x, 4) + " mrad, " + u_.q(pt->moment, md),
+                       {{x, y}},
+                       pt == &l.lower ? "#2ca02c" : "#d62728",
+                       false};
+        s.marks_only = true;
+        ch.series.push_back(s);
+    }
+    figure("beam-line", to_svg(ch),
+           "Beam line at the " + end + " joint, combination " + c.name + ": M = M_F (1 - theta/theta_s) with M_F = " +
+               u_.q(l.fixed_moment, md) + " (joint rigid) and theta_s = " + format_number(th_s, 4) +
+               " mrad (joint pinned), the far joint held at its lower bound " + u_.stiff(l.far_end) +
+               "; the joint lines M = S theta for the bounds of the stiffness range; the marked intersections are "
+               "the analysed corner states.");
+}
+
+void report_writer::gap_drawings(const beam& b, const beam_assessment& ba)
+{
+    for (beam_end e : {beam_end::start, beam_end::end}) {
+        const auto svg = gap_detail_svg(b, e, ba, u_.system);
+        if (!svg) continue;
+        o_ << "<h3>Gap detail, " << to_string(e) << " joint</h3>\n";
+        figure("gap-detail", *svg,
+               "Elevation at the " + to_string(e) + " joint of beam " + b.id +
+                   " at the worst-case gap, turned to the rotation demand (exaggerated as stated).");
+    }
+}
+
+void report_writer::checks(const beam_assessment& ba)
+{
+    o_ << "<h3>Checks</h3>\n<table class=\"checks\">\n<tr><th>Status</th><th>Check</th><th>Value / limit</th>"
+          "<th>Reason</th></tr>\n";
+    for (const auto& c : ba.checks) {
+        std::string vl;
+        if (c.value) {
+            const bool ratio = c.dim == dims::dimensionless;
+            vl = ratio ? format_number(*c.value, 3) : u_.q(*c.value, c.dim);
+            if (c.limit) vl += " / " + (ratio ? format_number(*c.limit, 3) : u_.q(*c.limit, c.dim));
+        }
+        o_ << "<tr class=\"" << status_class(c.status) << "\"><td class=\"status " << status_class(c.status) << "\">"
+           << status_label(c.status) << "</td><td>" << esc(c.id) << "</td><td class=\"num\">" << esc(vl) << "</td><td>"
+           << esc(c.message) << "</td></tr>\n";
+    }
+    o_ << "</table>\n<p class=\"note\">Statuses: pass; FAIL (the assumption does not hold); warn (to pass on or to "
+          "look at, does not change the verdict); n/a (not applicable, the reason is given).</p>\n";
+}
+
+void report_writer::verdict(const beam_assessment& ba)
+{
+    o_ << "<div class=\"verdict " << (ba.holds() ? "pass" : "fail") << "\">Verdict for beam " << esc(ba.id) << ": ";
+    if (ba.holds()) {
+        o_ << "the simple-support (pinned) assumption HOLDS; no check fails.";
+    } else {
+        std::string ids;
+        int n = 0;
+        for (const auto& c : ba.checks)
+            if (c.status == check_status::fail) {
+                ids += (ids.empty() ? "" : ", ") + c.id;
+                ++n;
+            }
+        o_ << "the simple-support (pinned) assumption DOES NOT HOLD. " << n << " check" << (n == 1 ? " fails" : "s fail")
+           << ": " << esc(ids) << ".";
+    }
+    o_ << "</div>\n";
+}
+
+void report_writer::beam_section(const beam_assessment& ba)
+{
+    const beam& b = *ba.input;
+    o_ << "<section class=\"beam\" id=\"beam-" << ++beams_ << "\">\n<h2>Beam " << esc(b.id) << "</h2>\n";
+    inputs(b);
+    joints(b, ba);
+    for (const auto& r : ba.combinations) combination_block(b, r);
+    sweep_chart(b);
+    // The beam lines for the first strength combination (else the first).
+    const combination* c = nullptr;
+    for (const auto& x : b.combinations)
+        if (!c && x.use == limit_state::strength) c = &x;
+    if (!c && !b.combinations.empty()) c = &b.combinations.front();
+    if (c) {
+        o_ << "<h3>Beam lines, combination " << esc(c->name) << "</h3>\n";
+        for (beam_end e : {beam_end::start, beam_end::end}) beam_line_chart(b, *c, e);
+    }
+    gap_drawings(b, ba);
+    checks(ba);
+    verdict(ba);
+    o_ << "</section>\n";
+}
+
+void report_writer::closing()
+{
+    o_ << "<section id=\"references\">\n<h2>References</h2>\n<ol>\n"
+          "<li>EN 1993-1-8:2005, Eurocode 3: Design of steel structures, Part 1-8: Design of joints, 5.2.2.5 "
+          "(classification by stiffness).</li>\n"
+          "<li>AISC 360-16, Specification for Structural Steel Buildings, Commentary B3.4 (connection "
+          "classification by stiffness; rotation of simple connections).</li>\n"
+          "<li>Monforton, G. R. and Wu, T. S. (1963), Matrix analysis of semi-rigidly connected frames, Journal of the "
+          "Structural Division, ASCE, 89(ST6), paper 3713 (fixity factor).</li>\n"
+          "<li>Young, W. C. and Budynas, R. G., Roark's Formulas for Stress and Strain, 7th ed., Table 8.1 (beams: "
+          "end moments, rotations and deflections).</li>\n"
+          "<li>Section tables: dimensions of the hot-rolled sections used (EN 10365:2017 for IPE and HE sections; "
+          "AISC Steel Construction Manual Table 1-1 for W shapes); properties are computed from the dimensions, with root fillets.</li>\n"
+          "</ol>\n</section>\n";
+    o_ << "<section id=\"cautions\">\n<h2>Cautions</h2>\n<div class=\"caution\">" << esc(caution_text)
+       << "</div>\n<ul>\n"
+          "<li>For review by a qualified engineer; local codes and licensed practice govern.</li>\n"
+          "<li>The results are only as good as the stiffness range given: the range should cover the uncertainty "
+          "of the joint's stiffness (for AISC 360, its secant stiffness at service loads).</li>\n"
+          "<li>The analysis is linear elastic; it does not include joint non-linearity beyond the given range, "
+          "shear deformation, lateral-torsional buckling or the design of the beam, the joints or the supports.</li>\n"
+          "</ul>\n</section>\n";
+    o_ << "<footer class=\"note\"><p>pinproof " << esc(info_.version) << ", " << esc(info_.date) << ", input "
+       << esc(info_.input_file) << " (SHA-256 <span class=\"hash\">" << esc(info_.input_sha256)
+       << "</span>).</p></footer>\n</body>\n</html>\n";
+}
+
+std::string report_writer::write()
+{
+    head();
+    title_block();
+    method();
+    for (const auto& ba : a_.beams) beam_section(ba);
+    closing();
+    return o_.str();
+}
+
+}  // namespace
+
+// The drawing of a joint's gap detail at the worst-case gap, turned to the
+// rotation demand of the gap check (the larger sense; the support's own
+// rotation included), or to the largest end rotation when the detail was not
+// assessed.
+std::optional<std::string> gap_detail_svg(const beam& b, beam_end e, const beam_assessment& ba, unit_system units)
+{
+    const joint& j = b.at(e);
+    if (!j.detail) return std::nullopt;
+    double demand = 0;
+    const auto& ja = ba.joint_at(e);
+    if (ja.detail) {
+        demand = ja.detail->demand_sagging >= ja.detail->demand_hogging ? ja.detail->demand_sagging
+                                                                        : -ja.detail->demand_hogging;
+    } else {
+        double beam_state::*rot = e == beam_end::start ? &beam_state::rotation_start : &beam_state::rotation_end;
+        for (const auto& r : ba.combinations) {
+            const auto& range = r.envelope.of(rot);
+            for (double v : {range.min, range.max})
+                if (std::abs(v) > std::abs(demand)) demand = v;
+        }
+    }
+    detail_drawing_options o;
+    o.title = "Beam " + b.id + ", " + to_string(e) + " joint";
+    o.mirror = e == beam_end::start;
+    o.units = units;
+    return detail_svg(build_geometry(*j.detail, b.sec), *j.detail, demand, o);
+}
+
+
+std::string calculation_report_html(const project& p, const project_assessment& a, const report_info& info)
+{
+    if (a.input != &p) throw internal_error("calculation report: the assessment is not of this project");
+    return report_writer(p, a, info).write();
+}
+
+}  // namespace pinproof

@@ -1,0 +1,172 @@
+#include "pinproof/report/result_json.hpp"
+
+#include <nlohmann/json.hpp>
+
+#include <cmath>
+
+#include "pinproof/core/errors.hpp"
+#include "pinproof/model/result_fields.hpp"
+#include "pinproof/checks/sweep.hpp"
+#include "pinproof/report/sweep_output.hpp"
+
+namespace pinproof {
+namespace {
+
+using json = nlohmann::json;
+
+// A value that is not finite must never reach an output.
+json number(double v)
+{
+    if (!std::isfinite(v)) throw internal_error("a result value is not finite");
+    return v;
+}
+
+json stiffness_json(stiffness s) { return s.is_rigid() ? json(nullptr) : number(s.value()); }
+
+json optional_number(const std::optional<double>& v) { return v ? number(*v) : json(nullptr); }
+
+json closure_json(const std::optional<double>& r) { return r ? number(*r) : json(nullptr); }
+
+json point_json(const point2& p) { return {{"x", number(p.x)}, {"y", number(p.y)}}; }
+
+json detail_json(const detail_assessment& d, const joint& j)
+{
+    json out;
+    out["type"] = to_string(j.detail->type);
+    out["support"] = to_string(j.detail->support);
+    out["gap"] = number(d.gap.gap);
+    out["gap_tolerance"] = number(d.gap.gap_tolerance);
+    out["worst_case_gap"] = number(d.gap.worst_case_gap);
+    out["closure_rotation_sagging"] = closure_json(d.gap.sagging.closing.rotation);
+    out["closure_rotation_hogging"] = closure_json(d.gap.hogging.closing.rotation);
+    out["rotation_demand"] = number(d.gap.governing == rotation_sense::sagging ? d.demand_sagging : d.demand_hogging);
+    out["rotation_demand_sagging"] = number(d.demand_sagging);
+    out["rotation_demand_hogging"] = number(d.demand_hogging);
+    out["support_rotation"] = number(j.support_rotation);
+    out["governing_sense"] = to_string(d.gap.governing);
+    out["critical_point"] = d.gap.critical_point();
+    const auto& sc = d.gap.of(d.gap.governing);
+    out["margin"] = sc.margin ? number(*sc.margin) : json(nullptr);
+    out["margin_is_lower_bound"] = sc.margin_is_lower_bound;
+    out["clearance_at_demand"] = number(sc.clearance_at_demand);
+    out["min_gap_required"] = d.gap.min_gap_required ? number(*d.gap.min_gap_required) : json(nullptr);
+    if (!d.gap.min_gap_note.empty()) out["min_gap_note"] = d.gap.min_gap_note;
+    out["centre_of_rotation"] = {{"sagging", point_json(d.gap.sagging.closing.contact ? d.gap.sagging.closing.contact->centre : point2{})},
+                                 {"hogging", point_json(d.gap.hogging.closing.contact ? d.gap.hogging.closing.contact->centre : point2{})}};
+    out["closes_under_strength"] = d.closes_under_strength;
+    out["closes_under_service"] = d.closes_under_service;
+    out["clears_rule_of_thumb_rotation"] = d.clears_rule_of_thumb;
+    if (d.consequence) {
+        const auto& c = *d.consequence;
+        out["closure_analysis"] = {{"combination", c.combination},
+                                   {"closure_rotation", number(c.closure_rotation)},
+                                   {"contact_force", number(c.contact_force)},
+                                   {"lever_arm", number(c.lever_arm)},
+                                   {"state", to_json(c.result.state)}};
+    } else {
+        out["closure_analysis"] = nullptr;
+    }
+    return out;
+}
+
+json joint_json(const joint_assessment& j, const beam& b)
+{
+    json out;
+    out["stiffness"] = {{"min", stiffness_json(j.range.min)}, {"max", stiffness_json(j.range.max)}};
+    out["ratio"] = {{"lower", optional_number(j.ratio_lower)}, {"upper", optional_number(j.ratio_upper)}};
+    out["fixity_factor"] = {{"lower", number(j.fixity_lower)}, {"upper", number(j.fixity_upper)}};
+    out["class"] = {
+        {"EN1993-1-8", {{"lower", to_string(j.en_lower)}, {"upper", to_string(j.en_upper)}}},
+        {"AISC360", {{"lower", to_string(j.aisc_lower)}, {"upper", to_string(j.aisc_upper)}}},
+    };
+    const auto& mr = b.at(j.end).moment_resistance;
+    out["moment_resistance"] = optional_number(mr);
+    out["detail"] = j.detail ? detail_json(*j.detail, b.at(j.end)) : json(nullptr);
+    return out;
+}
+
+std::string unit_of(dimension d)
+{
+    if (d == dims::moment) return "N*m";
+    if (d == dims::angle) return "rad";
+    if (d == dims::length) return "m";
+    if (d == dims::force) return "N";
+    if (d == dims::rotational_stiffness) return "N*m/rad";
+    return "1";
+}
+
+}  // namespace
+
+json to_json(const beam_state& s)
+{
+    json out;
+    out["stiffness_start"] = stiffness_json(s.stiffness_start);
+    out["stiffness_end"] = stiffness_json(s.stiffness_end);
+    for (const auto& f : result_fields()) out[f.key] = number(s.*(f.member));
+    return out;
+}
+
+json to_json(const beam_assessment& a)
+{
+    const beam& b = *a.input;
+    json out;
+    out["id"] = a.id;
+    out["verdict"] = a.holds() ? "holds" : "does-not-hold";
+    out["span"] = number(b.span);
+    out["E"] = number(b.E);
+    out["section"] = {{"name", b.sec.name}, {"I", number(b.sec.I)}, {"depth", number(b.sec.depth)}};
+    json checks = json::array();
+    for (const auto& c : a.checks) {
+        checks.push_back({{"id", c.id},
+                          {"status", to_string(c.status)},
+                          {"value", optional_number(c.value)},
+                          {"limit", optional_number(c.limit)},
+                          {"unit", unit_of(c.dim)},
+                          {"message", c.message}});
+    }
+    out["checks"] = checks;
+    out["joints"] = {{"start", joint_json(a.start, b)}, {"end", joint_json(a.end, b)}};
+    json combos = json::array();
+    for (const auto& r : a.combinations) {
+        json c;
+        c["name"] = r.comb.name;
+        c["use"] = to_string(r.comb.use);
+        c["factors"] = r.comb.factors;
+        c["pinned"] = to_json(r.pinned);
+        c["fixed"] = to_json(r.fixed);
+        json corners = json::array();
+        for (const auto& s : r.corners) corners.push_back(to_json(s));
+        json env;
+        const auto& f = result_fields();
+        for (std::size_t i = 0; i < f.size(); ++i)
+            env[f[i].key] = {{"min", number(r.envelope.ranges[i].min)}, {"max", number(r.envelope.ranges[i].max)}};
+        c["range"] = {{"corners", corners}, {"envelope", env}, {"interior_points", r.interior_points}};
+        combos.push_back(c);
+    }
+    out["combinations"] = combos;
+    out["notes"] = a.notes;
+    return out;
+}
+
+json to_json(const project_assessment& a)
+{
+    json out;
+    out["format"] = result_format;
+    out["title"] = a.input->title;
+    out["standard"] = to_string(a.input->standard);
+    out["frame"] = to_string(a.input->frame);
+    out["verdict"] = a.all_hold() ? "holds" : "does-not-hold";
+    json beams = json::array();
+    for (const auto& b : a.beams) {
+        beams.push_back(to_json(b));
+        const beam& in = *b.input;
+        beams.back()["sensitivity"] =
+            sensitivity_json(*a.input, in, {in.start.distribution, in.end.distribution, in.stiffness_correlation});
+    }
+    out["beams"] = beams;
+    out["caution"] = "Results support, and do not replace, the judgement of a qualified engineer; local codes and "
+                     "licensed practice govern.";
+    return out;
+}
+
+}  // namespace pinproof

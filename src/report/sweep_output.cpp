@@ -1,0 +1,166 @@
+#include "pinproof/report/sweep_output.hpp"
+
+#include <nlohmann/json.hpp>
+
+#include <cmath>
+#include <sstream>
+
+#include "pinproof/core/errors.hpp"
+#include "pinproof/model/result_fields.hpp"
+#include "pinproof/report/svg_chart.hpp"
+
+namespace pinproof {
+
+namespace {
+
+std::string si_unit(dimension d)
+{
+    if (d == dims::force) return "N";
+    if (d == dims::moment) return "N*m";
+    if (d == dims::length) return "m";
+    if (d == dims::angle) return "rad";
+    if (d == dims::rotational_stiffness) return "N*m/rad";
+    if (d == dims::dimensionless) return "1";
+    return describe(d);
+}
+
+}  // namespace
+
+std::string sweep_csv(const sweep_result& s)
+{
+    std::ostringstream o;
+    o.precision(10);
+    o << "stiffness_start [N*m/rad],ratio_start [1],fixity_start [1],stiffness_end [N*m/rad],ratio_end [1],"
+         "fixity_end [1]";
+    for (const auto& f : result_fields()) o << "," << f.key << " [" << si_unit(f.dim) << "]";
+    if (!s.rows.empty())
+        for (const auto& c : s.rows.front().checks) o << "," << c.id;
+    o << "\n";
+    const auto stiff = [&](stiffness k) {
+        std::ostringstream t;
+        t.precision(10);
+        if (k.is_rigid()) t << "rigid,";
+        else t << k.value() << "," << k.ratio(s.EI, s.span);
+        return t.str();
+    };
+    for (const auto& r : s.rows) {
+        o << stiff(r.at.start) << "," << r.fixity_start << "," << stiff(r.at.end) << "," << r.fixity_end;
+        for (const auto& f : result_fields()) {
+            const double v = r.state.*(f.member);
+            if (!std::isfinite(v)) throw internal_error("a sweep value is not finite");
+            o << "," << v;
+        }
+        for (const auto& c : r.checks) o << "," << to_string(c.status);
+        o << "\n";
+    }
+    return o.str();
+}
+
+std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
+{
+    if (s.settings.grid) throw internal_error("the sweep chart is drawn for a path, not a grid");
+    line_chart ch;
+    const std::string moving = s.settings.path.moving == moving_end::both ? "both ends equal"
+                                                                          : to_string(s.settings.path.moving) + " joint moving";
+    ch.title = "Beam " + s.beam_id + ": results against joint stiffness (" + moving + ", combination " +
+               s.combination + ")";
+    ch.x = {"joint stiffness S*L/EI (-), log scale; EI/L = " +
+                format_quantity(s.EI / s.span, dims::rotational_stiffness, p.units),
+            true, 0.01, 1000.0};
+    ch.y = {"result / its pinned or fixed-end value (-)", false, std::nullopt, std::nullopt};
+    struct normalised {
+        double beam_state::*member;
+        bool by_fixed;
+        const char* label;
+        bool dashed;
+    };
+    const normalised list[] = {
+        {&beam_state::moment_start, true, "end moment, start / fixed", false},
+        {&beam_state::moment_end, true, "end moment, end / fixed", true},
+        {&beam_state::max_sagging_moment, false, "max sagging moment / pinned", false},
+        {&beam_state::max_deflection, false, "max deflection / pinned", false},
+        {&beam_state::rotation_start, false, "end rotation, start / pinned", false},
+        {&beam_state::rotation_end, false, "end rotation, end / pinned", true},
+        {&beam_state::reaction_start, false, "reaction, start / pinned", false},
+        {&beam_state::reaction_end, false, "reaction, end / pinned", true},
+    };
+    double y_top = 1.0;
+    for (const auto& n : list) {
+        const double ref = (n.by_fixed ? s.fixed : s.pinned).*(n.member);
+        if (!(std::abs(ref) > 0)) continue;
+        chart_series cs;
+        cs.label = n.label;
+        cs.dashed = n.dashed;
+        for (const auto& r : s.rows) {
+            const stiffness k = s.settings.path.moving == moving_end::end ? r.at.end : r.at.start;
+            if (k.is_rigid() || k.is_pinned()) continue;  // not on a log axis
+            cs.points.emplace_back(k.ratio(s.EI, s.span), r.state.*(n.member) / ref);
+            y_top = std::max(y_top, cs.points.back().second);
+        }
+        ch.series.push_back(cs);
+    }
+    // Room above the curves that reach their reference value 1.
+    ch.y.min = 0.0;
+    ch.y.max = std::ceil(y_top * 1.08 * 10) / 10;
+    const std::string en = "#6a3d9a", aisc = "#b15928";
+    ch.markers.push_back({en_pinned_limit, "EN pinned 0.5", en, true});
+    ch.markers.push_back({en_rigid_limit(frame_bracing::braced), "EN rigid 8 (braced)", en, true});
+    ch.markers.push_back({en_rigid_limit(frame_bracing::unbraced), "EN rigid 25 (unbraced)", en, true});
+    ch.markers.push_back({aisc_simple_limit, "AISC simple 2", aisc, true});
+    ch.markers.push_back({aisc_fully_restrained_limit, "AISC FR 20", aisc, true});
+    for (const auto& t : s.thresholds)
+        ch.markers.push_back({t.ratio, t.check + " " + format_number(t.ratio, 3), "#c0392b", false});
+    const auto band = [&](const joint& j, const std::string& label, const std::string& colour) {
+        const double lo = j.range.min.is_rigid() ? 1000.0 : std::max(0.01, j.range.min.ratio(s.EI, s.span));
+        const double hi = j.range.max.is_rigid() ? 1000.0 : std::max(0.01, j.range.max.ratio(s.EI, s.span));
+        ch.bands.push_back({lo, hi, label, colour, 0.15});
+    };
+    const bool same = b.start.range.min == b.end.range.min && b.start.range.max == b.end.range.max;
+    if (same) band(b.start, "stiffness range (both joints)", "#4a90d9");
+    else {
+        band(b.start, "stiffness range, start joint", "#4a90d9");
+        band(b.end, "stiffness range, end joint", "#50b060");
+    }
+    return to_svg(ch);
+}
+
+nlohmann::json thresholds_json(const std::vector<threshold>& ts, const std::string& path)
+{
+    nlohmann::json out = nlohmann::json::array();
+    for (const auto& t : ts) {
+        if (t.at.is_rigid() || !std::isfinite(t.ratio)) throw internal_error("a threshold is not a finite stiffness");
+        out.push_back({{"check", t.check},
+                       {"stiffness", t.at.value()},
+                       {"ratio", t.ratio},
+                       {"fixity_factor", t.fixity},
+                       {"below", to_string(t.below)},
+                       {"above", to_string(t.above)},
+                       {"path", path}});
+    }
+    return out;
+}
+
+nlohmann::json probabilities_json(const std::vector<failure_probability>& fs)
+{
+    nlohmann::json out = nlohmann::json::array();
+    for (const auto& f : fs) {
+        if (!std::isfinite(f.p_fail) || !std::isfinite(f.error)) throw internal_error("a probability is not finite");
+        out.push_back({{"check", f.check}, {"p_fail", f.p_fail}, {"error", f.error}, {"method", f.method}});
+    }
+    return out;
+}
+
+nlohmann::json sensitivity_json(const project& p, const beam& b, const stiffness_uncertainty& u)
+{
+    nlohmann::json out;
+    out["thresholds"] = thresholds_json(find_thresholds(p, b, {moving_end::both, stiffness::pinned()}), "both");
+    out["probability"] = probabilities_json(failure_probabilities(p, b, u));
+    out["stiffness_correlation"] = u.correlation;
+    const auto d = [](const std::optional<stiffness_distribution>& x) {
+        return x ? nlohmann::json(x->describe()) : nlohmann::json(nullptr);
+    };
+    out["distributions"] = {{"start", d(u.start)}, {"end", d(u.end)}};
+    return out;
+}
+
+}  // namespace pinproof

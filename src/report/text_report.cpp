@@ -1,0 +1,266 @@
+#include "pinproof/report/text_report.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <sstream>
+
+#include "pinproof/model/result_fields.hpp"
+#include "pinproof/checks/failure_probability.hpp"
+#include "pinproof/checks/threshold.hpp"
+
+namespace pinproof {
+namespace {
+
+std::string pad(const std::string& s, std::size_t w)
+{
+    // Width in characters, counting UTF-8 continuation bytes as none.
+    std::size_t n = 0;
+    for (unsigned char c : s) n += (c & 0xC0) != 0x80;
+    // A cell wider than its column still keeps one space before the next.
+    return n >= w ? s + " " : s + std::string(w - n, ' ');
+}
+
+std::string rpad(const std::string& s, std::size_t w)
+{
+    std::size_t n = 0;
+    for (unsigned char c : s) n += (c & 0xC0) != 0x80;
+    return n >= w ? " " + s : std::string(w - n, ' ') + s;
+}
+
+// Wraps text to `width` columns, every line after the first indented.
+std::string wrap(const std::string& text, std::size_t width, const std::string& indent)
+{
+    std::istringstream words(text);
+    std::string word, line, out;
+    while (words >> word) {
+        if (!line.empty() && line.size() + 1 + word.size() > width) {
+            out += line + "\n" + indent;
+            line.clear();
+        }
+        line += (line.empty() ? "" : " ") + word;
+    }
+    return out + line;
+}
+
+struct units_view {
+    unit_system system;
+    std::string unit(dimension d) const { return display_unit_for(d, system).symbol; }
+    std::string num(double si, dimension d, int sig = 4) const
+    {
+        const double v = si / display_unit_for(d, system).si_per_unit;
+        return format_number(std::abs(v) < 1e-12 ? 0.0 : v, sig);
+    }
+    // Positions along the beam are shown in m (ft), not in the length unit of
+    // deflections.
+    std::string pos_unit() const { return system == unit_system::us_customary ? "ft" : "m"; }
+    std::string pos(double m) const
+    {
+        return format_number(std::abs(m) < 1e-12 ? 0.0 : (system == unit_system::us_customary ? m / 0.3048 : m), 4);
+    }
+    std::string cell(double si, const result_field& f) const
+    {
+        return is_position(f) ? pos(si) : num(si, f.dim);
+    }
+    static bool is_position(const result_field& f)
+    {
+        return f.member == &beam_state::max_sagging_at || f.member == &beam_state::max_deflection_at;
+    }
+    std::string span(double m) const
+    {
+        if (system == unit_system::us_customary) return format_number(m / 0.3048, 4) + " ft";
+        return format_number(m, 4) + " m";
+    }
+    std::string stiff(stiffness s) const
+    {
+        return s.is_rigid() ? std::string("rigid") : num(s.value(), dims::rotational_stiffness);
+    }
+};
+
+std::string ratio_text(const std::optional<double>& r) { return r ? format_number(*r, 3) : std::string("rigid"); }
+
+void beam_block(std::ostringstream& o, const project& p, const beam_assessment& a)
+{
+    const beam& b = *a.input;
+    const units_view u{p.units};
+    o << std::string(100, '=') << "\n";
+    o << "Beam " << b.id << (b.description.empty() ? "" : "  " + b.description) << "\n";
+    o << "  " << b.sec.name << ", span " << u.span(b.span) << ", E = " << u.num(b.E, dims::pressure) << " "
+      << u.unit(dims::pressure) << ", I = " << u.num(b.sec.I, dims::second_moment) << " "
+      << u.unit(dims::second_moment) << ", depth " << u.num(b.sec.depth, dims::length) << " "
+      << u.unit(dims::length) << "\n";
+    o << "  EI/L = " << u.num(b.EI() / b.span, dims::rotational_stiffness) << " " << u.unit(dims::rotational_stiffness)
+      << "; the boundaries S*L/EI = 0.5, " << format_number(en_rigid_limit(p.frame), 2)
+      << " (EN 1993-1-8) and 2, 20 (AISC 360) are "
+      << u.num(0.5 * b.EI() / b.span, dims::rotational_stiffness, 4) << ", "
+      << u.num(en_rigid_limit(p.frame) * b.EI() / b.span, dims::rotational_stiffness, 4) << ", "
+      << u.num(2 * b.EI() / b.span, dims::rotational_stiffness, 4) << ", "
+      << u.num(20 * b.EI() / b.span, dims::rotational_stiffness, 4) << " " << u.unit(dims::rotational_stiffness) << "\n";
+    for (const auto& n : a.notes) o << "  Note: " << wrap(n, 92, "        ") << "\n";
+
+    o << "\n  Joints (stiffness in " << u.unit(dims::rotational_stiffness) << ")\n";
+    o << "    " << pad("end", 7) << pad("S min .. S max", 22) << pad("S*L/EI", 18) << pad("fixity r", 18) << "class (lower .. upper bound)\n";
+    for (const auto* j : {&a.start, &a.end}) {
+        o << "    " << pad(to_string(j->end), 7) << pad(u.stiff(j->range.min) + " .. " + u.stiff(j->range.max), 22)
+          << pad(ratio_text(j->ratio_lower) + " .. " + ratio_text(j->ratio_upper), 18)
+          << pad(format_number(j->fixity_lower, 3) + " .. " + format_number(j->fixity_upper, 3), 18)
+          << "EN 1993-1-8 (" << to_string(p.frame) << "): " << to_string(j->en_lower) << " .. " << to_string(j->en_upper)
+          << "\n" << std::string(4 + 7 + 22 + 18 + 18, ' ') << "AISC 360: " << to_string(j->aisc_lower) << " .. "
+          << to_string(j->aisc_upper) << "\n";
+        const auto& mr = b.at(j->end).moment_resistance;
+        if (mr) o << "    " << pad("", 7) << "moment resistance " << u.num(*mr, dims::moment) << " " << u.unit(dims::moment) << "\n";
+    }
+
+    for (const auto* j : {&a.start, &a.end}) {
+        if (!j->detail) continue;
+        const auto& d = *j->detail;
+        const joint& jt = b.at(j->end);
+        o << "\n  End gap at the " << to_string(j->end) << ": " << to_string(jt.detail->type) << " to "
+          << to_string(jt.detail->support) << ", gap " << u.num(d.gap.gap, dims::length) << " " << u.unit(dims::length)
+          << " as detailed less " << u.num(d.gap.gap_tolerance, dims::length) << " " << u.unit(dims::length) << " tolerance = "
+          << u.num(d.gap.worst_case_gap, dims::length) << " " << u.unit(dims::length) << " worst case\n";
+        o << "    " << pad("sense", 10) << pad("demand (" + u.unit(dims::angle) + ")", 16)
+          << pad("closure (" + u.unit(dims::angle) + ")", 17) << pad("margin", 9)
+          << pad("clearance (" + u.unit(dims::length) + ")", 17) << "critical point\n";
+        for (const auto* sc : {&d.gap.sagging, &d.gap.hogging}) {
+            const double demand = sc->sense == rotation_sense::sagging ? d.demand_sagging : d.demand_hogging;
+            o << "    " << pad(to_string(sc->sense), 10) << pad(u.num(demand, dims::angle), 16)
+              << pad(sc->closing.rotation ? u.num(*sc->closing.rotation, dims::angle) : std::string("none < 90 deg"), 17)
+              << pad(sc->margin ? (sc->margin_is_lower_bound ? ">" : "") + format_number(*sc->margin, 3) : std::string("-"), 9)
+              << pad(demand > 0 ? u.num(sc->clearance_at_demand, dims::length) : std::string("-"), 17)
+              << (sc->closing.contact ? sc->closing.contact->description() : std::string("-")) << "\n";
+        }
+        if (jt.support_rotation > 0)
+            o << "    demand includes the support's own rotation " << u.num(jt.support_rotation, dims::angle) << " "
+              << u.unit(dims::angle) << "\n";
+        if (d.gap.min_gap_required)
+            o << "    smallest as-detailed gap that passes: " << u.num(*d.gap.min_gap_required, dims::length) << " "
+              << u.unit(dims::length) << "\n";
+        else if (!d.gap.min_gap_note.empty())
+            o << "    smallest gap that passes: " << wrap(d.gap.min_gap_note, 80, "      ") << "\n";
+        o << "    the 30 mrad rule of thumb for simple connections (comparison only): "
+          << (d.clears_rule_of_thumb ? "cleared" : "NOT cleared") << "\n";
+        if (d.consequence) {
+            const auto& c = *d.consequence;
+            const double M = j->end == beam_end::start ? c.result.state.moment_start : c.result.state.moment_end;
+            o << "    after closure (" << c.combination << ", lower-bound stiffness): joint moment "
+              << u.num(M, dims::moment) << " " << u.unit(dims::moment) << ", flange contact force "
+              << u.num(c.contact_force, dims::force) << " " << u.unit(dims::force) << ", max sagging moment "
+              << u.num(c.result.state.max_sagging_moment, dims::moment) << " " << u.unit(dims::moment) << "\n";
+        }
+    }
+
+    for (const auto& r : a.combinations) {
+        o << "\n  Combination " << r.comb.name << " (" << to_string(r.comb.use) << "): " << combination_text(r.comb)
+          << "\n";
+        o << "    " << pad("result", 32) << pad("unit", 10) << rpad("pinned", 11) << rpad("range min", 12)
+          << rpad("range max", 12) << rpad("fixed", 11) << "\n";
+        const auto& f = result_fields();
+        for (std::size_t i = 0; i < f.size(); ++i) {
+            o << "    " << pad(f[i].label, 32) << pad(units_view::is_position(f[i]) ? u.pos_unit() : u.unit(f[i].dim), 10)
+              << rpad(u.cell(r.pinned.*(f[i].member), f[i]), 11)
+              << rpad(u.cell(r.envelope.ranges[i].min, f[i]), 12)
+              << rpad(u.cell(r.envelope.ranges[i].max, f[i]), 12)
+              << rpad(u.cell(r.fixed.*(f[i].member), f[i]), 11) << "\n";
+        }
+    }
+
+    o << "\n  Checks\n";
+    int hidden = 0;
+    for (const auto& c : a.checks) {
+        // Detailing rules that do not apply to this kind of detail are in the JSON result only.
+        if (c.status == check_status::not_applicable && c.id.rfind("detailing-", 0) == 0) {
+            ++hidden;
+            continue;
+        }
+        std::string vl;
+        if (c.value) {
+            const bool ratio = c.dim == dims::dimensionless;
+            vl = ratio ? format_number(*c.value, 3) : u.num(*c.value, c.dim) + " " + u.unit(c.dim);
+            if (c.limit) vl += " / " + (ratio ? format_number(*c.limit, 3) : u.num(*c.limit, c.dim) + " " + u.unit(c.dim));
+        }
+        o << "    " << pad(status_label(c.status), 6) << pad(c.id + "  ", 38) << vl << "\n";
+        o << "          " << wrap(c.message, 88, "          ") << "\n";
+    }
+    if (hidden > 0)
+        o << "    (" << hidden << " detailing rule" << (hidden == 1 ? " does" : "s do")
+          << " not apply to these details and " << (hidden == 1 ? "is" : "are") << " not listed)\n";
+    const auto thresholds = threshold_report_lines(p, b);
+    if (!thresholds.empty()) {
+        o << "\n  Thresholds (the stiffness, both joints together, at which a check changes its answer)\n";
+        for (const auto& line : thresholds)
+            if (line.rfind("Stiffness thresholds", 0) != 0) o << "    " << wrap(line, 94, "      ") << "\n";
+    }
+    if (b.start.distribution || b.end.distribution) {
+        const stiffness_uncertainty unc{b.start.distribution, b.end.distribution, b.stiffness_correlation};
+        const auto probabilities = failure_probabilities(p, b, unc);
+        o << "\n  Probability that a check does not pass, over the stiffness distribution"
+          << (b.start.distribution && b.end.distribution
+                  ? (b.stiffness_correlation == 1 ? "s (ends fully correlated)" : "s (ends independent)")
+                  : " of the " + std::string(b.start.distribution ? "start" : "end") + " joint")
+          << "\n";
+        for (const auto& f : probabilities) {
+            if (f.p_fail <= 0.0) continue;
+            o << "    " << pad(f.check + "  ", 38) << "P = " << format_number(f.p_fail, 3) << " (error "
+              << format_number(f.error, 1) << ")\n" << "      " << wrap(f.method, 92, "      ") << "\n";
+        }
+        if (std::none_of(probabilities.begin(), probabilities.end(),
+                         [](const failure_probability& f) { return f.p_fail > 0.0; }))
+            o << "    no check fails anywhere in the distribution\n";
+    }
+    const auto failed = std::count_if(a.checks.begin(), a.checks.end(),
+                                      [](const check& c) { return c.status == check_status::fail; });
+    o << "\n  Verdict for beam " << b.id << ": ";
+    if (a.holds()) {
+        o << "the simple-support (pinned) assumption HOLDS; no check fails.\n";
+    } else {
+        std::string ids;
+        for (const auto& c : a.checks)
+            if (c.status == check_status::fail) ids += (ids.empty() ? "" : ", ") + c.id;
+        o << "the simple-support (pinned) assumption DOES NOT HOLD.\n    " << failed << " check"
+          << (failed == 1 ? " fails" : "s fail") << ": " << wrap(ids, 90, "    ") << "\n";
+    }
+}
+
+}  // namespace
+
+std::string combination_text(const combination& c)
+{
+    std::string s;
+    for (const auto& [name, f] : c.factors) {
+        if (!s.empty()) s += f < 0 ? " - " : " + ";
+        else if (f < 0) s += "-";
+        s += format_number(std::abs(f), 3) + " " + name;
+    }
+    return s;
+}
+
+std::string text_report(const project_assessment& a, const std::string& version)
+{
+    const project& p = *a.input;
+    std::ostringstream o;
+    o << "pinproof " << version << ": check of the simple-support assumption for beams on semi-rigid joints\n";
+    o << "Project:  " << p.title << "\n";
+    o << "Standard: " << (p.standard == design_standard::en1993_1_8 ? "EN 1993-1-8" : "AISC 360") << ", "
+      << to_string(p.frame) << " frame; units " << (p.units == unit_system::us_customary ? "US customary" : "SI")
+      << "\n";
+    for (const auto& b : a.beams) beam_block(o, p, b);
+    o << std::string(100, '=') << "\n";
+    const auto holding = std::count_if(a.beams.begin(), a.beams.end(), [](const beam_assessment& b) { return b.holds(); });
+    o << "Summary: " << a.beams.size() << " beam" << (a.beams.size() == 1 ? "" : "s") << " checked, " << holding
+      << " hold, " << a.beams.size() - holding << " do not hold.\n\n";
+    o << "Legend\n"
+         "  pinned, fixed    ideal end conditions at both ends. Fixed ends are not an upper bound of an end\n"
+         "                   moment in general: the largest end moment comes with that joint rigid and the far\n"
+         "                   joint pinned (docs/method/beam-model.md)\n"
+         "  range min, max   envelope over the four corners of the joint-stiffness range box; the maximum sagging\n"
+         "                   moment and the deflection are also searched inside the box\n"
+         "  S*L/EI           joint stiffness relative to the beam; fixity r = 1/(1 + 3EI/(S*L)) (0 pin, 1 fixed)\n"
+         "  signs            reactions up +, end moments hogging +, deflection down +, end rotations + in the\n"
+         "                   sense a simply supported beam rotates under gravity load\n"
+         "  statuses         pass, FAIL, warn (to pass on or to look at; does not change the verdict),\n"
+         "                   n/a (not applicable: the reason is given)\n\n";
+    o << "Caution: " << wrap(caution_text, 90, "         ") << "\n";
+    return o.str();
+}
+
+}  // namespace pinproof

@@ -1,0 +1,180 @@
+// Verification of the stiffness thresholds against closed forms.
+//
+// Sources (reference pack items in brackets; [M] = from memory, [D] = derived):
+//   [MW63]  Monforton & Wu, J. Struct. Div. ASCE 89(ST6), 1963 [C], pack section 5:
+//           fixity factor r = kappa/(kappa + 3) [M formula]; equal springs under a
+//           symmetric load: M = MF kappa/(kappa + 2) [D], so M = f MF at
+//           S = 2 f EI / ((1 - f) L); theta = theta_s 2/(kappa + 2) [D];
+//           UDL mid-span deflection wL^4/(384EI) [5 - 4 kappa/(kappa + 2)] [D];
+//           unequal springs, UDL: M_A = (wL^2/4) rA (2 - rB)/(4 - rA rB) [D].
+//   [EC3]   EN 1993-1-8:2005 5.2.2.5(1): nominally pinned for S L/EI <= 0.5 [C*].
+//   [AISC]  AISC 360-16 Commentary B3.4: simple for S L/EI <= 2 [C*].
+// The thresholds are found to 1e-10 relative in S; the checks here use 1e-9.
+#include <doctest/doctest.h>
+
+#include <cmath>
+#include <string>
+
+#include "pinproof/model/project.hpp"
+#include "pinproof/checks/threshold.hpp"
+#include "pinproof/io/project_input.hpp"
+
+using namespace pinproof;
+
+namespace {
+
+// IPE 300 (catalogue dimensions), L = 6 m, full UDL w (kN/m), both joints with
+// the given stiffness text and moment resistance (kN*m).
+project udl_project(double w_kn, double mrd_kn, const std::string& standard = "EN1993-1-8",
+                    const std::string& deflection = "span/360")
+{
+    const std::string joint = "{ \"stiffness\": { \"min\": \"0.1 EI/L\", \"max\": \"0.4 EI/L\" }, "
+                              "\"moment_resistance\": \"" + std::to_string(mrd_kn) + " kN*m\" }";
+    return parse_project(R"({ "format": "pinproof-project/1", "title": "threshold test", "standard": ")" + standard +
+                         R"(", "frame": "braced", "beams": [ { "id": "B1", "span": "6 m", "E": "210 GPa",
+      "section": "IPE 300", "loads": [ { "case": "G", "kind": "udl", "w": ")" + std::to_string(w_kn) + R"( kN/m" } ],
+      "combinations": [ { "name": "ULS", "use": "strength", "factors": { "G": 1.0 } },
+                        { "name": "SLS", "use": "service", "factors": { "G": 1.0 } } ],
+      "joints": { "start": )" + joint + ", \"end\": " + joint + R"( },
+      "limits": { "deflection": ")" + deflection + R"(" } } ] })");
+}
+
+const threshold* find(const std::vector<threshold>& ts, const std::string& id)
+{
+    for (const auto& t : ts)
+        if (t.check == id) return &t;
+    return nullptr;
+}
+
+bool close(double a, double b, double rel) { return std::abs(a - b) <= rel * std::max(std::abs(a), std::abs(b)); }
+
+}  // namespace
+
+TEST_CASE("joint moment threshold - equal springs - full UDL [MW63 - D]: M = f MF at S = 2 f EI/((1-f) L) - tol 1e-9")
+{
+    const double w = 20e3, L = 6.0;
+    const double MF = w * L * L / 12;
+    for (double f : {0.2, 0.5, 0.8, 0.95}) {
+        CAPTURE(f);
+        const project p = udl_project(w / 1e3, f * MF / 1e3);
+        const beam& b = p.beams.front();
+        const auto ts = find_thresholds(p, b, {moving_end::both, stiffness::pinned()});
+        for (const char* id : {"joint-moment-start", "joint-moment-end"}) {
+            CAPTURE(id);
+            const threshold* t = find(ts, id);
+            REQUIRE(t != nullptr);
+            CHECK(close(t->at.value(), 2 * f * b.EI() / ((1 - f) * L), 1e-9));
+            CHECK(close(t->ratio, 2 * f / (1 - f), 1e-9));
+            CHECK(t->below == check_status::pass);
+            CHECK(t->above == check_status::fail);
+        }
+    }
+}
+
+TEST_CASE("stiffness class threshold [EC3 5.2.2.5(1) - AISC B3.4]: S = 0.5 EI/L and 2 EI/L - tol 1e-9")
+{
+    for (const auto& [standard, limit] : {std::pair<std::string, double>{"EN1993-1-8", 0.5}, {"AISC360", 2.0}}) {
+        CAPTURE(standard);
+        const project p = udl_project(20, 1000, standard);
+        const beam& b = p.beams.front();
+        const auto ts = find_thresholds(p, b, {moving_end::both, stiffness::pinned()});
+        const threshold* t = find(ts, "stiffness-class-start");
+        REQUIRE(t != nullptr);
+        CHECK(close(t->at.value(), limit * b.EI() / b.span, 1e-9));
+        CHECK(close(t->fixity, limit / (limit + 3), 1e-9));  // [MW63]
+        CHECK(t->above == check_status::fail);
+    }
+}
+
+TEST_CASE("deflection threshold - equal springs - UDL [D - pack 5]: wL^4/(384EI) [5 - 4k/(k+2)] = L/360 - tol 1e-9")
+{
+    const double w = 30e3, L = 6.0;
+    const project p = udl_project(w / 1e3, 1000);
+    const beam& b = p.beams.front();
+    const double q = (L / 360) / (w * std::pow(L, 4) / (384 * b.EI()));
+    REQUIRE(q > 1);
+    REQUIRE(q < 5);
+    const double a = (5 - q) / 4, kappa = 2 * a / (1 - a);
+    const auto ts = find_thresholds(p, b, {moving_end::both, stiffness::pinned()});
+    const threshold* t = find(ts, "deflection");
+    REQUIRE(t != nullptr);
+    CHECK(close(t->ratio, kappa, 1e-9));
+    CHECK(t->below == check_status::fail);
+    CHECK(t->above == check_status::pass);
+}
+
+TEST_CASE("rotation demand threshold - equal springs [D - pack 5]: theta_s 2/(k+2) = 0.03 rad - tol 1e-9")
+{
+    const double w = 60e3, L = 6.0;
+    const project p = udl_project(w / 1e3, 1000, "EN1993-1-8", "span/100");
+    const beam& b = p.beams.front();
+    const double theta_s = w * L * L * L / (24 * b.EI());  // Roark Table 8.1 [M]; pack section 6 [C]
+    REQUIRE(theta_s > 0.03);
+    const double kappa = 2 * theta_s / 0.03 - 2;
+    const auto ts = find_thresholds(p, b, {moving_end::both, stiffness::pinned()});
+    const threshold* t = find(ts, "rotation-demand-start");
+    REQUIRE(t != nullptr);
+    CHECK(close(t->ratio, kappa, 1e-9));
+    CHECK(t->below == check_status::warn);
+    CHECK(t->above == check_status::pass);
+}
+
+TEST_CASE("checks that never change state report no threshold [common practice - no source]: support moment - exact")
+{
+    const project p = udl_project(20, 1000);
+    const auto ts = find_thresholds(p, p.beams.front(), {moving_end::both, stiffness::pinned()});
+    CHECK(find(ts, "support-moment-start") == nullptr);
+    CHECK(find(ts, "support-moment-end") == nullptr);
+    CHECK(find(ts, "joint-moment-start") == nullptr);  // 1000 kN*m is never reached
+}
+
+TEST_CASE("one end moving - the other rigid - UDL [MW63 - D]: M_A = (wL^2/4) rA/(4 - rA) at rB = 1 - tol 1e-9")
+{
+    const double w = 20e3, L = 6.0, mrd = 40e3;
+    const project p = udl_project(w / 1e3, mrd / 1e3);
+    const beam& b = p.beams.front();
+    const auto ts = find_thresholds(p, b, {moving_end::start, stiffness::rigid()});
+    const threshold* t = find(ts, "joint-moment-start");
+    REQUIRE(t != nullptr);
+    const double c = 4 * mrd / (w * L * L);
+    const double rA = 4 * c / (1 + c);  // from rA/(4 - rA) = c
+    CHECK(close(t->fixity, rA, 1e-9));
+    CHECK(close(t->ratio, 3 * rA / (1 - rA), 1e-9));
+    // The end joint is held rigid: its moment exceeds 40 kN*m whatever the start does.
+    CHECK(find(ts, "joint-moment-end") == nullptr);
+}
+
+TEST_CASE("boundary curve in the two-end plane - UDL [MW63 - D]: M_A(rA - rB) = M_Rd on every point - tol 1e-8")
+{
+    const double w = 20e3, L = 6.0, mrd = 30e3;
+    const project p = udl_project(w / 1e3, mrd / 1e3);
+    const auto pts = boundary_curve(p, p.beams.front(), "joint-moment-start", 11);
+    REQUIRE(pts.size() >= 5);
+    for (const auto& pt : pts) {
+        const double ra = pt.fixity_start, rb = pt.fixity_end;
+        CAPTURE(ra);
+        const double MA = w * L * L / 4 * ra * (2 - rb) / (4 - ra * rb);
+        CHECK(close(MA, mrd, 1e-8));
+    }
+}
+
+TEST_CASE("text report lines [EC3 5.2.2.5(1)]: the pinned assumption stops holding above S = 0.5 EI/L")
+{
+    const project p = udl_project(20, 1000);
+    const auto lines = threshold_report_lines(p, p.beams.front());
+    bool found = false;
+    for (const auto& l : lines)
+        if (l.find("stiffness-class-start: the pinned assumption stops holding above S = ") == 0) found = true;
+    CHECK(found);
+}
+
+TEST_CASE("fixity factor [MW63]: r = kappa/(kappa + 3) - inverse exact for pin and rigid - tol 1e-14")
+{
+    const double EI = 17.5e6, L = 6;
+    CHECK(fixity_factor(stiffness::pinned(), EI, L) == 0.0);
+    CHECK(fixity_factor(stiffness::rigid(), EI, L) == 1.0);
+    CHECK(stiffness_of_fixity(1.0, EI, L).is_rigid());
+    CHECK(stiffness_of_fixity(0.0, EI, L).is_pinned());
+    CHECK(close(fixity_factor(stiffness::spring(2 * EI / L), EI, L), 0.4, 1e-14));
+    CHECK(close(stiffness_of_fixity(0.4, EI, L).value(), 2 * EI / L, 1e-14));
+}
