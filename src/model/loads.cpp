@@ -1,4 +1,4 @@
-#include "pinproof/loads.hpp"
+#include "pinproof/model/loads.hpp"
 
 namespace pinproof {
 
