@@ -9,6 +9,7 @@
 #include "report_command.hpp"
 #include "sweep_command.hpp"
 #include "detail_command.hpp"
+#include "fit_command.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/core/output_file.hpp"
@@ -119,6 +120,9 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
     std::string report_details;
     report->add_option("--details", report_details, details_help)->type_name("FILE");
 
+    fit_options fit_opts;
+    auto* fit = add_fit_subcommand(app, fit_opts);
+
     std::vector<std::string> reversed(args.rbegin(), args.rend());
     try {
         app.parse(reversed);
@@ -139,7 +143,8 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
         if (detail->parsed()) return detail_command(detail_opts, out, err);
         if (batch->parsed()) return batch_command(batch_options, out, err);
         if (report->parsed()) return report_command(report_file, report_out, out, err, report_details);
-        err << "pinproof: a command is required (check, report, detail, sweep, batch or sections)\nRun with --help for more information.\n";
+        if (fit->parsed()) return fit_command(fit_opts, out);
+        err << "pinproof: a command is required (check, report, detail, sweep, batch, fit or sections)\nRun with --help for more information.\n";
         return exit_error;
     } catch (const input_error& e) {
         report_input_error(e, err);
