@@ -1,0 +1,162 @@
+#include "pinproof/model/natural_frequency.hpp"
+
+#include <Eigen/Dense>
+#include <algorithm>
+#include <cmath>
+#include <stdexcept>
+
+#include "pinproof/core/errors.hpp"
+
+namespace pinproof {
+namespace {
+
+constexpr int minimum_elements = 48;
+constexpr double pi = 3.14159265358979323846;
+
+struct mass_model {
+    std::vector<double> nodes;        // positions, m
+    std::vector<double> line_mass;    // per element, kg/m
+    std::vector<double> point_mass;   // per node, kg
+};
+
+mass_model masses_of(double span, const std::vector<load>& loads)
+{
+    std::vector<double> cuts{0.0, span};
+    for (const load& l : loads) {
+        if (l.kind == load_kind::point || l.kind == load_kind::moment) {
+            cuts.push_back(l.from);
+        } else {
+            cuts.push_back(l.from);
+            cuts.push_back(l.to);
+        }
+    }
+    std::sort(cuts.begin(), cuts.end());
+    cuts.erase(std::unique(cuts.begin(), cuts.end(), [&](double a, double b) { return b - a <= 1e-9 * span; }),
+               cuts.end());
+    cuts.back() = span;
+    // Subdivide each interval so that no element is longer than span / minimum_elements.
+    mass_model m;
+    const double longest = span / minimum_elements;
+    for (std::size_t i = 0; i + 1 < cuts.size(); ++i) {
+        const int parts = std::max(1, static_cast<int>(std::ceil((cuts[i + 1] - cuts[i]) / longest - 1e-9)));
+        for (int p = 0; p < parts; ++p) m.nodes.push_back(cuts[i] + (cuts[i + 1] - cuts[i]) * p / parts);
+    }
+    m.nodes.push_back(span);
+    m.line_mass.assign(m.nodes.size() - 1, 0.0);
+    m.point_mass.assign(m.nodes.size(), 0.0);
+    for (const load& l : loads) {
+        if (l.kind == load_kind::moment) continue;
+        if (l.kind == load_kind::point) {
+            const auto it = std::min_element(m.nodes.begin(), m.nodes.end(), [&](double a, double b) {
+                return std::abs(a - l.from) < std::abs(b - l.from);
+            });
+            m.point_mass[static_cast<std::size_t>(it - m.nodes.begin())] += l.value / standard_gravity;
+            continue;
+        }
+        for (std::size_t e = 0; e + 1 < m.nodes.size(); ++e) {
+            const double x0 = m.nodes[e], x1 = m.nodes[e + 1];
+            // The element's mean intensity: exact for a uniform load, and for a
+            // linear one the mean over the element.
+            m.line_mass[e] += 0.5 * (intensity_at(l, x0 + 1e-12 * (x1 - x0)) + intensity_at(l, x1 - 1e-12 * (x1 - x0))) /
+                              standard_gravity;
+        }
+    }
+    for (double v : m.line_mass)
+        if (v < 0) throw std::invalid_argument("a vibration combination must not load the beam upward (negative mass)");
+    for (double v : m.point_mass)
+        if (v < 0) throw std::invalid_argument("a vibration combination must not load the beam upward (negative mass)");
+    return m;
+}
+
+}  // namespace
+
+double first_natural_frequency(double span, double EI, const std::vector<load>& loads, stiffness start, stiffness end)
+{
+    if (!(std::isfinite(span) && span > 0) || !(std::isfinite(EI) && EI > 0))
+        throw std::invalid_argument("span and EI must be finite and > 0");
+    for (const load& l : loads)
+        if (!(l.from >= 0 && l.from <= span) || (l.kind != load_kind::point && l.kind != load_kind::moment &&
+                                                 !(l.to >= l.from && l.to <= span)))
+            throw std::invalid_argument("a load lies outside the span");
+    const mass_model mm = masses_of(span, loads);
+    double total = 0;
+    for (std::size_t e = 0; e < mm.line_mass.size(); ++e) total += mm.line_mass[e] * (mm.nodes[e + 1] - mm.nodes[e]);
+    for (double p : mm.point_mass) total += p;
+    if (!(total > 0)) throw std::invalid_argument("the vibration combination carries no mass");
+
+    // Nondimensional: lengths by L, stiffness by EI/L^3, mass by m_ref L with
+    // m_ref the mean mass per length; eigenvalue mu = omega^2 m_ref L^4 / EI.
+    const double m_ref = total / span;
+    const std::size_t n_nodes = mm.nodes.size();
+    // DOFs: node i -> w (2i), theta (2i + 1); the end deflections are held.
+    const Eigen::Index full = static_cast<Eigen::Index>(2 * n_nodes);
+    Eigen::MatrixXd K = Eigen::MatrixXd::Zero(full, full), M = Eigen::MatrixXd::Zero(full, full);
+    for (std::size_t e = 0; e + 1 < n_nodes; ++e) {
+        const double l = (mm.nodes[e + 1] - mm.nodes[e]) / span;
+        const double mu = mm.line_mass[e] / m_ref;
+        Eigen::Matrix4d k, m;
+        k << 12, 6 * l, -12, 6 * l, 6 * l, 4 * l * l, -6 * l, 2 * l * l, -12, -6 * l, 12, -6 * l, 6 * l, 2 * l * l,
+            -6 * l, 4 * l * l;
+        k /= l * l * l;
+        m << 156, 22 * l, 54, -13 * l, 22 * l, 4 * l * l, 13 * l, -3 * l * l, 54, 13 * l, 156, -22 * l, -13 * l,
+            -3 * l * l, -22 * l, 4 * l * l;
+        m *= mu * l / 420;
+        const Eigen::Index o = static_cast<Eigen::Index>(2 * e);
+        K.block<4, 4>(o, o) += k;
+        M.block<4, 4>(o, o) += m;
+    }
+    for (std::size_t i = 0; i < n_nodes; ++i)
+        M(static_cast<Eigen::Index>(2 * i), static_cast<Eigen::Index>(2 * i)) += mm.point_mass[i] / (m_ref * span);
+    // Springs: kappa = S L / EI on the end rotations.
+    const Eigen::Index rot_start = 1, rot_end = full - 1;
+    if (!start.is_rigid()) K(rot_start, rot_start) += start.ratio(EI, span);
+    if (!end.is_rigid()) K(rot_end, rot_end) += end.ratio(EI, span);
+
+    std::vector<Eigen::Index> kept;
+    for (Eigen::Index d = 0; d < full; ++d) {
+        if (d == 0 || d == full - 2) continue;  // end deflections held by the supports
+        if (d == rot_start && start.is_rigid()) continue;
+        if (d == rot_end && end.is_rigid()) continue;
+        kept.push_back(d);
+    }
+    const Eigen::Index n = static_cast<Eigen::Index>(kept.size());
+    Eigen::MatrixXd Kr(n, n), Mr(n, n);
+    for (Eigen::Index i = 0; i < n; ++i)
+        for (Eigen::Index j = 0; j < n; ++j) {
+            Kr(i, j) = K(kept[static_cast<std::size_t>(i)], kept[static_cast<std::size_t>(j)]);
+            Mr(i, j) = M(kept[static_cast<std::size_t>(i)], kept[static_cast<std::size_t>(j)]);
+        }
+    // Degrees of freedom that carry no mass (all of them but the point masses'
+    // deflections when the beam carries point loads only) are condensed out
+    // statically, which is exact for them: K* = K_mm - K_mo K_oo^-1 K_om.
+    std::vector<Eigen::Index> massive, massless;
+    for (Eigen::Index i = 0; i < n; ++i) (Mr.row(i).cwiseAbs().maxCoeff() > 0 ? massive : massless).push_back(i);
+    if (massive.empty()) throw std::invalid_argument("the vibration combination carries no mass");
+    auto pick = [](const Eigen::MatrixXd& A, const std::vector<Eigen::Index>& r, const std::vector<Eigen::Index>& c) {
+        Eigen::MatrixXd B(static_cast<Eigen::Index>(r.size()), static_cast<Eigen::Index>(c.size()));
+        for (std::size_t i = 0; i < r.size(); ++i)
+            for (std::size_t j = 0; j < c.size(); ++j) B(static_cast<Eigen::Index>(i), static_cast<Eigen::Index>(j)) = A(r[i], c[j]);
+        return B;
+    };
+    Eigen::MatrixXd Kc = pick(Kr, massive, massive);
+    if (!massless.empty()) {
+        const Eigen::MatrixXd Kmo = pick(Kr, massive, massless);
+        Kc -= Kmo * pick(Kr, massless, massless).ldlt().solve(Kmo.transpose());
+    }
+    const Eigen::MatrixXd Mc = pick(Mr, massive, massive);
+    Eigen::GeneralizedSelfAdjointEigenSolver<Eigen::MatrixXd> solver(Kc, Mc, Eigen::EigenvaluesOnly);
+    if (solver.info() != Eigen::Success) throw internal_error("the frequency eigenproblem did not converge");
+    const double mu = solver.eigenvalues()(0);
+    if (!(std::isfinite(mu) && mu > 0)) throw internal_error("the frequency eigenproblem gave no positive eigenvalue");
+    const double omega = std::sqrt(mu * EI / (m_ref * std::pow(span, 4)));
+    return omega / (2 * pi);
+}
+
+double frequency_from_deflection(double deflection)
+{
+    if (!(std::isfinite(deflection) && deflection > 0))
+        throw std::invalid_argument("the deflection must be finite and > 0");
+    return 18.0 / std::sqrt(deflection * 1e3);
+}
+
+}  // namespace pinproof
