@@ -1,0 +1,190 @@
+#include "pinproof/joints/fin_plate.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <stdexcept>
+
+#include "pinproof/joints/bolt_group.hpp"
+
+namespace pinproof {
+namespace {
+
+constexpr double gamma_M0 = 1.0, gamma_M2 = 1.25;
+const double sqrt3 = std::sqrt(3.0);
+
+steel_material plate_steel(plate_grade g)
+{
+    steel_material s;
+    s.grade = g == plate_grade::s355 ? steel_grade::s355 : steel_grade::s275;
+    return s;
+}
+
+// EN 1993-1-8 4.5.3.2(6) Table 4.1: beta_w 0.85 for S275, 0.9 for S355 (from memory).
+double beta_w(plate_grade g) { return g == plate_grade::s355 ? 0.9 : 0.85; }
+
+struct geometry {
+    int n = 0;
+    double d = 0, d0 = 0, p1 = 0, hp = 0, tp = 0, e1_top = 0, e1_bottom = 0, z = 0, e2 = 0, bolt_line = 0;
+    std::optional<double> web_e1;  // top bolt to the edge of a top cope
+};
+
+geometry geometry_of(const connection_detail& d, const fin_plate_inputs& in)
+{
+    geometry g;
+    g.n = d.bolts.rows;
+    g.d = d.bolts.diameter;
+    g.d0 = d.bolts.hole_diameter;
+    g.p1 = d.bolts.pitch;
+    g.hp = d.plate_depth;
+    g.tp = d.plate_thickness;
+    g.e1_top = d.bolts.first_bolt;
+    g.e1_bottom = g.hp - g.e1_top - (g.n - 1) * g.p1;
+    g.bolt_line = d.bolts.bolt_line;
+    g.z = d.gap + d.bolts.bolt_line;
+    g.e2 = in.plate_edge_distance.value_or(2 * g.d);
+    if (d.cope_top) g.web_e1 = d.plate_top + g.e1_top - d.cope_top->depth;
+    if (g.n < 2) throw std::invalid_argument("a fin plate joint is derived for two or more bolt rows");
+    if (!(g.e1_top > 0.5 * g.d0) || !(g.e1_bottom > 0.5 * g.d0))
+        throw std::invalid_argument("a bolt hole lies outside the fin plate");
+    if (!(g.e2 > 0.5 * g.d0)) throw std::invalid_argument("the plate edge distance is smaller than the hole's radius");
+    if (!(g.bolt_line > 0.5 * g.d0)) throw std::invalid_argument("the bolt line is too close to the beam end");
+    return g;
+}
+
+// The smallest bearing resistance of any bolt, in either direction.
+double bearing_in_plate(const geometry& g, double fub, double fu)
+{
+    bearing_geometry vertical;  // the bolts push the plate down: the bottom end distance
+    vertical.hole = g.d0;
+    vertical.e1 = g.e1_bottom;
+    vertical.p1 = g.p1;
+    vertical.e2 = g.e2;
+    bearing_geometry horizontal;  // towards the plate's free edge
+    horizontal.hole = g.d0;
+    horizontal.e1 = g.e2;
+    horizontal.e2 = std::min(g.e1_top, g.e1_bottom);
+    horizontal.p2 = g.p1;
+    return std::min(en_bolt_bearing_resistance(vertical, g.d, fub, fu, g.tp, gamma_M2),
+                    en_bolt_bearing_resistance(horizontal, g.d, fub, fu, g.tp, gamma_M2));
+}
+
+double bearing_in_web(const geometry& g, double tw, double fub, double fu)
+{
+    bearing_geometry vertical;  // the bolts push the web up: only a top cope gives an end
+    vertical.hole = g.d0;
+    vertical.p1 = g.p1;
+    if (g.web_e1) vertical.e1 = *g.web_e1;
+    vertical.e2 = g.bolt_line;
+    bearing_geometry horizontal;  // towards the beam end
+    horizontal.hole = g.d0;
+    horizontal.e1 = g.bolt_line;
+    horizontal.p2 = g.p1;
+    return std::min(en_bolt_bearing_resistance(vertical, g.d, fub, fu, tw, gamma_M2),
+                    en_bolt_bearing_resistance(horizontal, g.d, fub, fu, tw, gamma_M2));
+}
+
+double web_shear_area(const section& beam, const connection_detail& d)
+{
+    const double tw = *beam.web_thickness;
+    if (d.cope_top || d.cope_bottom) {
+        const double left = beam.depth - (d.cope_top ? d.cope_top->depth : 0) - (d.cope_bottom ? d.cope_bottom->depth : 0);
+        return tw * left;
+    }
+    if (beam.area && beam.flange_width && beam.flange_thickness && beam.root_radius) {
+        // EN 1993-1-1 6.2.6(3)(a), rolled I section, eta taken as 1 (on the safe side).
+        const double tf = *beam.flange_thickness;
+        const double Av = *beam.area - 2 * *beam.flange_width * tf + (tw + 2 * *beam.root_radius) * tf;
+        return std::max(Av, (beam.depth - 2 * tf) * tw);
+    }
+    return beam.depth * tw;
+}
+
+}  // namespace
+
+fin_plate_joint derive_fin_plate(const connection_detail& d, const section& beam, const fin_plate_inputs& in)
+{
+    if (d.type != detail_type::fin_plate) throw std::invalid_argument("the detail is not a fin plate");
+    if (is_us_grade(in.bolts))
+        throw std::invalid_argument("EN 1993-1-8 fin plate components take EN bolt classes (4.6, 8.8, 10.9)");
+    if (!beam.web_thickness) throw std::invalid_argument("the beam's web thickness is needed for bearing on the web");
+    const geometry g = geometry_of(d, in);
+    const steel_material ps = plate_steel(d.grade);
+    const double fy_p = ps.fy(g.tp), fu_p = *ps.fu(g.tp);
+    const double tw = *beam.web_thickness;
+    const double fy_w = in.beam_steel.fy(tw);
+    const auto fu_w_opt = in.beam_steel.fu(tw);
+    if (!fu_w_opt) throw std::invalid_argument("the beam steel's tensile strength is needed for bearing on the web");
+    const double fu_w = *fu_w_opt;
+    const double fub = bolt_fub(in.bolts);
+
+    const bolt_group group(bolt_pattern(g.n, g.p1));
+    fin_plate_joint out;
+    out.lever_arm = g.z;
+    out.plate_edge_distance = g.e2;
+    out.plate_edge_distance_default = !in.plate_edge_distance;
+
+    const double Fv = en_bolt_shear_resistance(in.bolts, g.d, in.threads_in_shear_plane, gamma_M2);
+    const double Fb_p = bearing_in_plate(g, fub, fu_p);
+    const double Fb_w = bearing_in_web(g, tw, fub, fu_w);
+
+    // Stiffness per bolt: shear and bearing on both plies in series (Table 6.11).
+    const double k11 = en_k11_bolt_shear(g.d, fub, in.E);
+    const double k12_p = en_k12_bolt_bearing(g.d, fu_p, g.tp, std::min(g.e1_bottom, g.e2), g.p1, in.E);
+    const double k12_w = en_k12_bolt_bearing(g.d, fu_w, tw, g.bolt_line, g.p1, in.E);
+    const double k_bolt = in.E / (1 / k11 + 1 / k12_p + 1 / k12_w);
+
+    auto& c = out.components;
+    c.push_back({"bolt-shear", group.shear_resistance(Fv, g.z), Fv, in.E * k11,
+                 "EN 1993-1-8 Table 3.4; bolt group with the eccentricity z (simple-joints design guide)"});
+    c.push_back({"bolt-bearing-plate", group.shear_resistance(Fb_p, g.z), Fb_p, in.E * k12_p,
+                 "EN 1993-1-8 Table 3.4, the smaller of the vertical and horizontal directions"});
+    c.push_back({"bolt-bearing-web", group.shear_resistance(Fb_w, g.z), Fb_w, in.E * k12_w,
+                 "EN 1993-1-8 Table 3.4, the smaller of the vertical and horizontal directions"});
+
+    const double gross = g.hp * g.tp * fy_p / (1.27 * sqrt3 * gamma_M0);
+    const double net = (g.hp - g.n * g.d0) * g.tp * fu_p / (sqrt3 * gamma_M2);
+    c.push_back({"plate-shear", std::min(gross, net), std::nullopt, std::nullopt,
+                 "EN 1993-1-1 6.2.6 gross (with the guide's 1.27 for bending, from memory) and net"});
+
+    const double A_nt = g.tp * (g.e2 - 0.5 * g.d0);
+    const double A_nv = g.tp * (g.hp - g.e1_top - (g.n - 0.5) * g.d0);
+    c.push_back({"plate-block-tearing", 0.5 * fu_p * A_nt / gamma_M2 + fy_p * A_nv / (sqrt3 * gamma_M0), std::nullopt,
+                 std::nullopt, "EN 1993-1-8 3.10.2(3), eccentric loading"});
+
+    if (g.hp < 2.73 * g.z)
+        c.push_back({"plate-bending", g.tp * g.hp * g.hp / 6 * fy_p / (g.z * gamma_M0), std::nullopt, std::nullopt,
+                     "elastic bending at the bolt line; h_p < 2.73 z (simple-joints design guide, from memory)"});
+    else
+        c.push_back({"plate-bending", std::nullopt, std::nullopt, std::nullopt,
+                     "not critical: h_p >= 2.73 z (simple-joints design guide, from memory)"});
+
+    if (in.weld_throat) {
+        const double fvw = fu_p / (sqrt3 * beta_w(d.grade) * gamma_M2);
+        const double per_length = fvw * *in.weld_throat;  // N/m of one weld
+        // Two welds of length h_p: V/(2 h_p) down, and V z over their section modulus 2 h_p^2 / 6.
+        const double per_unit_V = std::hypot(1 / (2 * g.hp), g.z * 3 / (g.hp * g.hp));
+        c.push_back({"weld", per_length / per_unit_V, std::nullopt, std::nullopt,
+                     "EN 1993-1-8 4.5.3.3 simplified method; the shear taken at the bolt line"});
+    } else {
+        c.push_back({"weld", std::nullopt, std::nullopt, std::nullopt, "not derived: no weld size given"});
+    }
+
+    c.push_back({"web-shear", web_shear_area(beam, d) * fy_w / (sqrt3 * gamma_M0), std::nullopt, std::nullopt,
+                 "EN 1993-1-1 6.2.6"});
+
+    out.shear_resistance = 1e300;
+    for (const joint_component& k : c)
+        if (k.resistance && *k.resistance < out.shear_resistance) {
+            out.shear_resistance = *k.resistance;
+            out.governing = k.id;
+        }
+
+    const double F_min = std::min({Fv, Fb_p, Fb_w});
+    out.moment_resistance = group.moment_resistance(F_min);
+    out.moment_governing = F_min == Fv ? "bolt-shear" : (F_min == Fb_p ? "bolt-bearing-plate" : "bolt-bearing-web");
+    out.initial_stiffness = group.rotational_stiffness(k_bolt);
+    out.free_rotation = group.free_rotation(g.d0 - g.d);
+    return out;
+}
+
+}  // namespace pinproof
