@@ -10,6 +10,7 @@
 #include "sweep_command.hpp"
 #include "detail_command.hpp"
 #include "fit_command.hpp"
+#include "new_command.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/core/output_file.hpp"
@@ -120,6 +121,9 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
     std::string report_details;
     report->add_option("--details", report_details, details_help)->type_name("FILE");
 
+    new_options new_opts;
+    auto* starter = add_new_subcommand(app, new_opts);
+
     fit_options fit_opts;
     auto* fit = add_fit_subcommand(app, fit_opts);
 
@@ -144,7 +148,8 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
         if (batch->parsed()) return batch_command(batch_options, out, err);
         if (report->parsed()) return report_command(report_file, report_out, out, err, report_details);
         if (fit->parsed()) return fit_command(fit_opts, out);
-        err << "pinproof: a command is required (check, report, detail, sweep, batch, fit or sections)\nRun with --help for more information.\n";
+        if (starter->parsed()) return new_command(new_opts, out);
+        err << "pinproof: a command is required (new, check, report, detail, sweep, batch, fit or sections)\nRun with --help for more information.\n";
         return exit_error;
     } catch (const input_error& e) {
         report_input_error(e, err);
