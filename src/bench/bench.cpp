@@ -106,23 +106,39 @@ double rate(const std::function<void()>& pass, double per_pass, double min_secon
 
 volatile double sink = 0;
 
-int engine_figures()
-{
-    const beam_model model(L, EI, bench_loads());
-    const closed_form cf;
-    const auto ks = sweep_values();
-    const double n = static_cast<double>(ks.size() * ks.size());
-
-    // The two must agree before their speeds are compared.
+// The figures of one run: how far the engine is from the closed form, and
+// the speed of each way of evaluating the sweep (analyses per second).
+struct engine_run {
+    beam_model model{L, EI, bench_loads()};
+    closed_form cf;
+    std::vector<stiffness> ks = sweep_values();
+    double n = static_cast<double>(ks.size() * ks.size());
     double worst = 0;
+    double floor_rate = 0, condensed_rate = 0, grid_rate = 0, inline_rate = 0, full_rate = 0, rebuild_rate = 0;
+};
+
+// The two must agree before their speeds are compared.
+void check_agreement(engine_run& r)
+{
+    const auto& model = r.model;
+    const auto& cf = r.cf;
+    const auto& ks = r.ks;
+    double& worst = r.worst;
     for (const auto& a : ks)
         for (const auto& b : ks) {
             const auto m = model.end_moments(a, b);
             const auto c = cf.end_moments(a.value(), b.value());
             for (int j = 0; j < 2; ++j) worst = std::max(worst, std::abs(m[j] - c[j]) / std::max(1.0, std::abs(c[j])));
         }
+}
 
-    const double floor_rate = rate(
+// The closed-form floor and the engine one pair per call.
+void time_pairs(engine_run& r)
+{
+    const auto& model = r.model;
+    const auto& cf = r.cf;
+    const auto& ks = r.ks;
+    r.floor_rate = rate(
         [&] {
             double acc = 0;
             for (const auto& a : ks)
@@ -132,8 +148,8 @@ int engine_figures()
                 }
             sink = sink + acc;
         },
-        n);
-    const double condensed_rate = rate(
+        r.n);
+    r.condensed_rate = rate(
         [&] {
             double acc = 0;
             for (const auto& a : ks)
@@ -143,17 +159,25 @@ int engine_figures()
                 }
             sink = sink + acc;
         },
-        n);
-    // The engine's sweep entry point: each joint's row formed once per sweep.
+        r.n);
+}
+
+// The engine's sweep entry point: each joint's row formed once per sweep.
+void time_grid(engine_run& r)
+{
+    const auto& model = r.model;
+    const auto& cf = r.cf;
+    const auto& ks = r.ks;
+    double& worst = r.worst;
     std::vector<std::array<double, 2>> grid;
-    const double grid_rate = rate(
+    r.grid_rate = rate(
         [&] {
             model.end_moments_grid(ks, ks, grid);
             double acc = 0;
             for (const auto& m : grid) acc += m[0] + m[1];
             sink = sink + acc;
         },
-        n);
+        r.n);
     model.end_moments_grid(ks, ks, grid);
     for (std::size_t i = 0; i < ks.size(); ++i)
         for (std::size_t j = 0; j < ks.size(); ++j) {
@@ -161,14 +185,21 @@ int engine_figures()
             for (int e = 0; e < 2; ++e)
                 worst = std::max(worst, std::abs(grid[i * ks.size() + j][e] - c[e]) / std::max(1.0, std::abs(c[e])));
         }
-    // The engine's own condensed terms (from its factorised model), with the
-    // 2x2 solved inline in the sweep loop as a caller of the public API can.
+}
+
+// The engine's own condensed terms (from its factorised model), with the
+// 2x2 solved inline in the sweep loop as a caller of the public API can;
+// then the full state, and the model re-assembled for every pair.
+void time_engine_terms(engine_run& r)
+{
+    const auto& model = r.model;
+    const auto& ks = r.ks;
     closed_form from_engine;
     from_engine.th0[0] = model.pinned_rotations()[0];
     from_engine.th0[1] = model.pinned_rotations()[1];
     from_engine.f11 = model.flexibility()[0][0];
     from_engine.f12 = model.flexibility()[0][1];
-    const double inline_rate = rate(
+    r.inline_rate = rate(
         [&] {
             double acc = 0;
             for (const auto& a : ks)
@@ -178,18 +209,18 @@ int engine_figures()
                 }
             sink = sink + acc;
         },
-        n);
-    const double full_rate = rate(
+        r.n);
+    r.full_rate = rate(
         [&] {
             double acc = 0;
             for (const auto& a : ks)
                 for (const auto& b : ks) acc += model.solve(a, b).max_deflection;
             sink = sink + acc;
         },
-        n);
+        r.n);
     // Re-assembling and factorising the model for every stiffness pair, which
     // the sweep avoids: measured on the first 20 x 20 pairs.
-    const double rebuild_rate = rate(
+    r.rebuild_rate = rate(
         [&] {
             double acc = 0;
             for (int i = 0; i < 20; ++i)
@@ -200,19 +231,35 @@ int engine_figures()
             sink = sink + acc;
         },
         400.0);
+}
 
+void print_figures(const engine_run& r)
+{
+    const auto& ks = r.ks;
+    const double floor_rate = r.floor_rate, grid_rate = r.grid_rate, condensed_rate = r.condensed_rate;
+    const double inline_rate = r.inline_rate, full_rate = r.full_rate;
     std::printf("pinproof-bench: one beam (8 m, UDL and three point loads), sweep of %zu x %zu end stiffnesses, "
                 "one thread\n",
                 ks.size(), ks.size());
-    std::printf("  engine and closed form agree to %.1e (relative, end moments)\n", worst);
+    std::printf("  engine and closed form agree to %.1e (relative, end moments)\n", r.worst);
     std::printf("  closed-form condensed floor (2x2 with known load terms): %14.0f analyses/s\n", floor_rate);
     std::printf("  engine, sweep (beam_model::end_moments_grid)           : %14.0f analyses/s\n", grid_rate);
     std::printf("  engine, one pair per call (beam_model::end_moments)    : %14.0f analyses/s\n", condensed_rate);
     std::printf("  engine condensed terms, 2x2 inline in the sweep loop   : %14.0f analyses/s\n", inline_rate);
     std::printf("  engine, full state (beam_model::solve)                 : %14.0f analyses/s\n", full_rate);
-    std::printf("  engine, re-assembled for every pair (constructor + end_moments): %8.0f analyses/s\n", rebuild_rate);
+    std::printf("  engine, re-assembled for every pair (constructor + end_moments): %8.0f analyses/s\n", r.rebuild_rate);
     std::printf("  ratio floor/engine: sweep %.2f, one pair per call %.2f, condensed terms inline %.2f, full state %.1f\n",
                 floor_rate / grid_rate, floor_rate / condensed_rate, floor_rate / inline_rate, floor_rate / full_rate);
+}
+
+int engine_figures()
+{
+    engine_run r;
+    check_agreement(r);
+    time_pairs(r);
+    time_grid(r);
+    time_engine_terms(r);
+    print_figures(r);
     return 0;
 }
 

@@ -181,7 +181,10 @@ private:
     void inputs(const beam& b);
     void joints(const beam& b, const beam_assessment& ba);
     void combination_block(const beam& b, const combination_result& r);
+    void results_table(const combination_result& r);
+    void span_diagrams(const beam& b, const combination_result& r);
     void sweep_chart(const beam& b);
+    void beam_lines(const beam& b);
     void beam_line_chart(const beam& b, const combination& c, beam_end e);
     void gap_drawings(const beam& b, const beam_assessment& ba);
     void checks(const beam_assessment& ba);
@@ -386,6 +389,13 @@ void report_writer::combination_block(const beam& b, const combination_result& r
 {
     o_ << "<h3>Combination " << esc(r.comb.name) << " (" << esc(to_string(r.comb.use)) << "): "
        << esc(combination_text(r.comb)) << "</h3>\n";
+    results_table(r);
+    span_diagrams(b, r);
+}
+
+// Each result with ideal pins, over the stiffness range, and with fixed ends.
+void report_writer::results_table(const combination_result& r)
+{
     o_ << "<table>\n<tr><th>Result</th><th>Unit</th><th>Pinned</th><th>Range min</th><th>Range max</th>"
           "<th>Fixed</th></tr>\n";
     const auto& f = result_fields();
@@ -402,8 +412,11 @@ void report_writer::combination_block(const beam& b, const combination_result& r
            << "</td><td class=\"num\">" << cell(r.fixed.*(f[i].member)) << "</td></tr>\n";
     }
     o_ << "</table>\n";
+}
 
-    // Diagrams, pointwise over the span, from the same model the assessment used.
+// Diagrams, pointwise over the span, from the same model the assessment used.
+void report_writer::span_diagrams(const beam& b, const combination_result& r)
+{
     const beam_model model(b.span, b.EI(), factored_loads(b.loads, r.comb));
     std::vector<double> xs;
     const int n = 160;
@@ -471,6 +484,19 @@ void report_writer::sweep_chart(const beam& b)
            "Stiffness sweep of beam " + b.id + ", combination " + settings.combination +
                ": EN 1993-1-8 boundaries 0.5 and " + format_number(en_rigid_limit(p_.frame), 2) +
                ", AISC 360 boundaries 2 and 20.");
+}
+
+// The beam lines for the first strength combination (else the first).
+void report_writer::beam_lines(const beam& b)
+{
+    const combination* c = nullptr;
+    for (const auto& x : b.combinations)
+        if (!c && x.use == limit_state::strength) c = &x;
+    if (!c && !b.combinations.empty()) c = &b.combinations.front();
+    if (c) {
+        o_ << "<h3>Beam lines, combination " << esc(c->name) << "</h3>\n";
+        for (beam_end e : {beam_end::start, beam_end::end}) beam_line_chart(b, *c, e);
+    }
 }
 
 void report_writer::beam_line_chart(const beam& b, const combination& c, beam_end e)
@@ -583,15 +609,7 @@ void report_writer::beam_section(const beam_assessment& ba)
     joints(b, ba);
     for (const auto& r : ba.combinations) combination_block(b, r);
     sweep_chart(b);
-    // The beam lines for the first strength combination (else the first).
-    const combination* c = nullptr;
-    for (const auto& x : b.combinations)
-        if (!c && x.use == limit_state::strength) c = &x;
-    if (!c && !b.combinations.empty()) c = &b.combinations.front();
-    if (c) {
-        o_ << "<h3>Beam lines, combination " << esc(c->name) << "</h3>\n";
-        for (beam_end e : {beam_end::start, beam_end::end}) beam_line_chart(b, *c, e);
-    }
+    beam_lines(b);
     gap_drawings(b, ba);
     checks(ba);
     verdict(ba);

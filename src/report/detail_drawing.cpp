@@ -110,31 +110,142 @@ double drawing_exaggeration(double demand, const closure& c, double shown_rotati
     return nice_floor(f);
 }
 
-std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, double rotation_demand,
-                       const detail_drawing_options& options)
-{
-    if (!std::isfinite(rotation_demand)) throw internal_error("detail_svg: the rotation demand is not finite");
-    const auto len = [&options](double metres) { return format_quantity(metres, dims::length, options.units, 3); };
-    const rotation_sense sense = rotation_demand < 0 ? rotation_sense::hogging : rotation_sense::sagging;
-    const double demand = std::abs(rotation_demand);
-    const double sgn = sense == rotation_sense::sagging ? 1.0 : -1.0;
-    const closure cl = find_closure(g, sense);
-    const closure other = find_closure(g, sense == rotation_sense::sagging ? rotation_sense::hogging : rotation_sense::sagging);
-    const double factor = drawing_exaggeration(demand, cl, options.shown_rotation);
-    const double shown = demand * factor;
-    const bool fails = demand > 0 && cl.rotation && *cl.rotation < demand;
-    const point2 centre = g.centre(sense);
-    const double h = g.depth;
+namespace {
 
-    // World extent of the view.
-    double reach_x = 0.9 * h;
+constexpr double margin = 20, header = 64;  // px
+
+// One drawing of a beam end: the view of the detail, the SVG written so far
+// and the labels waiting for their place in the column beside the elevation.
+// Each part of the drawing is one step of write(), in the order it is drawn.
+class detail_sheet {
+public:
+    detail_sheet(const beam_end_geometry& g, const connection_detail& d, double rotation_demand,
+                 const detail_drawing_options& options);
+    std::string write();
+
+private:
+    std::string len(double metres) const { return format_quantity(metres, dims::length, options.units, 3); }
+    void frame_view();
+    void flange_inner_faces();
+    void notes_below();
+    void defs();
+    void heading();
+    void elevation();
+    void break_line();
+    void gap_dimension();
+    void centre_and_contact();
+    void part_labels();
+    void place_labels();
+    void write_labels();
+    void notes_and_scale_bar();
+    std::string document() const;
+
+    void poly(const std::vector<point2>& pts, double turned_by, point2 c, const std::string& style);
+    void line(point2 a, point2 b, const std::string& style);
+    void circle(point2 c, double r_px, const std::string& style);
+    void add_label(point2 anchor, const std::string& text, const std::string& colour = "#222");
+
+    const beam_end_geometry& g;
+    const connection_detail& d;
+    const detail_drawing_options& options;
+    rotation_sense sense;
+    double demand, sgn;
+    closure cl, other;
+    double factor, shown;
+    bool fails;
+    point2 centre;
+    double h;
+
+    double reach_x = 0, x0 = 0, x1 = 0, y0 = 0, y1 = 0, pad = 0;  // world extent of the view, m
+    view v;
+    double draw_w = 0, draw_h = 0, draw_left = 0, column_left = 0, width = 0, height = 0;  // px
+    std::ostringstream svg;
+    std::vector<label> labels;
+    std::vector<std::pair<point2, point2>> flange_lines;
+    double angle = 0;
+    std::string turned_colour;
+    std::vector<std::string> note_lines;
+};
+
+detail_sheet::detail_sheet(const beam_end_geometry& g_, const connection_detail& d_, double rotation_demand,
+                           const detail_drawing_options& options_)
+    : g(g_), d(d_), options(options_)
+{
+    sense = rotation_demand < 0 ? rotation_sense::hogging : rotation_sense::sagging;
+    demand = std::abs(rotation_demand);
+    sgn = sense == rotation_sense::sagging ? 1.0 : -1.0;
+    cl = find_closure(g, sense);
+    other = find_closure(g, sense == rotation_sense::sagging ? rotation_sense::hogging : rotation_sense::sagging);
+    factor = drawing_exaggeration(demand, cl, options.shown_rotation);
+    shown = demand * factor;
+    fails = demand > 0 && cl.rotation && *cl.rotation < demand;
+    centre = g.centre(sense);
+    h = g.depth;
+}
+
+std::string detail_sheet::write()
+{
+    frame_view();
+    flange_inner_faces();
+    angle = sgn * shown;
+    turned_colour = fails ? "#c0392b" : "#1f4fbf";
+    notes_below();
+    defs();
+    heading();
+    elevation();
+    break_line();
+    gap_dimension();
+    centre_and_contact();
+    part_labels();
+    place_labels();
+    write_labels();
+    notes_and_scale_bar();
+    return document();
+}
+
+void detail_sheet::poly(const std::vector<point2>& pts, double turned_by, point2 c, const std::string& style)
+{
+    svg << "<polygon points=\"";
+    for (const auto& p0 : pts) {
+        const point2 p = turned_by == 0 ? p0 : turn(p0, c, turned_by);
+        svg << num(v.X(p.x)) << ',' << num(v.Y(p.y)) << ' ';
+    }
+    svg << "\" " << style << "/>\n";
+}
+
+void detail_sheet::line(point2 a, point2 b, const std::string& style)
+{
+    svg << "<line x1=\"" << num(v.X(a.x)) << "\" y1=\"" << num(v.Y(a.y)) << "\" x2=\"" << num(v.X(b.x))
+        << "\" y2=\"" << num(v.Y(b.y)) << "\" " << style << "/>\n";
+}
+
+void detail_sheet::circle(point2 c, double r_px, const std::string& style)
+{
+    svg << "<circle cx=\"" << num(v.X(c.x)) << "\" cy=\"" << num(v.Y(c.y)) << "\" r=\"" << num(r_px) << "\" "
+        << style << "/>\n";
+}
+
+void detail_sheet::add_label(point2 anchor, const std::string& text, const std::string& colour)
+{
+    label l;
+    l.ax = v.X(anchor.x);
+    l.ay = v.Y(anchor.y);
+    l.lines = wrap(text, static_cast<std::size_t>((label_column - 10) / char_width));
+    l.colour = colour;
+    labels.push_back(l);
+}
+
+// World extent of the view, and the view that maps it to the page.
+void detail_sheet::frame_view()
+{
+    reach_x = 0.9 * h;
     for (const auto& c : {d.cope_top, d.cope_bottom})
         if (c) reach_x = std::max(reach_x, g.gap + c->length + 0.25 * h);
     for (const auto& f : g.fittings)
         for (const auto& p : f.points) reach_x = std::max(reach_x, -p.x + 0.25 * h);
     if (d.type == detail_type::custom)
         for (const auto& p : g.outline.points) reach_x = std::max(reach_x, std::min(-p.x, 2.0 * h) + 0.05 * h);
-    double x0 = -reach_x - 0.05 * h, x1 = 0.2 * h, y0 = -h, y1 = 0;
+    x0 = -reach_x - 0.05 * h, x1 = 0.2 * h, y0 = -h, y1 = 0;
     if (d.type == detail_type::custom)
         for (const auto& p : g.outline.points) {
             y0 = std::min(y0, p.y);
@@ -147,51 +258,23 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
         y0 = std::min(y0, -(sb.top + sb.depth));
         y1 = std::max(y1, -sb.top);
     }
-    const double pad = 0.08 * h;
+    pad = 0.08 * h;
     y0 -= pad;
     y1 += pad;
 
-    view v;
     v.mirror = options.mirror;
     v.scale = std::min(max_draw_w / (x1 - x0), max_draw_h / (y1 - y0));
-    const double draw_w = (x1 - x0) * v.scale, draw_h = (y1 - y0) * v.scale;
-    const double margin = 20, header = 64;
-    const double draw_left = options.mirror ? margin + label_column + 30 : margin;
-    const double column_left = options.mirror ? margin : margin + draw_w + 30;
+    draw_w = (x1 - x0) * v.scale, draw_h = (y1 - y0) * v.scale;
+    draw_left = options.mirror ? margin + label_column + 30 : margin;
+    column_left = options.mirror ? margin : margin + draw_w + 30;
     v.ox = options.mirror ? draw_left + x1 * v.scale : draw_left - x0 * v.scale;
     v.oy = header + y1 * v.scale;
-    const double width = margin + draw_w + 30 + label_column + margin;
+    width = margin + draw_w + 30 + label_column + margin;
+}
 
-    std::ostringstream svg;
-    auto poly = [&](const std::vector<point2>& pts, double angle, point2 c, const std::string& style) {
-        svg << "<polygon points=\"";
-        for (const auto& p0 : pts) {
-            const point2 p = angle == 0 ? p0 : turn(p0, c, angle);
-            svg << num(v.X(p.x)) << ',' << num(v.Y(p.y)) << ' ';
-        }
-        svg << "\" " << style << "/>\n";
-    };
-    auto line = [&](point2 a, point2 b, const std::string& style) {
-        svg << "<line x1=\"" << num(v.X(a.x)) << "\" y1=\"" << num(v.Y(a.y)) << "\" x2=\"" << num(v.X(b.x))
-            << "\" y2=\"" << num(v.Y(b.y)) << "\" " << style << "/>\n";
-    };
-    auto circle = [&](point2 c, double r_px, const std::string& style) {
-        svg << "<circle cx=\"" << num(v.X(c.x)) << "\" cy=\"" << num(v.Y(c.y)) << "\" r=\"" << num(r_px) << "\" "
-            << style << "/>\n";
-    };
-
-    std::vector<label> labels;
-    auto add_label = [&](point2 anchor, const std::string& text, const std::string& colour = "#222") {
-        label l;
-        l.ax = v.X(anchor.x);
-        l.ay = v.Y(anchor.y);
-        l.lines = wrap(text, static_cast<std::size_t>((label_column - 10) / char_width));
-        l.colour = colour;
-        labels.push_back(l);
-    };
-
-    // Flange inner faces of the beam, for drawing only.
-    std::vector<std::pair<point2, point2>> flange_lines;
+// Flange inner faces of the beam, for drawing only.
+void detail_sheet::flange_inner_faces()
+{
     if (g.flange_thickness > 0 && d.type != detail_type::custom) {
         const double tf = g.flange_thickness;
         const double top_end = d.cope_top ? -g.gap - d.cope_top->length : -g.gap;
@@ -202,10 +285,11 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
             flange_lines.push_back({{-2 * reach_x, -h + tf}, {-g.gap, -h + tf}});
         else flange_lines.push_back({{-2 * reach_x, -h + tf}, {bottom_end, -h + tf}});
     }
+}
 
-    const double angle = sgn * shown;
-    const std::string turned_colour = fails ? "#c0392b" : "#1f4fbf";
-
+// The notes under the drawing: demand, closure, margin, centre, review.
+void detail_sheet::notes_below()
+{
     std::vector<std::string> notes;
     {
         const std::string sense_name = to_string(sense);
@@ -233,9 +317,13 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
         notes.push_back("Centre of rotation: " + g.centre_basis + ".");
         notes.push_back("For review by a qualified engineer.");
     }
-    std::vector<std::string> note_lines;
     for (const auto& n : notes)
         for (const auto& l : wrap(n, static_cast<std::size_t>((width - 2 * margin) / char_width))) note_lines.push_back(l);
+}
+
+// The hatch of the support and the clip paths of the view and of the beam.
+void detail_sheet::defs()
+{
     svg << "<defs>\n"
         << "<pattern id=\"hatch\" patternUnits=\"userSpaceOnUse\" width=\"7\" height=\"7\" patternTransform=\"rotate(45)\">"
         << "<line x1=\"0\" y1=\"0\" x2=\"0\" y2=\"7\" stroke=\"#666\" stroke-width=\"1\"/></pattern>\n"
@@ -248,6 +336,11 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
             << "\" height=\"" << num(draw_h) << "\"/></clipPath>\n";
     }
     svg << "</defs>\n";
+}
+
+// Title, subtitle and the frame of the view.
+void detail_sheet::heading()
+{
     auto words = [](std::string s) {
         std::replace(s.begin(), s.end(), '-', ' ');
         return s;
@@ -265,7 +358,11 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
         << "</text>\n";
     svg << "<rect x=\"" << num(draw_left) << "\" y=\"" << num(header) << "\" width=\"" << num(draw_w) << "\" height=\""
         << num(draw_h) << "\" fill=\"none\" stroke=\"#ccc\"/>\n";
+}
 
+// The support, the fittings, the beam end at rest and turned.
+void detail_sheet::elevation()
+{
     svg << "<g clip-path=\"url(#view)\">\n";
     // Support.
     poly(g.support.material, 0, centre, "fill=\"url(#hatch)\" stroke=\"#333\" stroke-width=\"1.5\"");
@@ -294,47 +391,52 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
                    "fill=\"none\" stroke=\"" + turned_colour + "\" stroke-width=\"1.2\"");
     }
     svg << "</g>\n</g>\n";
+}
 
-    // Break line where the drawing cuts the beam.
-    {
-        const double xb = v.X(-reach_x);
-        if (d.type != detail_type::custom && xb > draw_left && xb < draw_left + draw_w) {
-            const double ya = v.Y(0) - 8, yb = v.Y(-h) + 8, ym = 0.5 * (ya + yb);
-            svg << "<polyline points=\"" << num(xb) << ',' << num(ya) << ' ' << num(xb) << ',' << num(ym - 6) << ' '
-                << num(xb - 6) << ',' << num(ym - 2) << ' ' << num(xb + 6) << ',' << num(ym + 2) << ' ' << num(xb) << ','
-                << num(ym + 6) << ' ' << num(xb) << ',' << num(yb) << "\" fill=\"none\" stroke=\"#333\"/>\n";
-        }
+// Break line where the drawing cuts the beam.
+void detail_sheet::break_line()
+{
+    const double xb = v.X(-reach_x);
+    if (d.type != detail_type::custom && xb > draw_left && xb < draw_left + draw_w) {
+        const double ya = v.Y(0) - 8, yb = v.Y(-h) + 8, ym = 0.5 * (ya + yb);
+        svg << "<polyline points=\"" << num(xb) << ',' << num(ya) << ' ' << num(xb) << ',' << num(ym - 6) << ' '
+            << num(xb - 6) << ',' << num(ym - 2) << ' ' << num(xb + 6) << ',' << num(ym + 2) << ' ' << num(xb) << ','
+            << num(ym + 6) << ' ' << num(xb) << ',' << num(yb) << "\" fill=\"none\" stroke=\"#333\"/>\n";
     }
+}
 
-    // Gap dimension, at a level where the beam end is free.
-    {
-        double level;
-        double end_x = -g.gap;
-        if (d.type == detail_type::custom) {
-            std::size_t k = 0;
-            for (std::size_t i = 0; i < g.outline.points.size(); ++i)
-                if (g.outline.points[i].x > g.outline.points[k].x) k = i;
-            level = g.outline.points[k].y;
-            end_x = g.outline.points[k].x;
-        } else {
-            const double top_of_end = d.cope_top ? d.cope_top->depth : 0.0;
-            level = -0.5 * (top_of_end + std::max(top_of_end, d.plate_top));
-            if (d.plate_top - top_of_end < 0.02) level = -0.5 * (d.plate_top + d.plate_depth + h);  // below the fitting
-            if (d.cope_bottom && -level > h - d.cope_bottom->depth) level = -(top_of_end + 0.25 * h);
-        }
-        const point2 a{end_x, level}, b{0, level};
-        line(a, b, "stroke=\"#0a7d2c\" stroke-width=\"1.2\"");
-        for (const auto& p : {a, b}) {
-            svg << "<line x1=\"" << num(v.X(p.x)) << "\" y1=\"" << num(v.Y(p.y) - 6) << "\" x2=\"" << num(v.X(p.x))
-                << "\" y2=\"" << num(v.Y(p.y) + 6) << "\" stroke=\"#0a7d2c\" stroke-width=\"1.2\"/>\n";
-        }
-        std::string text = "gap " + len(d.gap) + " as detailed";
-        if (d.gap_tolerance > 0) text += ", " + len(g.gap) + " worst case (tolerance " + len(d.gap_tolerance) + ")";
-        if (d.type == detail_type::end_plate) text += " (the end plate thickness)";
-        add_label({0.5 * (a.x + b.x), level}, text, "#0a7d2c");
+// Gap dimension, at a level where the beam end is free.
+void detail_sheet::gap_dimension()
+{
+    double level;
+    double end_x = -g.gap;
+    if (d.type == detail_type::custom) {
+        std::size_t k = 0;
+        for (std::size_t i = 0; i < g.outline.points.size(); ++i)
+            if (g.outline.points[i].x > g.outline.points[k].x) k = i;
+        level = g.outline.points[k].y;
+        end_x = g.outline.points[k].x;
+    } else {
+        const double top_of_end = d.cope_top ? d.cope_top->depth : 0.0;
+        level = -0.5 * (top_of_end + std::max(top_of_end, d.plate_top));
+        if (d.plate_top - top_of_end < 0.02) level = -0.5 * (d.plate_top + d.plate_depth + h);  // below the fitting
+        if (d.cope_bottom && -level > h - d.cope_bottom->depth) level = -(top_of_end + 0.25 * h);
     }
+    const point2 a{end_x, level}, b{0, level};
+    line(a, b, "stroke=\"#0a7d2c\" stroke-width=\"1.2\"");
+    for (const auto& p : {a, b}) {
+        svg << "<line x1=\"" << num(v.X(p.x)) << "\" y1=\"" << num(v.Y(p.y) - 6) << "\" x2=\"" << num(v.X(p.x))
+            << "\" y2=\"" << num(v.Y(p.y) + 6) << "\" stroke=\"#0a7d2c\" stroke-width=\"1.2\"/>\n";
+    }
+    std::string text = "gap " + len(d.gap) + " as detailed";
+    if (d.gap_tolerance > 0) text += ", " + len(g.gap) + " worst case (tolerance " + len(d.gap_tolerance) + ")";
+    if (d.type == detail_type::end_plate) text += " (the end plate thickness)";
+    add_label({0.5 * (a.x + b.x), level}, text, "#0a7d2c");
+}
 
-    // Centre, contact point and lever arm.
+// Centre, contact point and lever arm.
+void detail_sheet::centre_and_contact()
+{
     circle(centre, 6, "fill=\"white\" stroke=\"#000\" stroke-width=\"1.5\"");
     line({centre.x - 9 / v.scale, centre.y}, {centre.x + 9 / v.scale, centre.y}, "stroke=\"#000\" stroke-width=\"1.2\"");
     line({centre.x, centre.y - 9 / v.scale}, {centre.x, centre.y + 9 / v.scale}, "stroke=\"#000\" stroke-width=\"1.2\"");
@@ -350,14 +452,15 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
     } else {
         add_label(centre, "no contact within pi/2 rad in this sense", "#8e1b1b");
     }
+}
 
-    // What is what.
+// What is what: the support, each fitting, the beam end at rest and turned.
+void detail_sheet::part_labels()
+{
     {
-        const point2 face{0, 0.5 * (y0 + y1)};
         std::string s = "support: " + g.support.description + " (hatched)";
         point2 anchor{0.5 * x1, y1 - 0.3 * pad};
         if (d.support_beam) anchor = {0.5 * d.support_beam->web_thickness, -(d.support_beam->top + 0.5 * d.support_beam->depth)};
-        (void)face;
         add_label(anchor, s);
     }
     for (const auto& f : g.fittings) {
@@ -388,8 +491,11 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
                       turned_colour);
         }
     }
+}
 
-    // Place the labels in the column, in the order of their anchors, apart.
+// Place the labels in the column, in the order of their anchors, apart.
+void detail_sheet::place_labels()
+{
     std::sort(labels.begin(), labels.end(), [](const label& a, const label& b) { return a.ay < b.ay; });
     double next = header;
     for (auto& l : labels) {
@@ -410,6 +516,11 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
             }
         }
     }
+}
+
+// Each label with its leader to its anchor.
+void detail_sheet::write_labels()
+{
     for (const auto& l : labels) {
         const double text_x = options.mirror ? column_left + label_column - 4 : column_left + 4;
         const double edge_x = options.mirror ? column_left + label_column + 2 : column_left - 2;
@@ -422,13 +533,16 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
             svg << "<text x=\"" << num(text_x) << "\" y=\"" << num(ly + i * line_height) << "\" fill=\"" << l.colour
                 << "\"" << (options.mirror ? " text-anchor=\"end\"" : "") << ">" << esc(l.lines[i]) << "</text>\n";
     }
+}
 
-    // Notes and scale bar, below the drawing and the labels.
+// Notes and scale bar, below the drawing and the labels.
+void detail_sheet::notes_and_scale_bar()
+{
     double labels_bottom = header + draw_h;
     for (const auto& l : labels) labels_bottom = std::max(labels_bottom, l.top + l.lines.size() * line_height);
     const double footer_top = labels_bottom + 20;
     const double scale_bar_top = footer_top + note_lines.size() * line_height + 14;
-    const double height = scale_bar_top + 40;
+    height = scale_bar_top + 40;
     for (std::size_t i = 0; i < note_lines.size(); ++i)
         svg << "<text x=\"" << margin << "\" y=\"" << num(footer_top + 12 + i * line_height) << "\""
             << (note_lines[i].rfind("FAILS", 0) == 0 ? " fill=\"#c0392b\" font-weight=\"bold\"" : "") << ">"
@@ -447,7 +561,11 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
             << "</text>\n";
     }
     svg << "</svg>\n";
+}
 
+// The SVG document: its size is known only once everything is placed.
+std::string detail_sheet::document() const
+{
     std::ostringstream out;
     out << "<?xml version=\"1.0\" encoding=\"UTF-8\"?>\n";
     out << "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"" << num(width) << "\" height=\"" << num(height)
@@ -456,6 +574,15 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
     out << "<rect x=\"0\" y=\"0\" width=\"" << num(width) << "\" height=\"" << num(height) << "\" fill=\"white\"/>\n";
     out << svg.str();
     return out.str();
+}
+
+}  // namespace
+
+std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, double rotation_demand,
+                       const detail_drawing_options& options)
+{
+    if (!std::isfinite(rotation_demand)) throw internal_error("detail_svg: the rotation demand is not finite");
+    return detail_sheet(g, d, rotation_demand, options).write();
 }
 
 }  // namespace pinproof

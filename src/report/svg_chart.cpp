@@ -4,6 +4,9 @@
 #include <cmath>
 #include <cstdio>
 #include <sstream>
+#include <string>
+#include <tuple>
+#include <vector>
 
 #include "pinproof/core/errors.hpp"
 
@@ -139,8 +142,67 @@ std::string tick_label(double v)
     else std::snprintf(b, sizeof b, "%.6g", v);
     return b;
 }
+namespace {
 
-std::string to_svg(const line_chart& c)
+// A marker label placed in its row above the plot.
+struct placed {
+    const chart_marker* m;
+    double px;
+    int row;
+};
+
+// One chart being drawn: the axis ranges and the plot area in pixels, worked
+// out first, then each part of the picture written in the order it is drawn.
+class chart_drawing {
+public:
+    explicit chart_drawing(const line_chart& chart) : c(chart) {}
+    std::string write();
+
+private:
+    void axis_ranges();
+    void legend_width();
+    void horizontal_layout();
+    void place_marker_labels();
+    void vertical_layout();
+    void open_document();
+    void bands();
+    void grid_and_axes();
+    void markers();
+    void series();
+    void legend();
+
+    const line_chart& c;
+    double x_lo = 0, x_hi = 0, y_lo = 0, y_hi = 0;  // data ranges of the axes
+    double legend_w = 0;                             // px, and below
+    double left = 0, bottom = 0, right = 0, title_h = 0, plot_w = 0;
+    axis_map X{};
+    std::vector<placed> labels;
+    std::vector<double> row_right;
+    double labels_h = 0, top = 0, height = 0, plot_h = 0;
+    axis_map Y{};
+    std::ostringstream o;
+    std::vector<std::string> colours;
+};
+
+std::string chart_drawing::write()
+{
+    axis_ranges();
+    legend_width();
+    horizontal_layout();
+    place_marker_labels();
+    vertical_layout();
+    open_document();
+    bands();
+    grid_and_axes();
+    markers();
+    series();
+    legend();
+    o << "</svg>\n";
+    return o.str();
+}
+
+// Every value finite, then the range of each axis.
+void chart_drawing::axis_ranges()
 {
     std::vector<double> xs, ys;
     for (const auto& s : c.series)
@@ -155,38 +217,39 @@ std::string to_svg(const line_chart& c)
         check_finite(b.x0);
         check_finite(b.x1);
     }
-    const auto [x_lo, x_hi] = axis_range(c.x, xs);
-    const auto [y_lo, y_hi] = axis_range(c.y, ys);
+    std::tie(x_lo, x_hi) = axis_range(c.x, xs);
+    std::tie(y_lo, y_hi) = axis_range(c.y, ys);
+}
 
-    // Legend: to the right of the plot area.
+// Legend: to the right of the plot area.
+void chart_drawing::legend_width()
+{
     std::vector<std::string> legend_labels;
     for (const auto& s : c.series) legend_labels.push_back(s.label);
     for (const auto& b : c.bands)
         if (!b.label.empty()) legend_labels.push_back(b.label);
-    double legend_w = 0;
     for (const auto& l : legend_labels) legend_w = std::max(legend_w, text_width(l));
     legend_w = legend_labels.empty() ? 0 : legend_w + 50;
+}
 
-    const double left = 78, bottom = 62, right = 20 + legend_w;
-    const double title_h = c.title.empty() ? 12 : 34;
-    const double plot_w = std::max(120.0, c.width - left - right);
-    const axis_map X{x_lo, x_hi, left, left + plot_w, c.x.log};
+void chart_drawing::horizontal_layout()
+{
+    left = 78, bottom = 62, right = 20 + legend_w;
+    title_h = c.title.empty() ? 12 : 34;
+    plot_w = std::max(120.0, c.width - left - right);
+    X = axis_map{x_lo, x_hi, left, left + plot_w, c.x.log};
+}
 
-    // Marker labels in rows above the plot, each in the first row where it
-    // clears its neighbours, so that no two labels overlap.
-    struct placed {
-        const chart_marker* m;
-        double px;
-        int row;
-    };
-    std::vector<placed> labels;
+// Marker labels in rows above the plot, each in the first row where it
+// clears its neighbours, so that no two labels overlap.
+void chart_drawing::place_marker_labels()
+{
     for (const auto& m : c.markers) {
         if (c.x.log && !(m.x > 0)) continue;
         if (m.x < x_lo || m.x > x_hi) continue;
         labels.push_back({&m, X(m.x), 0});
     }
     std::sort(labels.begin(), labels.end(), [](const placed& a, const placed& b) { return a.px < b.px; });
-    std::vector<double> row_right;
     for (auto& l : labels) {
         const double w = text_width(l.m->label);
         double x0 = l.px - w / 2;
@@ -197,13 +260,19 @@ std::string to_svg(const line_chart& c)
         row_right[row] = x0 + w;
         l.row = row;
     }
-    const double labels_h = row_right.size() * row_height + (row_right.empty() ? 0 : 8);
-    const double top = title_h + labels_h + 6;
-    const double height = std::max(c.height, top + bottom + 200);
-    const double plot_h = height - top - bottom;
-    const axis_map Y{y_lo, y_hi, top + plot_h, top, c.y.log};
+}
 
-    std::ostringstream o;
+void chart_drawing::vertical_layout()
+{
+    labels_h = row_right.size() * row_height + (row_right.empty() ? 0 : 8);
+    top = title_h + labels_h + 6;
+    height = std::max(c.height, top + bottom + 200);
+    plot_h = height - top - bottom;
+    Y = axis_map{y_lo, y_hi, top + plot_h, top, c.y.log};
+}
+
+void chart_drawing::open_document()
+{
     o << "<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"" << num(c.width) << "\" height=\"" << num(height)
       << "\" viewBox=\"0 0 " << num(c.width) << " " << num(height) << "\" font-family=\"sans-serif\" font-size=\""
       << font << "\">\n";
@@ -213,8 +282,11 @@ std::string to_svg(const line_chart& c)
     if (!c.title.empty())
         o << "<text x=\"" << num(c.width / 2) << "\" y=\"22\" text-anchor=\"middle\" font-size=\"15\" font-weight=\"bold\">"
           << escape(c.title) << "</text>\n";
+}
 
-    // Bands first, under everything.
+// Bands first, under everything.
+void chart_drawing::bands()
+{
     for (const auto& b : c.bands) {
         double a0 = std::clamp(std::min(b.x0, b.x1), x_lo, x_hi), a1 = std::clamp(std::max(b.x0, b.x1), x_lo, x_hi);
         if (c.x.log && !(a0 > 0)) a0 = x_lo;
@@ -222,7 +294,11 @@ std::string to_svg(const line_chart& c)
           << "\" height=\"" << num(plot_h) << "\" fill=\"" << escape(b.colour) << "\" fill-opacity=\"" << b.opacity
           << "\"/>\n";
     }
-    // Grid and ticks.
+}
+
+// Grid and ticks, the frame of the plot and the axis labels.
+void chart_drawing::grid_and_axes()
+{
     for (double t : nice_ticks(x_lo, x_hi, c.x.log)) {
         const double px = X(t);
         o << "<line x1=\"" << num(px) << "\" y1=\"" << num(top) << "\" x2=\"" << num(px) << "\" y2=\""
@@ -243,8 +319,11 @@ std::string to_svg(const line_chart& c)
       << "\" text-anchor=\"middle\" font-size=\"13\">" << escape(c.x.label) << "</text>\n";
     o << "<text transform=\"translate(20 " << num(top + plot_h / 2) << ") rotate(-90)\" text-anchor=\"middle\" "
       << "font-size=\"13\">" << escape(c.y.label) << "</text>\n";
+}
 
-    // Markers: a line through the plot and a leader up to its label row.
+// Markers: a line through the plot and a leader up to its label row.
+void chart_drawing::markers()
+{
     for (const auto& l : labels) {
         const double ly = title_h + (l.row + 1) * row_height;
         o << "<line x1=\"" << num(l.px) << "\" y1=\"" << num(top) << "\" x2=\"" << num(l.px) << "\" y2=\""
@@ -262,11 +341,13 @@ std::string to_svg(const line_chart& c)
           << escape(l.m->colour) << "\" font-size=\"11\" stroke=\"white\" stroke-width=\"4\" paint-order=\"stroke\">"
           << escape(l.m->label) << "</text>\n";
     }
+}
 
-    // Series, clipped to the plot area.
+// Series, clipped to the plot area.
+void chart_drawing::series()
+{
     o << "<g clip-path=\"url(#plot-area)\" fill=\"none\" stroke-width=\"2\">\n";
     std::size_t colour_index = 0;
-    std::vector<std::string> colours;
     for (const auto& s : c.series) {
         const std::string col = s.colour.empty() ? palette[colour_index++ % 10] : s.colour;
         colours.push_back(col);
@@ -288,8 +369,10 @@ std::string to_svg(const line_chart& c)
           << "/>\n";
     }
     o << "</g>\n";
+}
 
-    // Legend.
+void chart_drawing::legend()
+{
     double ly = top + 8;
     const double lx = left + plot_w + 18;
     for (std::size_t i = 0; i < c.series.size(); ++i) {
@@ -310,8 +393,10 @@ std::string to_svg(const line_chart& c)
           << escape(b.colour) << "\" fill-opacity=\"" << std::max(b.opacity, 0.25) << "\"/>\n";
         o << "<text x=\"" << num(lx + 38) << "\" y=\"" << num(ly) << "\">" << escape(b.label) << "</text>\n";
     }
-    o << "</svg>\n";
-    return o.str();
 }
+
+}  // namespace
+
+std::string to_svg(const line_chart& c) { return chart_drawing(c).write(); }
 
 }  // namespace pinproof
