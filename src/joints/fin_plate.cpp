@@ -188,3 +188,105 @@ fin_plate_joint derive_fin_plate(const connection_detail& d, const section& beam
 }
 
 }  // namespace pinproof
+
+namespace pinproof {
+namespace {
+
+constexpr double inch = 0.0254;
+
+// J3.10(a)(i) with phi = 0.75: the smaller of the vertical and horizontal
+// clear distances of the worst bolt.
+double aisc_bearing(double d, double thickness, double Fu, double clear_vertical, double clear_horizontal)
+{
+    return aisc_bolt_bearing_strength(d, std::min(clear_vertical, clear_horizontal), thickness, Fu);
+}
+
+}  // namespace
+
+single_plate_joint derive_single_plate(const connection_detail& d, const section& beam, const single_plate_inputs& in)
+{
+    if (d.type != detail_type::fin_plate) throw std::invalid_argument("the detail is not a single plate (fin plate)");
+    if (!is_us_grade(in.bolts))
+        throw std::invalid_argument("AISC 360 single-plate strengths take ASTM bolt grades (A325, A490)");
+    if (!beam.web_thickness) throw std::invalid_argument("the beam's web thickness is needed for bearing on the web");
+    fin_plate_inputs en_like;
+    en_like.plate_edge_distance = in.plate_edge_distance.value_or(1.5 * d.bolts.diameter);
+    const geometry g = geometry_of(d, en_like);
+    const double Fy_p = in.plate_steel.fy(g.tp);
+    const auto Fu_p_opt = in.plate_steel.fu(g.tp);
+    const double tw = *beam.web_thickness;
+    const double Fy_w = in.beam_steel.fy(tw);
+    const auto Fu_w_opt = in.beam_steel.fu(tw);
+    if (!Fu_p_opt || !Fu_w_opt) throw std::invalid_argument("the tensile strengths of the plate and the beam are needed");
+    const double Fu_p = *Fu_p_opt, Fu_w = *Fu_w_opt;
+    const double dh = g.d0;
+
+    const bolt_group group(bolt_pattern(g.n, g.p1));
+    single_plate_joint out;
+    out.lever_arm = g.z;
+    out.plate_edge_distance = g.e2;
+    out.plate_edge_distance_default = !in.plate_edge_distance;
+
+    const double rv = aisc_bolt_shear_strength(in.bolts, g.d, in.threads_in_shear_plane);
+    // Plate: the bolts bear down towards its bottom edge, or along to its free edge.
+    const double rb_p = aisc_bearing(g.d, g.tp, Fu_p, std::min(g.e1_bottom - 0.5 * dh, g.p1 - dh), g.e2 - 0.5 * dh);
+    // Web: up towards a top cope (else only the next hole), or along to the beam end.
+    double web_vertical = g.p1 - dh;
+    if (g.web_e1) web_vertical = std::min(web_vertical, *g.web_e1 - 0.5 * dh);
+    const double rb_w = aisc_bearing(g.d, tw, Fu_w, web_vertical, g.bolt_line - 0.5 * dh);
+
+    auto& c = out.components;
+    c.push_back({"bolt-shear", group.shear_resistance(rv, g.z), rv, std::nullopt,
+                 "AISC 360-16 J3.6, Table J3.2; elastic bolt group with the eccentricity z"});
+    c.push_back({"bolt-bearing-plate", group.shear_resistance(rb_p, g.z), rb_p, std::nullopt,
+                 "AISC 360-16 J3.10(a)(i), bearing and tear-out"});
+    c.push_back({"bolt-bearing-web", group.shear_resistance(rb_w, g.z), rb_w, std::nullopt,
+                 "AISC 360-16 J3.10(a)(i), bearing and tear-out"});
+    const double Agv = g.hp * g.tp, Anv = (g.hp - g.n * dh) * g.tp;
+    c.push_back({"plate-shear", std::min(1.00 * 0.6 * Fy_p * Agv, 0.75 * 0.6 * Fu_p * Anv), std::nullopt,
+                 std::nullopt, "AISC 360-16 J4.2, shear yielding and shear rupture"});
+    // Block shear: the block below the top bolt, between the bolt line and the free edge.
+    const double Agv_b = (g.hp - g.e1_top) * g.tp, Anv_b = (g.hp - g.e1_top - (g.n - 0.5) * dh) * g.tp;
+    const double Ant_b = (g.e2 - 0.5 * dh) * g.tp;
+    c.push_back({"plate-block-tearing", 0.75 * std::min(0.6 * Fu_p * Anv_b + Fu_p * Ant_b, 0.6 * Fy_p * Agv_b + Fu_p * Ant_b),
+                 std::nullopt, std::nullopt, "AISC 360-16 J4.3, U_bs = 1"});
+    c.push_back({"plate-bending", 0.90 * Fy_p * g.tp * g.hp * g.hp / 4 / g.z, std::nullopt, std::nullopt,
+                 "flexural yielding of the plate at the bolt line, 0.90 F_y Z (from memory)"});
+    if (in.weld_leg) {
+        const double per_length = 0.75 * 0.6 * in.weld_strength * (*in.weld_leg / std::sqrt(2.0));
+        const double per_unit_V = std::hypot(1 / (2 * g.hp), g.z * 3 / (g.hp * g.hp));
+        c.push_back({"weld", per_length / per_unit_V, std::nullopt, std::nullopt,
+                     "AISC 360-16 J2.4, E70 fillets on both sides; the shear taken at the bolt line"});
+    } else {
+        c.push_back({"weld", std::nullopt, std::nullopt, std::nullopt, "not derived: no weld size given"});
+    }
+    c.push_back({"web-shear", 1.00 * 0.6 * Fy_w * beam.depth * tw, std::nullopt, std::nullopt,
+                 "AISC 360-16 G2.1, C_v1 = 1"});
+
+    out.shear_resistance = 1e300;
+    for (const joint_component& k : c)
+        if (k.resistance && *k.resistance < out.shear_resistance) {
+            out.shear_resistance = *k.resistance;
+            out.governing = k.id;
+        }
+    const double F_min = std::min({rv, rb_p, rb_w});
+    out.moment_resistance = group.moment_resistance(F_min);
+    out.moment_governing = F_min == rv ? "bolt-shear" : (F_min == rb_p ? "bolt-bearing-plate" : "bolt-bearing-web");
+    out.free_rotation = group.free_rotation(g.d0 - g.d);
+    // No published component stiffness is used for US joints: the initial
+    // stiffness stays the user's (0 here means not derived).
+    out.initial_stiffness = 0;
+
+    // The conventional configuration (AISC Manual Part 10; reference pack 10.3).
+    const double t_max = 0.5 * g.d + inch / 16;
+    if (g.n < 2 || g.n > 12) out.limits_exceeded.push_back("the conventional configuration has 2 to 12 bolt rows");
+    if (g.z > 3.5 * inch + 1e-9)
+        out.limits_exceeded.push_back("the bolt line is more than 3 1/2 in from the weld line (support face)");
+    if (g.tp > t_max + 1e-9) out.limits_exceeded.push_back("the plate is thicker than d/2 + 1/16 in");
+    if (tw > t_max + 1e-9) out.limits_exceeded.push_back("the beam web is thicker than d/2 + 1/16 in");
+    if (in.weld_leg && *in.weld_leg < 0.625 * g.tp - 1e-9)
+        out.limits_exceeded.push_back("the fillet welds are smaller than 5/8 of the plate thickness");
+    return out;
+}
+
+}  // namespace pinproof

@@ -165,3 +165,67 @@ TEST_CASE("a bolt outside the plate or a US bolt grade is refused [project rules
     us.bolts = bolt_grade::a325;
     CHECK_THROWS_AS(derive_fin_plate(mezzanine_fin_plate(), ipe300(), us), std::invalid_argument);
 }
+
+// ---------------------------------------------------------------------------
+// US single plate (AISC 360-16): an invented W16x31 detail, 3 bolts 3/4 in A325-N
+// at 3 in, 3/8 in A36 plate 9 in deep, first bolt 1.5 in, bolt line 2 in, gap 1/2 in,
+// standard holes 13/16 in. Each strength worked by hand from the clause
+// (AISC 360-16 J3.6, J3.10, J4.2, J4.3, G2.1; from memory) in the test.
+
+namespace {
+constexpr double in_ = 0.0254, ksi = 6.894757293168361e6, kip = 4448.2216152605;
+
+connection_detail us_single_plate()
+{
+    connection_detail d;
+    d.type = detail_type::fin_plate;
+    d.gap = 0.5 * in_;
+    d.plate_top = 2 * in_;
+    d.plate_depth = 9 * in_;
+    d.plate_thickness = 0.375 * in_;
+    d.bolts.diameter = 0.75 * in_;
+    d.bolts.hole_diameter = 0.8125 * in_;
+    d.bolts.rows = 3;
+    d.bolts.pitch = 3 * in_;
+    d.bolts.first_bolt = 1.5 * in_;
+    d.bolts.bolt_line = 2 * in_;
+    return d;
+}
+
+const joint_component& of_us(const single_plate_joint& j, const std::string& id)
+{
+    for (const auto& c : j.components)
+        if (c.id == id) return c;
+    throw std::runtime_error("no component " + id);
+}
+}  // namespace
+
+TEST_CASE("US single plate [J3.6] [J3.10] [hand]: bolt 17.9 kips - bearing on the plate 0.75 x 1.2 x 1.0938 x 0.375 x 58 kips - tol 1e-9")
+{
+    single_plate_inputs in;
+    in.weld_leg = 0.25 * in_;
+    const single_plate_joint j = derive_single_plate(us_single_plate(), *find_catalogue_section("W16x31"), in);
+    CHECK(std::abs(*of_us(j, "bolt-shear").per_bolt - 0.75 * 54 * ksi * M_PI * 0.75 * 0.75 / 4 * in_ * in_) <= 1e-6);
+    // Plate, edge distance 1.5 d = 1.125 in: horizontal l_c = 1.125 - 0.40625 = 0.71875 in governs
+    // over the bottom end (9 - 1.5 - 6 = 1.5 in, l_c = 1.09375 in) and the pitch (3 - 0.8125 in).
+    const double rb = 0.75 * 1.2 * 0.71875 * 0.375 * 58 * kip;
+    CHECK(std::abs(*of_us(j, "bolt-bearing-plate").per_bolt / rb - 1) <= 1e-9);
+    // Shear yielding 0.6 * 36 * 9 * 0.375 = 72.9 kips; rupture 0.75 * 0.6 * 58 * (9 - 3 * 0.8125) * 0.375 = 64.3 kips.
+    CHECK(std::abs(*of_us(j, "plate-shear").resistance / (0.75 * 0.6 * 58 * (9 - 3 * 0.8125) * 0.375 * kip) - 1) <= 1e-9);
+    // z = 2.5 in is within 3 1/2 in; 3/8 in <= 3/8 + 1/16 in; the 1/4 in weld >= 5/8 x 3/8 = 0.234 in.
+    CHECK(j.limits_exceeded.empty());
+}
+
+TEST_CASE("US single plate [reference pack 10.3]: the conventional limits are reported - EN bolts refused")
+{
+    connection_detail d = us_single_plate();
+    d.plate_thickness = 0.5 * in_;  // > 3/8 + 1/16 in
+    d.bolts.bolt_line = 3.5 * in_;  // z = 4 in > 3 1/2 in
+    single_plate_inputs in;
+    in.weld_leg = 0.25 * in_;       // < 5/8 x 1/2 in
+    const single_plate_joint j = derive_single_plate(d, *find_catalogue_section("W16x31"), in);
+    CHECK(j.limits_exceeded.size() == 3);
+    in.bolts = bolt_grade::g8_8;
+    CHECK_THROWS_AS(derive_single_plate(us_single_plate(), *find_catalogue_section("W16x31"), in),
+                    std::invalid_argument);
+}

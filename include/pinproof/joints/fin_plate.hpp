@@ -79,4 +79,38 @@ struct fin_plate_joint {
 // outside the plate.
 fin_plate_joint derive_fin_plate(const connection_detail& d, const section& beam, const fin_plate_inputs& in);
 
+// The same joint under AISC 360-16 (LRFD design strengths, phi included), for
+// US projects: a single-plate shear connection with one vertical row of bolts.
+// Components (AISC 360-16; from memory unless the reference pack confirms):
+//   bolt-shear          J3.6, Table J3.2, the bolt group by the elastic method
+//                       with the full distance z from the support face (on the
+//                       safe side of the Manual's instantaneous-centre coefficients)
+//   bolt-bearing-plate  J3.10(a)(i): 0.75 min(1.2 l_c t F_u, 2.4 d t F_u) per bolt, the
+//   bolt-bearing-web    smaller of the vertical and horizontal clear distances
+//   plate-shear         J4.2: shear yielding 1.00 * 0.6 F_y A_gv, rupture 0.75 * 0.6 F_u A_nv
+//   plate-block-tearing J4.3: 0.75 (0.6 F_u A_nv + U_bs F_u A_nt) <= 0.75 (0.6 F_y A_gv +
+//                       U_bs F_u A_nt), U_bs = 1
+//   plate-bending       F1 / the Manual's single-plate flexure: 0.90 F_y Z / z, Z = t h^2/4
+//   weld                J2.4: two fillets, 0.75 * 0.6 F_EXX (70 ksi) on the throat, under V and V z
+//   web-shear           G2.1: 1.00 * 0.6 F_y d t_w (C_v1 = 1 for rolled I shapes of ordinary webs)
+// The conventional configuration's dimensional limits (2 to 12 rows, bolt line
+// within 3 1/2 in of the weld, plate and web no thicker than d/2 + 1/16 in, the
+// weld 5/8 of the plate's thickness; reference pack 10.3) are reported in
+// `limits_exceeded`, one sentence each.
+struct single_plate_inputs {
+    bolt_grade bolts = bolt_grade::a325;
+    bool threads_in_shear_plane = true;
+    std::optional<double> plate_edge_distance;  // m, bolt line to the plate's free edge; default 1.5 d
+    std::optional<double> weld_leg;             // m, each side; nullopt: not derived
+    steel_material plate_steel{steel_grade::a36};
+    steel_material beam_steel{steel_grade::a992};
+    double weld_strength = 70 * 6.894757293168361e6;  // F_EXX, Pa (E70 electrodes)
+};
+
+struct single_plate_joint : fin_plate_joint {
+    std::vector<std::string> limits_exceeded;
+};
+
+single_plate_joint derive_single_plate(const connection_detail& d, const section& beam, const single_plate_inputs& in);
+
 }  // namespace pinproof
