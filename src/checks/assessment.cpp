@@ -6,6 +6,8 @@
 
 #include "pinproof/core/errors.hpp"
 #include "pinproof/model/result_fields.hpp"
+#include "pinproof/joints/joint_law.hpp"
+#include "pinproof/checks/joint_strength.hpp"
 
 namespace pinproof {
 
@@ -77,6 +79,40 @@ double fixity(stiffness s, double EI, double span)
     return k / (k + 3.0);
 }
 
+bool has_law(const beam& b) { return b.start.behaviour || b.end.behaviour; }
+
+// One end of the beam for the nonlinear analysis: its law at stiffness s, a
+// linear spring, or rigid.
+// A sweep or a threshold search takes a law's stiffness to its limits: at zero
+// the joint is a pin, rigid it is rigid up to its moment resistance.
+nonlinear_end end_for_joint(const joint& j, stiffness s)
+{
+    if (s.is_rigid()) return j.behaviour ? nonlinear_end::rigid(j.moment_resistance) : nonlinear_end::rigid();
+    if (j.behaviour && (s.value() > 0 || j.behaviour->law == joint_law_kind::multilinear))
+        return nonlinear_end::following(joint_law::from(*j.behaviour, s.value(), j.moment_resistance));
+    return nonlinear_end::following(joint_law::linear(s.value()));
+}
+
+// The nonlinear state, or a refusal naming the beam and the combination: never a number that was not found.
+nonlinear_solution solve_with_laws(const beam_model& model, const beam& b, const combination& c, stiffness s,
+                                   stiffness e, double load_factor = 1.0)
+{
+    try {
+        return solve_nonlinear(model, end_for_joint(b.start, s), end_for_joint(b.end, e), load_factor);
+    } catch (const nonlinear_failure& f) {
+        throw input_error(b.pointer + "/joints",
+                          std::string("no state of the beam with its joints' moment-rotation laws could be found "
+                                      "under combination ") + c.name + ": " + f.what());
+    }
+}
+
+// The state at a pair of stiffnesses: the linear engine, or the joints' laws where given.
+beam_state solve_state(const beam_model& model, const beam& b, const combination& c, stiffness s, stiffness e)
+{
+    if (!has_law(b)) return model.solve(s, e);
+    return solve_with_laws(model, b, c, s, e).state;
+}
+
 combination_result analyse_combination(const beam& b, const combination& c, bool search_interior)
 {
     combination_result out;
@@ -86,8 +122,19 @@ combination_result analyse_combination(const beam& b, const combination& c, bool
     out.fixed = model.solve(stiffness::rigid(), stiffness::rigid());
     const auto& rs = b.start.range;
     const auto& re = b.end.range;
-    out.corners = {model.solve(rs.min, re.min), model.solve(rs.min, re.max), model.solve(rs.max, re.min),
-                   model.solve(rs.max, re.max)};
+    const auto solve = [&](stiffness s, stiffness e) { return solve_state(model, b, c, s, e); };
+    out.corners = {solve(rs.min, re.min), solve(rs.min, re.max), solve(rs.max, re.min), solve(rs.max, re.max)};
+    if (c.use == limit_state::strength) {
+        if (const auto Mpl = b.plastic_moment()) {
+            try {
+                out.collapse = beam_collapse(model, end_for_joint(b.start, rs.min), end_for_joint(b.end, re.min), *Mpl);
+            } catch (const nonlinear_failure& f) {
+                throw input_error(b.pointer + "/joints",
+                                  "the collapse of the beam with its joints could not be followed under combination " +
+                                      c.name + ": " + f.what());
+            }
+        }
+    }
     bool first = true;
     for (const auto& s : out.corners) {
         include(out.envelope, s, first);
@@ -110,8 +157,8 @@ combination_result analyse_combination(const beam& b, const combination& c, bool
             for (int j = 0; j < n; ++j) {
                 const double fs = r0s + (r1s - r0s) * i / (n - 1.0);
                 const double fe = r0e + (r1e - r0e) * j / (n - 1.0);
-                const beam_state s = model.solve(i == 0 ? rs.min : i == n - 1 ? rs.max : from_fixity(fs, EI, b.span),
-                                                 j == 0 ? re.min : j == n - 1 ? re.max : from_fixity(fe, EI, b.span));
+                const beam_state s = solve(i == 0 ? rs.min : i == n - 1 ? rs.max : from_fixity(fs, EI, b.span),
+                                           j == 0 ? re.min : j == n - 1 ? re.max : from_fixity(fe, EI, b.span));
                 const auto& f = result_fields();
                 for (std::size_t k = 0; k < f.size(); ++k) {
                     const bool searched = f[k].member == &beam_state::max_sagging_moment ||
@@ -195,8 +242,10 @@ struct governing {
     bool found = false;
 };
 
-check joint_moment_check(const project& p, const beam& b, const std::vector<combination_result>& combos, beam_end e)
+check joint_moment_check(const project& p, const beam& b, const std::vector<combination_result>& combos, beam_end e,
+                         const joint_assessment& ja)
 {
+    if (b.at(e).behaviour) return joint_moment_law_check(p, b, ja);
     const formatter fmt{p.units};
     check c;
     c.id = "joint-moment-" + to_string(e);
@@ -557,7 +606,14 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     a.end = assess_joint(p, b, beam_end::end);
     a.checks.reserve(32);
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(stiffness_class_check(p, a.joint_at(e)));
-    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(joint_moment_check(p, b, a.combinations, e));
+    a.plastic_moment = b.plastic_moment();
+    for (beam_end e : {beam_end::start, beam_end::end})
+        if (b.at(e).behaviour) (e == beam_end::start ? a.start : a.end).law = law_response_of(b, a.combinations, e);
+    for (beam_end e : {beam_end::start, beam_end::end})
+        a.checks.push_back(joint_moment_check(p, b, a.combinations, e, a.joint_at(e)));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(strength_class_check(p, b, e));
+    for (beam_end e : {beam_end::start, beam_end::end})
+        a.checks.push_back(joint_ductility_check(p, b, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));
@@ -578,6 +634,8 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
                           "every storey; otherwise joints are semi-rigid (5.2.2.5(1)).");
     return a;
 }
+
+nonlinear_end end_for(const joint& j, stiffness s) { return end_for_joint(j, s); }
 
 project_assessment assess_project(const project& p, const assessment_options& options)
 {

@@ -13,6 +13,7 @@
 #include "pinproof/io/detail_catalogue.hpp"
 #include "pinproof/model/stiffness_distribution.hpp"
 #include "pinproof/io/project_input.hpp"
+#include "pinproof/io/joint_behaviour_input.hpp"
 #include "pinproof/io/stiffness_distribution_input.hpp"
 #include "pinproof/io/connection_detail_input.hpp"
 
@@ -197,7 +198,7 @@ struct reader {
     }
 
     std::optional<joint> read_joint(const json& j, const std::string& ptr, std::optional<double> EI_over_L,
-                                    const std::optional<section>& sec)
+                                    const std::optional<section>& sec, design_standard standard)
     {
         if (j.is_string()) {
             problems.add(ptr, "expected an inline joint object, found the detail id \"" + j.get<std::string>() +
@@ -208,18 +209,35 @@ struct reader {
         if (!expect_object(j, ptr, problems)) return std::nullopt;
         reject_unknown_keys(j, ptr, {"stiffness", "stiffness_distribution", "moment_resistance", "description", "detail",
                                      "support_rotation",
-                                     "contact_stiffness", "designed_for_closure"},
+                                     "contact_stiffness", "designed_for_closure", "behaviour", "rotation_capacity"},
                             problems);
         joint out;
         const std::string sp = child(ptr, "stiffness");
         auto it = j.find("stiffness");
         bool ok = true;
+        if (j.contains("behaviour"))
+            out.behaviour = read_joint_behaviour(j.at("behaviour"), child(ptr, "behaviour"), standard, problems, &system);
+        // A multilinear curve gives the stiffness itself (also when the curve has a mistake, reported already).
+        const auto* bh = j.contains("behaviour") && j.at("behaviour").is_object() ? &j.at("behaviour") : nullptr;
+        const bool curve_gives_stiffness = bh && bh->contains("law") && bh->at("law") == "multilinear";
         std::optional<stiffness_distribution> dist;
         if (j.contains("stiffness_distribution"))
             dist = read_stiffness_distribution(j.at("stiffness_distribution"), child(ptr, "stiffness_distribution"),
                                                EI_over_L.value_or(0.0), problems);
         out.distribution = dist;
-        if (it == j.end() && dist) {
+        if (curve_gives_stiffness) {
+            // A multilinear curve is the joint's stiffness itself: the slope of its first segment.
+            if (it != j.end()) {
+                problems.add(sp, "expected no \"stiffness\" with a multilinear law (the curve gives the stiffness: "
+                                 "the slope of its first segment), found " + shown(*it));
+                ok = false;
+            } else if (!out.behaviour) {
+                ok = false;
+            } else {
+                const auto& first = out.behaviour->points.front();
+                out.range = {stiffness::spring(first.second / first.first), stiffness::spring(first.second / first.first)};
+            }
+        } else if (it == j.end() && dist) {
             // Only a distribution: the range is its 5 % to 95 % fractiles.
             const auto f = dist->fractile_range();
             out.range = {stiffness::spring(f.p05), stiffness::spring(f.p95)};
@@ -270,8 +288,44 @@ struct reader {
             if (cs) out.contact_stiffness = *cs;
         }
         out.designed_for_closure = bool_field(j, ptr, "designed_for_closure", false, problems).value_or(false);
+        if (auto rc = q(j, ptr, "rotation_capacity", dims::angle, false)) {
+            if (!(*rc > 0) || *rc > 0.5)
+                problems.add(child(ptr, "rotation_capacity"), "expected a rotation capacity above 0 and at most 0.5 rad, "
+                                                              "found " + shown(j.at("rotation_capacity")));
+            else out.rotation_capacity = *rc;
+        }
+        if (out.behaviour && ok) check_behaviour_fits(out, ptr);
         if (!ok) return std::nullopt;
         return out;
+    }
+
+    // The law and the rest of the joint must agree: a law that needs the
+    // moment resistance has one, the stiffness range is finite and, where the
+    // law needs it, above zero.
+    void check_behaviour_fits(const joint& out, const std::string& ptr)
+    {
+        const joint_behaviour& b = *out.behaviour;
+        const std::string bp = child(ptr, "behaviour");
+        if (b.law == joint_law_kind::ec3_curve && !out.moment_resistance)
+            problems.add(child(bp, "law"), "expected a \"moment_resistance\" on the joint with the ec3-curve law (EN "
+                                           "1993-1-8 6.3.1(6) defines it up to M_j,Rd), found none");
+        if (out.range.min.is_rigid() || out.range.max.is_rigid()) {
+            problems.add(child(ptr, "stiffness"), "expected a finite stiffness with a behaviour (a law starts from "
+                                                  "S_j,ini), found \"rigid\"");
+            return;
+        }
+        const bool needs_positive = b.law == joint_law_kind::ec3_curve || b.law == joint_law_kind::power ||
+                                    b.law == joint_law_kind::richard_abbott;
+        if (needs_positive && !(out.range.min.value() > 0))
+            problems.add(child(ptr, "stiffness"), "expected an initial stiffness above zero for the " + to_string(b.law) +
+                                                  " law, found a lower bound of zero (a pin)");
+        if (b.law == joint_law_kind::richard_abbott && !(b.plastic_stiffness < out.range.min.value()))
+            problems.add(child(bp, "plastic_stiffness"), "expected a plastic stiffness below the joint's lower-bound "
+                                                         "initial stiffness " +
+                                                             format_quantity(out.range.min.value(),
+                                                                             dims::rotational_stiffness, system) +
+                                                             ", found " + format_quantity(b.plastic_stiffness,
+                                                                                          dims::rotational_stiffness, system));
     }
 
     std::vector<load> read_loads(const json& b, const std::string& ptr, std::optional<double> span)
@@ -465,7 +519,7 @@ struct reader {
     {
         if (!expect_object(b, ptr, problems)) return std::nullopt;
         reject_unknown_keys(b, ptr, {"id", "description", "span", "E", "section", "loads", "combinations", "joints",
-                                     "limits", "stiffness_correlation"},
+                                     "limits", "stiffness_correlation", "steel"},
                             problems);
         beam out;
         out.pointer = ptr;
@@ -503,7 +557,7 @@ struct reader {
                     problems.add(child(jp, e), std::string("missing required field \"") + e + "\"");
                     continue;
                 }
-                (std::string(e) == "start" ? js : je) = read_joint(jit->at(e), child(jp, e), EI_over_L, sec);
+                (std::string(e) == "start" ? js : je) = read_joint(jit->at(e), child(jp, e), EI_over_L, sec, standard);
             }
         }
         auto lim = b.find("limits");
@@ -512,6 +566,7 @@ struct reader {
             out.deflection = read_deflection_limit(*lim, child(ptr, "limits"));
         }
         out.stiffness_correlation = read_stiffness_correlation(b, ptr, problems).value_or(1);
+        if (b.contains("steel")) out.steel = read_steel(b.at("steel"), child(ptr, "steel"), standard, problems, &system);
         if (!id || !span || !E || !sec || !js || !je) return std::nullopt;
         out.id = *id;
         out.span = *span;

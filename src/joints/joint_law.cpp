@@ -22,69 +22,6 @@ void require_cap(const std::optional<double>& cap)
 
 }  // namespace
 
-std::string to_string(joint_law_kind k)
-{
-    switch (k) {
-    case joint_law_kind::linear: return "linear";
-    case joint_law_kind::ec3_curve: return "ec3-curve";
-    case joint_law_kind::ec3_eta: return "ec3-eta";
-    case joint_law_kind::power: return "power";
-    case joint_law_kind::richard_abbott: return "richard-abbott";
-    case joint_law_kind::multilinear: return "multilinear";
-    }
-    return "linear";
-}
-
-std::optional<joint_law_kind> parse_joint_law_kind(std::string_view text)
-{
-    for (auto k : {joint_law_kind::linear, joint_law_kind::ec3_curve, joint_law_kind::ec3_eta, joint_law_kind::power,
-                   joint_law_kind::richard_abbott, joint_law_kind::multilinear})
-        if (text == to_string(k)) return k;
-    return std::nullopt;
-}
-
-std::string to_string(ec3_joint_type t)
-{
-    switch (t) {
-    case ec3_joint_type::welded: return "welded";
-    case ec3_joint_type::bolted_end_plate: return "bolted-end-plate";
-    case ec3_joint_type::bolted_flange_cleats: return "bolted-flange-cleats";
-    }
-    return "welded";
-}
-
-std::string to_string(ec3_joint_location l)
-{
-    return l == ec3_joint_location::beam_to_column ? "beam-to-column" : "beam-to-beam";
-}
-
-std::optional<ec3_joint_type> parse_ec3_joint_type(std::string_view text)
-{
-    for (auto t : {ec3_joint_type::welded, ec3_joint_type::bolted_end_plate, ec3_joint_type::bolted_flange_cleats})
-        if (text == to_string(t)) return t;
-    return std::nullopt;
-}
-
-std::optional<ec3_joint_location> parse_ec3_joint_location(std::string_view text)
-{
-    for (auto l : {ec3_joint_location::beam_to_column, ec3_joint_location::beam_to_beam})
-        if (text == to_string(l)) return l;
-    return std::nullopt;
-}
-
-double ec3_psi(ec3_joint_type t)
-{
-    // EN 1993-1-8 Table 6.8.
-    return t == ec3_joint_type::bolted_flange_cleats ? 3.1 : 2.7;
-}
-
-double ec3_eta(ec3_joint_type t, ec3_joint_location l)
-{
-    // EN 1993-1-8 Table 5.2 (from memory, reference pack 2.1).
-    if (l == ec3_joint_location::beam_to_column) return 2.0;
-    return t == ec3_joint_type::bolted_flange_cleats ? 3.5 : 3.0;
-}
-
 joint_law joint_law::linear(double initial_stiffness, std::optional<double> moment_resistance)
 {
     require(non_negative(initial_stiffness), "the stiffness must be finite and >= 0");
@@ -338,6 +275,26 @@ joint_law joint_law::with_initial_stiffness(double s) const
     if (kind_ == joint_law_kind::multilinear)
         for (law_point& p : j.points_) p.rotation /= f;
     return j;
+}
+
+joint_law joint_law::from(const joint_behaviour& b, double initial_stiffness, std::optional<double> moment_resistance)
+{
+    switch (b.law) {
+    case joint_law_kind::linear: return linear(initial_stiffness, moment_resistance);
+    case joint_law_kind::ec3_curve:
+        if (!moment_resistance) throw std::invalid_argument("the ec3-curve law needs the moment resistance");
+        return ec3_curve(initial_stiffness, *moment_resistance, b.psi);
+    case joint_law_kind::ec3_eta: return ec3_eta(initial_stiffness, b.eta, moment_resistance);
+    case joint_law_kind::power: return power(initial_stiffness, b.ultimate_moment, b.shape, moment_resistance);
+    case joint_law_kind::richard_abbott:
+        return richard_abbott(initial_stiffness, b.reference_moment, b.plastic_stiffness, b.shape, moment_resistance);
+    case joint_law_kind::multilinear: {
+        std::vector<law_point> pts;
+        for (const auto& [theta, m] : b.points) pts.push_back({theta, m});
+        return multilinear(std::move(pts), b.slip, moment_resistance);
+    }
+    }
+    return linear(initial_stiffness, moment_resistance);
 }
 
 joint_law joint_law::capped_at(double cap) const

@@ -69,6 +69,44 @@ json detail_json(const detail_assessment& d, const joint& j)
     return out;
 }
 
+// The declared law and its parameters in SI (docs/file-format.md).
+json behaviour_json(const joint_assessment& j, const joint& jt)
+{
+    if (!jt.behaviour) return nullptr;
+    const joint_behaviour& bh = *jt.behaviour;
+    json params = json::object();
+    switch (bh.law) {
+    case joint_law_kind::linear: break;
+    case joint_law_kind::ec3_curve: params["psi"] = number(bh.psi); break;
+    case joint_law_kind::ec3_eta: params["eta"] = number(bh.eta); break;
+    case joint_law_kind::power:
+        params["ultimate_moment"] = number(bh.ultimate_moment);
+        params["shape"] = number(bh.shape);
+        break;
+    case joint_law_kind::richard_abbott:
+        params["reference_moment"] = number(bh.reference_moment);
+        params["plastic_stiffness"] = number(bh.plastic_stiffness);
+        params["shape"] = number(bh.shape);
+        break;
+    case joint_law_kind::multilinear: {
+        json pts = json::array();
+        for (const auto& [theta, m] : bh.points) pts.push_back({{"rotation", number(theta)}, {"moment", number(m)}});
+        params["points"] = pts;
+        params["slip"] = number(bh.slip);
+        break;
+    }
+    }
+    if (bh.joint_type) params["joint_type"] = to_string(*bh.joint_type);
+    if (bh.joint_location) params["joint_location"] = to_string(*bh.joint_location);
+    json out;
+    out["law"] = to_string(bh.law);
+    out["parameters"] = params;
+    out["secant_stiffness_at_uls"] = j.law ? number(j.law->secant_stiffness) : json(nullptr);
+    out["yields"] = j.law ? j.law->yields : false;
+    out["yield_load_factor"] = j.law && j.law->yield_factor ? number(*j.law->yield_factor) : json(nullptr);
+    return out;
+}
+
 json joint_json(const joint_assessment& j, const beam& b)
 {
     json out;
@@ -82,6 +120,8 @@ json joint_json(const joint_assessment& j, const beam& b)
     const auto& mr = b.at(j.end).moment_resistance;
     out["moment_resistance"] = optional_number(mr);
     out["detail"] = j.detail ? detail_json(*j.detail, b.at(j.end)) : json(nullptr);
+    out["behaviour"] = behaviour_json(j, b.at(j.end));
+    out["rotation_capacity"] = optional_number(b.at(j.end).rotation_capacity);
     return out;
 }
 
@@ -115,6 +155,8 @@ json to_json(const beam_assessment& a)
     out["span"] = number(b.span);
     out["E"] = number(b.E);
     out["section"] = {{"name", b.sec.name}, {"I", number(b.sec.I)}, {"depth", number(b.sec.depth)}};
+    out["steel"] = b.steel ? json(b.steel->name()) : json(nullptr);
+    out["plastic_moment"] = optional_number(a.plastic_moment);
     json checks = json::array();
     for (const auto& c : a.checks) {
         checks.push_back({{"id", c.id},
@@ -141,6 +183,10 @@ json to_json(const beam_assessment& a)
         for (std::size_t i = 0; i < f.size(); ++i)
             env[f[i].key] = {{"min", number(r.envelope.ranges[i].min)}, {"max", number(r.envelope.ranges[i].max)}};
         c["range"] = {{"corners", corners}, {"envelope", env}, {"interior_points", r.interior_points}};
+        c["collapse"] = r.collapse ? json{{"load_factor", number(r.collapse->load_factor)},
+                                          {"rotation_start", number(r.collapse->rotation_start)},
+                                          {"rotation_end", number(r.collapse->rotation_end)}}
+                                   : json(nullptr);
         combos.push_back(c);
     }
     out["combinations"] = combos;

@@ -95,6 +95,9 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
       << u.num(en_rigid_limit(p.frame) * b.EI() / b.span, dims::rotational_stiffness, 4) << ", "
       << u.num(2 * b.EI() / b.span, dims::rotational_stiffness, 4) << ", "
       << u.num(20 * b.EI() / b.span, dims::rotational_stiffness, 4) << " " << u.unit(dims::rotational_stiffness) << "\n";
+    if (a.plastic_moment)
+        o << "  steel " << b.steel->name() << ", plastic moment " << u.num(*a.plastic_moment, dims::moment) << " "
+          << u.unit(dims::moment) << "\n";
     for (const auto& n : a.notes) o << "  Note: " << wrap(n, 92, "        ") << "\n";
 
     o << "\n  Joints (stiffness in " << u.unit(dims::rotational_stiffness) << ")\n";
@@ -108,6 +111,21 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
           << to_string(j->aisc_upper) << "\n";
         const auto& mr = b.at(j->end).moment_resistance;
         if (mr) o << "    " << pad("", 7) << "moment resistance " << u.num(*mr, dims::moment) << " " << u.unit(dims::moment) << "\n";
+        if (const auto& bh = b.at(j->end).behaviour) {
+            o << "    " << pad("", 7) << "behaviour: " << to_string(bh->law) << " law";
+            if (bh->law == joint_law_kind::ec3_curve)
+                o << ", psi = " << format_number(bh->psi, 3) << (bh->psi_from_table ? " (EN 1993-1-8 Table 6.8)" : "");
+            if (bh->law == joint_law_kind::ec3_eta)
+                o << ", eta = " << format_number(bh->eta, 3) << (bh->eta_from_table ? " (EN 1993-1-8 Table 5.2)" : "");
+            if (j->law)
+                o << "; under " << j->law->combination << " it carries " << u.num(j->law->moment, dims::moment) << " "
+                  << u.unit(dims::moment) << " at a secant stiffness of "
+                  << u.num(j->law->secant_stiffness, dims::rotational_stiffness) << " "
+                  << u.unit(dims::rotational_stiffness) << (j->law->yields ? ", and yields" : "");
+            o << "\n";
+        }
+        if (const auto& rc = b.at(j->end).rotation_capacity)
+            o << "    " << pad("", 7) << "rotation capacity " << u.num(*rc, dims::angle) << " " << u.unit(dims::angle) << "\n";
     }
 
     for (const auto* j : {&a.start, &a.end}) {
@@ -162,6 +180,11 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
               << rpad(u.cell(r.envelope.ranges[i].max, f[i]), 12)
               << rpad(u.cell(r.fixed.*(f[i].member), f[i]), 11) << "\n";
         }
+        if (r.collapse)
+            o << "    collapse of the beam (largest sagging moment at M_pl, both joints at their lower bound): at "
+              << format_number(r.collapse->load_factor, 4) << " times these loads, end rotations "
+              << u.num(r.collapse->rotation_start, dims::angle) << " and " << u.num(r.collapse->rotation_end, dims::angle)
+              << " " << u.unit(dims::angle) << "\n";
     }
 
     o << "\n  Checks\n";

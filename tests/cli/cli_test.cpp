@@ -187,7 +187,9 @@ TEST_CASE("cli check --json - writes the result JSON on stdout with the required
     const std::set<std::string> stable_ids{"stiffness-class-start", "stiffness-class-end", "joint-moment-start",
                                            "joint-moment-end",      "support-moment-start", "support-moment-end",
                                            "rotation-demand-start", "rotation-demand-end", "deflection",
-                                           "gap-closure-start",     "gap-closure-end"};
+                                           "gap-closure-start",     "gap-closure-end",
+                                           "strength-class-start",  "strength-class-end",
+                                           "joint-ductility-start", "joint-ductility-end"};
     for (const auto& b : j["beams"]) {
         CAPTURE(b.value("id", std::string("?")));
         REQUIRE(has_keys(b, {"id", "verdict", "checks", "joints", "combinations"}));

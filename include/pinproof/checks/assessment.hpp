@@ -9,6 +9,7 @@
 
 #include "pinproof/model/beam_model.hpp"
 #include "pinproof/joints/classification.hpp"
+#include "pinproof/joints/nonlinear_analysis.hpp"
 #include "pinproof/checks/detailing_rules.hpp"
 #include "pinproof/checks/gap_closure.hpp"
 #include "pinproof/checks/gap_geometry.hpp"
@@ -56,6 +57,9 @@ struct combination_result {
     state_envelope envelope;
     // Whether the envelope needed more than the corners (docs/method/range-envelope.md).
     int interior_points = 0;
+    // A strength combination of a beam with a steel: the collapse of the beam
+    // with both joints at their lower-bound stiffness (joints/nonlinear_analysis.hpp).
+    std::optional<collapse_point> collapse;
 };
 
 // What happens when the end gap closes under a strength combination: the beam
@@ -94,6 +98,16 @@ struct joint_assessment {
     en_joint_class en_lower{}, en_upper{};
     aisc_joint_class aisc_lower{}, aisc_upper{};
     std::optional<detail_assessment> detail;
+    // A joint with a behaviour, in the governing strength combination with this
+    // joint at its upper-bound stiffness and the far joint at its lower bound.
+    struct law_response {
+        std::string combination;
+        double moment = 0;              // N*m, the largest moment the law carries
+        double secant_stiffness = 0;    // N*m/rad, M / theta there
+        bool yields = false;            // it reaches its moment resistance
+        std::optional<double> yield_factor;  // of that combination's loads
+    };
+    std::optional<law_response> law;
 };
 
 struct beam_assessment {
@@ -103,6 +117,7 @@ struct beam_assessment {
     joint_assessment start, end;
     std::vector<check> checks;
     std::vector<std::string> notes;  // assumptions and defaults applied
+    std::optional<double> plastic_moment;  // N*m, where the beam's steel is given
     bool holds() const;
     const joint_assessment& joint_at(beam_end e) const { return e == beam_end::start ? start : end; }
 };
@@ -131,6 +146,11 @@ struct assessment_options {
 };
 
 beam_assessment assess_beam(const project& p, const beam& b, const assessment_options& options = {});
+
+// One end of the beam for the nonlinear analysis (joints/nonlinear_analysis.hpp):
+// the joint's law at stiffness s, a linear spring without one; at zero a pin,
+// rigid up to the joint's moment resistance.
+nonlinear_end end_for(const joint& j, stiffness s);
 project_assessment assess_project(const project& p, const assessment_options& options = {});
 
 }  // namespace pinproof

@@ -26,26 +26,9 @@
 #include <string_view>
 #include <vector>
 
+#include "pinproof/model/joint_behaviour.hpp"
+
 namespace pinproof {
-
-enum class joint_law_kind { linear, ec3_curve, ec3_eta, power, richard_abbott, multilinear };
-std::string to_string(joint_law_kind k);  // "linear", "ec3-curve", "ec3-eta", "power", "richard-abbott", "multilinear"
-std::optional<joint_law_kind> parse_joint_law_kind(std::string_view text);
-
-// The connection types of EN 1993-1-8 Tables 5.2 and 6.8.
-enum class ec3_joint_type { welded, bolted_end_plate, bolted_flange_cleats };
-enum class ec3_joint_location { beam_to_column, beam_to_beam };
-std::string to_string(ec3_joint_type t);      // "welded", "bolted-end-plate", "bolted-flange-cleats"
-std::string to_string(ec3_joint_location l);  // "beam-to-column", "beam-to-beam"
-std::optional<ec3_joint_type> parse_ec3_joint_type(std::string_view text);
-std::optional<ec3_joint_location> parse_ec3_joint_location(std::string_view text);
-
-// EN 1993-1-8 Table 6.8: psi = 2.7 welded, 2.7 bolted end plate, 3.1 bolted
-// angle flange cleats.
-double ec3_psi(ec3_joint_type t);
-// EN 1993-1-8 Table 5.2: eta = 2 for every beam-to-column type; beam-to-beam
-// (other joints) 3 welded or end plate, 3.5 flange cleats.
-double ec3_eta(ec3_joint_type t, ec3_joint_location l);
 
 struct law_point {
     double rotation = 0;  // rad, measured after the free slip
@@ -92,6 +75,10 @@ public:
     joint_law with_initial_stiffness(double s) const;
     // The same law capped at min(its cap, cap).
     joint_law capped_at(double cap) const;
+
+    // The law a project file's joint declares, at initial stiffness S_j,ini
+    // (for multilinear, the curve's own) and with its moment resistance.
+    static joint_law from(const joint_behaviour& b, double initial_stiffness, std::optional<double> moment_resistance);
 
 private:
     joint_law() = default;

@@ -6,6 +6,7 @@
 #include <string>
 
 #include "pinproof/model/connection_detail.hpp"
+#include "pinproof/model/joint_behaviour.hpp"
 #include "pinproof/model/stiffness.hpp"
 #include "pinproof/model/stiffness_distribution.hpp"
 
@@ -32,6 +33,11 @@ struct joint {
     stiffness contact_stiffness = stiffness::rigid();
     // The joint is declared designed for the moment that develops after closure.
     bool designed_for_closure = false;
+    // Its moment-rotation law where given (joints/joint_law.hpp); without it the
+    // joint is an uncapped linear spring.
+    std::optional<joint_behaviour> behaviour;
+    // Rotation (rad) the joint can undergo without fracturing, where known.
+    std::optional<double> rotation_capacity;
 };
 
 enum class beam_end { start, end };

@@ -12,6 +12,7 @@
 #include "pinproof/model/joint.hpp"
 #include "pinproof/model/loads.hpp"
 #include "pinproof/model/section.hpp"
+#include "pinproof/model/steel_grade.hpp"
 #include "pinproof/core/units.hpp"
 
 namespace pinproof {
@@ -39,7 +40,18 @@ struct beam {
     // 0: independent (docs/method/sweep-and-probability.md).
     int stiffness_correlation = 1;
     std::string pointer;  // JSON pointer of the beam in its file, e.g. "/beams/0"
+    // The beam's steel, where given: its plastic moment, the strength
+    // classification of the joints and the collapse of the beam need it.
+    std::optional<steel_material> steel;
     double EI() const { return E * sec.I; }
+    // Design plastic moment: W_pl f_y / gamma_M0 (EN 1993-1-1 6.2.5, gamma_M0 = 1.0,
+    // f_y by the flange thickness per EN 10025-2) or the nominal M_p = F_y Z (AISC 360
+    // F2.1); nullopt without a steel or a plastic modulus.
+    std::optional<double> plastic_moment() const
+    {
+        if (!steel || !sec.W_pl) return std::nullopt;
+        return *sec.W_pl * steel->fy(sec.flange_thickness.value_or(0.0));
+    }
     const joint& at(beam_end e) const { return e == beam_end::start ? start : end; }
 };
 
