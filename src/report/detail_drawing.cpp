@@ -334,7 +334,7 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
         add_label({0.5 * (a.x + b.x), level}, text, "#0a7d2c");
     }
 
-    // Centre, contact point and lever arm.
+    // Centre, contact point and the line between them (the force arm is in the text: it is normal to the contact).
     circle(centre, 6, "fill=\"white\" stroke=\"#000\" stroke-width=\"1.5\"");
     line({centre.x - 9 / v.scale, centre.y}, {centre.x + 9 / v.scale, centre.y}, "stroke=\"#000\" stroke-width=\"1.2\"");
     line({centre.x, centre.y - 9 / v.scale}, {centre.x, centre.y + 9 / v.scale}, "stroke=\"#000\" stroke-width=\"1.2\"");
@@ -345,7 +345,7 @@ std::string detail_svg(const beam_end_geometry& g, const connection_detail& d, d
         circle(p, 4, "fill=\"#c0392b\" stroke=\"none\"");
         if (demand > 0) circle(turn(p, centre, angle), 3.5, "fill=\"none\" stroke=\"#c0392b\" stroke-width=\"1.2\"");
         add_label(p, "first contact at " + rad(*cl.rotation) + ": " + cl.contact->description(), "#8e1b1b");
-        add_label({0.5 * (centre.x + p.x), 0.5 * (centre.y + p.y)}, "lever arm " + len(cl.contact->lever_arm),
+        add_label({0.5 * (centre.x + p.x), 0.5 * (centre.y + p.y)}, "centre to contact " + len(cl.contact->distance),
                   "#8e1b1b");
     } else {
         add_label(centre, "no contact within pi/2 rad in this sense", "#8e1b1b");
