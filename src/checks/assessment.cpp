@@ -462,11 +462,12 @@ std::string closed_state_text(const project& p, const std::string& combination, 
         const double at = (hog ? c.closure_hogging : c.closure_sagging).value_or(0.0);
         text += std::string("closed in ") + (hog ? "hogging" : "sagging") + ": the beam end bears on the support";
         if (c.contact.is_rigid())
-            text += " and is held at its closure rotation " + fmt(hog ? -at : at, dims::angle) +
+            text += " and is held at its closure rotation, " + fmt(at, dims::angle) + (hog ? " hogging," : " sagging,") +
                     " by that contact (rigid contact); its moment is the joint's own " + stiffness_text(c.before, fmt) +
                     " times that rotation plus what the contact takes.";
         else
-            text += " beyond its closure rotation " + fmt(hog ? -at : at, dims::angle) + " against a contact stiffness " +
+            text += " beyond its closure rotation, " + fmt(at, dims::angle) + (hog ? " hogging," : " sagging,") +
+                    " against a contact stiffness " +
                     stiffness_text(c.contact, fmt) + " added to the joint's own " + stiffness_text(c.before, fmt) + ".";
     }
     text += " The state's stiffness_start and stiffness_end are the joints' own stiffness before closure, not the "

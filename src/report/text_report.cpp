@@ -144,7 +144,7 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
             const auto& c = *d.consequence;
             const double M = j->end == beam_end::start ? c.result.state.moment_start : c.result.state.moment_end;
             o << "    after closure (" << c.combination << ", lower-bound stiffness): joint moment "
-              << u.num(M, dims::moment) << " " << u.unit(dims::moment) << ", flange contact force "
+              << u.num(M, dims::moment) << " " << u.unit(dims::moment) << ", bearing force "
               << u.num(c.contact_force, dims::force) << " " << u.unit(dims::force) << " at an arm of "
               << u.num(c.lever_arm, dims::length) << " " << u.unit(dims::length) << ", max sagging moment "
               << u.num(c.result.state.max_sagging_moment, dims::moment) << " " << u.unit(dims::moment)

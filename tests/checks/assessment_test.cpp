@@ -139,3 +139,50 @@ TEST_CASE("moment-reversal: gravity alone keeps the moment hogging and passes [R
     CHECK(c.status == check_status::pass);
     CHECK(c.message.find("hogging") != std::string::npos);
 }
+
+namespace {
+// An 8 m IPE 240 on a 1 mm end plate at the start (plate 40 mm below the top,
+// 150 mm deep): the gap closes in sagging under the strength combination.
+std::string project_closing()
+{
+    return R"({"format": "pinproof-project/1", "title": "closure", "standard": "EN1993-1-8", "frame": "braced",
+      "beams": [{"id": "B", "span": "8 m", "section": "IPE 240",
+        "loads": [{"case": "G", "kind": "udl", "w": "12 kN/m"}, {"case": "Q", "kind": "udl", "w": "10 kN/m"}],
+        "combinations": [{"name": "ULS", "use": "strength", "factors": {"G": 1.35, "Q": 1.5}}],
+        "joints": {"start": {"stiffness": {"min": "100 kN*m/rad", "max": "0.2 EI/L"},
+                             "detail": {"type": "end-plate", "plate_thickness": "1 mm", "plate_top": "40 mm",
+                                        "plate_depth": "150 mm", "bolt_rows": 2}},
+                   "end": {"stiffness": 0}}}]})";
+}
+}  // namespace
+
+TEST_CASE("state after closure: labelled with each joint's phase - bearing force from the free body [RULE] - tol 1e-12")
+{
+    // Free body of the beam end about its centre of rotation C (first
+    // principles; docs/method/gap-geometry.md): the end moment beyond the
+    // joint's own share S theta_c is carried by the bearing force F on the
+    // column face, horizontal (frictionless contact), at the arm |P'.y - C.y|
+    // of the turned bottom flange corner P'. End plate: C on the face at the
+    // plate's bottom edge, (0, -190) mm; P = (-1, -240) mm at rest.
+    const project p = parse_project(project_closing());
+    const auto a = assess_beam(p, p.beams[0]);
+    REQUIRE(a.start.detail);
+    REQUIRE(a.start.detail->consequence);
+    const auto& cc = *a.start.detail->consequence;
+    CHECK(cc.result.start == joint_phase::closed_sagging);
+    CHECK(cc.result.end == joint_phase::open);
+    CHECK(cc.assumptions.find("held at its closure rotation") != std::string::npos);
+    CHECK(cc.assumptions.find("End joint: open") != std::string::npos);
+    const double t = cc.closure_rotation;
+    const double Cx = 0.0, Cy = -0.190, Px = -0.001, Py = -0.240;
+    const double x = Cx + std::cos(t) * (Px - Cx) - std::sin(t) * (Py - Cy);
+    const double y = Cy + std::sin(t) * (Px - Cx) + std::cos(t) * (Py - Cy);
+    CHECK(x == doctest::Approx(0.0).epsilon(1e-12));  // the corner is on the face
+    const double arm = std::abs(y - Cy);
+    CHECK(cc.lever_arm == doctest::Approx(arm).epsilon(1e-12));
+    const double own = 100e3 * t;
+    CHECK(cc.contact_force * arm == doctest::Approx(std::abs(cc.result.state.moment_start) - own).epsilon(1e-12));
+    // The check's message labels the state.
+    for (const auto& c : a.checks)
+        if (c.id == "gap-closure-start") CHECK(c.message.find("held at its closure rotation") != std::string::npos);
+}
