@@ -162,8 +162,10 @@ combination_result analyse_combination(const beam& b, const combination& c, bool
                 const auto& f = result_fields();
                 for (std::size_t k = 0; k < f.size(); ++k) {
                     const bool searched = f[k].member == &beam_state::max_sagging_moment ||
+                                          f[k].member == &beam_state::max_hogging_moment ||
                                           f[k].member == &beam_state::max_deflection ||
                                           f[k].member == &beam_state::max_sagging_at ||
+                                          f[k].member == &beam_state::max_hogging_at ||
                                           f[k].member == &beam_state::max_deflection_at;
                     if (!searched) continue;
                     const double v = s.*(f[k].member);
@@ -283,6 +285,61 @@ check joint_moment_check(const project& p, const beam& b, const std::vector<comb
                     ": the joint would have to yield to behave as a pin. Design it for the moment, or use a more "
                     "flexible detail.";
     }
+    return c;
+}
+
+// Whether the end moment keeps one sign. A joint detailed for the hogging moment
+// of gravity loads (top bolts in tension, bottom flange in bearing) that sees a
+// sagging moment under uplift or a reversed load has its tension and bearing
+// sides swapped (common practice, no source): advice, never a failure.
+check moment_reversal_check(const project& p, const std::vector<combination_result>& combos, beam_end e)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "moment-reversal-" + to_string(e);
+    c.dim = dims::moment;
+    c.informative = true;
+    double beam_state::*member = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
+    double hogging = 0, sagging = 0;  // largest of each sign, as magnitudes
+    std::string hogging_combination, sagging_combination;
+    for (const auto& r : combos) {
+        const auto& range = r.envelope.of(member);
+        if (range.max > hogging) {
+            hogging = range.max;
+            hogging_combination = r.comb.name;
+        }
+        if (-range.min > sagging) {
+            sagging = -range.min;
+            sagging_combination = r.comb.name;
+        }
+    }
+    if (combos.empty()) {
+        c.status = check_status::not_applicable;
+        c.message = "No combination is given.";
+        return c;
+    }
+    // A moment below 1e-9 of the larger one is round-off, not a reversal.
+    const double scale = std::max(hogging, sagging);
+    if (!(scale > 0)) {
+        c.status = check_status::pass;
+        c.message = "The joint takes no end moment (its upper-bound stiffness is a pin), so none reverses.";
+        return c;
+    }
+    const double tol = 1e-9 * scale;
+    if (hogging > tol && sagging > tol) {
+        c.status = check_status::warn;
+        c.value = std::min(hogging, sagging);
+        c.message = "The end moment changes sign across the combinations: up to " + fmt(hogging, dims::moment) +
+                    " hogging (combination " + hogging_combination + ") and up to " + fmt(sagging, dims::moment) +
+                    " sagging (combination " + sagging_combination +
+                    "). A joint detailed for one sense sees the other: its tension and bearing sides swap. "
+                    "Confirm the joint, its bolts and the support for both senses.";
+        return c;
+    }
+    c.status = check_status::pass;
+    c.value = scale;
+    c.message = "The end moment keeps one sign over every combination and the stiffness range: " +
+                std::string(hogging > tol ? "hogging" : "sagging") + ", up to " + fmt(scale, dims::moment) + ".";
     return c;
 }
 
@@ -434,6 +491,39 @@ std::optional<double> beam_closure(const closure& c, double support_rotation)
     return std::max(0.0, *c.rotation - support_rotation);
 }
 
+// The state after closure in words: what was solved, and what each joint does in it.
+std::string closed_state_text(const project& p, const std::string& combination, const closed_state& r,
+                              const closing_joint (&cj)[2])
+{
+    const formatter fmt{p.units};
+    std::string text = "State after closure under " + combination +
+                       ": the beam solved with bilinear joints, each at its lower-bound stiffness until its gap "
+                       "closes; contact frictionless, the bearing force normal to the touching surfaces.";
+    for (beam_end k : {beam_end::start, beam_end::end}) {
+        const closing_joint& c = cj[k == beam_end::start ? 0 : 1];
+        const joint_phase ph = k == beam_end::start ? r.start : r.end;
+        text += " " + std::string(k == beam_end::start ? "Start" : "End") + " joint: ";
+        if (ph == joint_phase::open) {
+            text += "open (gap not closed), stiffness " + stiffness_text(c.before, fmt) + ".";
+            continue;
+        }
+        const bool hog = ph == joint_phase::closed_hogging;
+        const double at = (hog ? c.closure_hogging : c.closure_sagging).value_or(0.0);
+        text += std::string("closed in ") + (hog ? "hogging" : "sagging") + ": the beam end bears on the support";
+        if (c.contact.is_rigid())
+            text += " and is held at its closure rotation, " + fmt(at, dims::angle) + (hog ? " hogging," : " sagging,") +
+                    " by that contact (rigid contact); its moment is the joint's own " + stiffness_text(c.before, fmt) +
+                    " times that rotation plus what the contact takes.";
+        else
+            text += " beyond its closure rotation, " + fmt(at, dims::angle) + (hog ? " hogging," : " sagging,") +
+                    " against a contact stiffness " +
+                    stiffness_text(c.contact, fmt) + " added to the joint's own " + stiffness_text(c.before, fmt) + ".";
+    }
+    text += " The state's stiffness_start and stiffness_end are the joints' own stiffness before closure, not the "
+            "stiffness after it.";
+    return text;
+}
+
 void assess_details(const project& p, const beam& b, beam_assessment& a, bool find_min_gap)
 {
     for (beam_end e : {beam_end::start, beam_end::end}) {
@@ -443,11 +533,15 @@ void assess_details(const project& p, const beam& b, beam_assessment& a, bool fi
         const auto all = end_rotation_extremes(a.combinations, e, false);
         const auto strength = end_rotation_extremes(a.combinations, e, true);
         // The demand on the gap is the relative rotation of beam end and support.
+        // The support's own rotation closes one side of the gap whatever the
+        // beam does, and its sense is not given (a magnitude): it is added to
+        // the demand of both senses, even where the beam itself turns only one
+        // way (docs/method/checks.md).
         d.demand_sagging = all.sagging + j.support_rotation;
-        d.demand_hogging = all.hogging > 0 ? all.hogging + j.support_rotation : 0.0;
+        d.demand_hogging = all.hogging + j.support_rotation;
         d.demand_combination = all.sagging >= all.hogging ? all.sagging_combination : all.hogging_combination;
         d.strength_demand_sagging = strength.sagging + j.support_rotation;
-        d.strength_demand_hogging = strength.hogging > 0 ? strength.hogging + j.support_rotation : 0.0;
+        d.strength_demand_hogging = strength.hogging + j.support_rotation;
         d.strength_combination =
             strength.sagging >= strength.hogging ? strength.sagging_combination : strength.hogging_combination;
         d.gap = check_gap(*j.detail, b.sec, rotation_demand{d.demand_sagging, d.demand_hogging}, find_min_gap);
@@ -497,9 +591,13 @@ void assess_details(const project& p, const beam& b, beam_assessment& a, bool fi
         cc.closure_rotation = (phase == joint_phase::closed_hogging ? c.closure_hogging : c.closure_sagging).value_or(0.0);
         const double M = start ? cc.result.state.moment_start : cc.result.state.moment_end;
         const double own = c.before.is_rigid() ? 0.0 : c.before.value() * cc.closure_rotation;
+        // The beam end, free body about the centre of rotation: the moment beyond
+        // the joint's own share is balanced by the bearing force times its
+        // perpendicular arm (frictionless contact; docs/method/gap-geometry.md).
         cc.lever_arm = sc.closing.contact ? sc.closing.contact->lever_arm : 0.0;
-        if (phase != joint_phase::open && cc.lever_arm > 0)
+        if (phase != joint_phase::open && cc.lever_arm > 1e-9)
             cc.contact_force = std::abs(std::abs(M) - own) / cc.lever_arm;
+        cc.assumptions = closed_state_text(p, cc.combination, cc.result, cj);
         ja.detail->consequence = cc;
     }
 }
@@ -530,9 +628,12 @@ check gap_closure_check(const project& p, const beam& b, const joint_assessment&
     const std::string gaps = "worst-case gap " + fmt(d.gap.worst_case_gap, dims::length) + " (" +
                              fmt(d.gap.gap, dims::length) + " as detailed less " +
                              fmt(d.gap.gap_tolerance, dims::length) + " tolerance)";
-    const std::string demand = std::string(sag ? "sagging" : "hogging") + " rotation demand " + fmt(*c.value, dims::angle) +
-                               (j.support_rotation > 0 ? " (incl. support rotation " + fmt(j.support_rotation, dims::angle) + ")" : "") +
-                               ", combination " + d.demand_combination;
+    const bool support_alone = j.support_rotation > 0 && !(*c.value > j.support_rotation);
+    const std::string demand =
+        std::string(sag ? "sagging" : "hogging") + " rotation demand " + fmt(*c.value, dims::angle) +
+        (support_alone ? " (the support's own rotation alone: the beam end does not turn this way)"
+                       : (j.support_rotation > 0 ? " (incl. support rotation " + fmt(j.support_rotation, dims::angle) + ")" : "") +
+                             ", combination " + d.demand_combination);
     const std::string closure = "closure rotation " + closure_text(sc.closing.rotation, fmt) + " (" + where + ")";
     const std::string min_gap = d.gap.min_gap_required
                                     ? "The smallest as-detailed gap that passes is " + fmt(*d.gap.min_gap_required, dims::length) + "."
@@ -552,11 +653,17 @@ check gap_closure_check(const project& p, const beam& b, const joint_assessment&
     const auto& cc = *d.consequence;
     const bool start = ja.end == beam_end::start;
     const double M = start ? cc.result.state.moment_start : cc.result.state.moment_end;
-    const std::string effect = "Once closed (contact stiffness " +
-                               (j.contact_stiffness.is_rigid() ? std::string("rigid") : fmt(j.contact_stiffness.value(), dims::rotational_stiffness)) +
-                               ") the joint takes " + fmt(M, dims::moment) + " under " + cc.combination +
-                               ", a flange contact force of about " + fmt(cc.contact_force, dims::force) +
-                               ", and the same moment goes into the support.";
+    const std::string held = j.contact_stiffness.is_rigid()
+                                 ? "held at its closure rotation " + fmt(cc.closure_rotation, dims::angle) +
+                                       " by the contact (rigid contact)"
+                                 : "turning beyond its closure rotation " + fmt(cc.closure_rotation, dims::angle) +
+                                       " against the contact stiffness " +
+                                       fmt(j.contact_stiffness.value(), dims::rotational_stiffness);
+    const std::string effect = "Once closed, the beam end bears on the support, " + held + "; solved with both joints at "
+                               "their lower-bound stiffness, the joint takes " + fmt(M, dims::moment) + " under " +
+                               cc.combination + ", a bearing force of about " + fmt(cc.contact_force, dims::force) +
+                               " (frictionless, normal to the contact, arm " + fmt(cc.lever_arm, dims::length) +
+                               " about the centre of rotation), and the same moment goes into the support.";
     if (j.designed_for_closure) {
         if (j.moment_resistance && std::abs(M) > *j.moment_resistance) {
             c.status = check_status::fail;
@@ -615,6 +722,7 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end})
         a.checks.push_back(joint_ductility_check(p, b, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(moment_reversal_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));
     assess_details(p, b, a, options.find_min_gap);

@@ -5,6 +5,17 @@
 #include "pinproof/core/errors.hpp"
 
 namespace pinproof {
+
+std::string to_string(joint_phase p)
+{
+    switch (p) {
+    case joint_phase::closed_hogging: return "closed-hogging";
+    case joint_phase::open: return "open";
+    case joint_phase::closed_sagging: return "closed-sagging";
+    }
+    return "open";
+}
+
 namespace {
 
 // One row of the condensed system (hogging moments m, rotations

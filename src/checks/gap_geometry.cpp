@@ -79,14 +79,21 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
     const std::size_t n = o.points.size();
 
     std::vector<candidate> found;
-    auto keep = [&](double angle, std::string outline_part, std::string support_part, point2 at) {
+    // `where` is the contact point and `normal` the unit normal of the touching
+    // surfaces there, both in the position at contact; the arm of the bearing
+    // force about the centre is the perpendicular distance to its line of
+    // action (frictionless contact).
+    auto keep = [&](double angle, std::string outline_part, std::string support_part, point2 at, point2 where,
+                    point2 normal) {
         candidate k;
         k.angle = angle;
         k.contact.outline_part = std::move(outline_part);
         k.contact.support_part = std::move(support_part);
         k.contact.at = at;
         k.contact.centre = c;
-        k.contact.lever_arm = norm(at - c);
+        k.contact.normal = normal;
+        k.contact.lever_arm = std::abs(cross(where - c, normal));
+        k.contact.distance = norm(at - c);
         found.push_back(std::move(k));
     };
 
@@ -103,7 +110,7 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
             for (double t : trig_roots(dot(nrm, r), s * dot(nrm, perp(r)), dot(nrm, seg.from - c))) {
                 const point2 q = rotated(p, c, s * t);
                 const double u = dot(q - seg.from, ab) / dot(ab, ab);
-                if (u >= -1e-12 && u <= 1.0 + 1e-12) keep(t, o.point_labels[i], seg.label, p);
+                if (u >= -1e-12 && u <= 1.0 + 1e-12) keep(t, o.point_labels[i], seg.label, p, q, nrm);
             }
         }
         for (const auto& arc : g.support.arcs) {
@@ -112,7 +119,7 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
             const double rhs = 0.5 * (arc.radius * arc.radius - dot(dd, dd) - dot(r, r));
             for (double t : trig_roots(dot(dd, r), s * dot(dd, perp(r)), rhs)) {
                 const point2 q = rotated(p, c, s * t);
-                if (within_arc(q, arc)) keep(t, o.point_labels[i], arc.label, p);
+                if (within_arc(q, arc)) keep(t, o.point_labels[i], arc.label, p, q, (1.0 / arc.radius) * (q - arc.centre));
             }
         }
     }
@@ -129,7 +136,10 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
             for (double t : trig_roots(dot(nrm, q), -s * dot(nrm, perp(q)), dot(nrm, a - c))) {
                 const point2 w = rotated(corner.at, c, -s * t);
                 const double u = dot(w - a, ab) / dot(ab, ab);
-                if (u >= -1e-12 && u <= 1.0 + 1e-12) keep(t, o.edge_labels[i], corner.label, w);
+                // In the beam's frame: the corner at w against the edge of normal nrm,
+                // the same perpendicular distance as in the position at contact.
+                if (u >= -1e-12 && u <= 1.0 + 1e-12)
+                    keep(t, o.edge_labels[i], corner.label, w, w, nrm);
             }
         }
     }

@@ -5,7 +5,9 @@
 #include <algorithm>
 #include <charconv>
 #include <cmath>
+#include <cstdio>
 #include <cstdlib>
+#include <string>
 #include <stdexcept>
 #include <system_error>
 
@@ -375,19 +377,63 @@ std::string format_number(double value, int significant)
         throw internal_error("format_number: significant figures must be 1..17, got " +
                              std::to_string(significant));
     if (value == 0.0) return "0";
+    // Round once, in decimal, from the value to `decimal_figures` significant
+    // figures: two results that agree to about 1e-9 (a symmetric pair computed
+    // by two paths, 68.17499999999999 and 68.17500000000001) have the same
+    // decimal digits there and so print the same; the shown figures are then
+    // taken from those digits, half away from zero. At 9 figures and beyond the
+    // value's own nearest decimal is used.
+    constexpr int decimal_figures = 9;
+    const int figures = std::max(significant, decimal_figures);
     char buf[64];
-    // Round to `significant` figures first; the exponent of the rounded value
-    // decides the layout (9.9996 -> 1.000e+01 -> "10.00").
-    auto r = std::to_chars(buf, buf + sizeof buf, value, std::chars_format::scientific, significant - 1);
+    auto r = std::to_chars(buf, buf + sizeof buf, std::abs(value), std::chars_format::scientific, figures - 1);
     if (r.ec != std::errc()) throw internal_error("format_number: buffer too small");
     const char* e = std::find(buf, r.ptr, 'e');
     int exponent = 0;
     std::from_chars(e + 1 + (e[1] == '+'), r.ptr, exponent);
-    const int decimals = std::max(0, significant - 1 - exponent);
-    if (exponent >= 9 || decimals > 6) return std::string(buf, r.ptr);
-    r = std::to_chars(buf, buf + sizeof buf, value, std::chars_format::fixed, decimals);
-    if (r.ec != std::errc()) throw internal_error("format_number: buffer too small");
-    return std::string(buf, r.ptr);
+    std::string digits;
+    for (const char* c = buf; c != e; ++c)
+        if (*c != '.') digits += *c;
+    // The first n figures of `digits`, rounded half away from zero; a carry
+    // out of the first figure (9.9996 -> 10.00) raises the exponent by one.
+    auto round_to = [&](int n, int& exp) {
+        std::string out = digits.substr(0, static_cast<std::size_t>(n));
+        exp = exponent;
+        if (n < static_cast<int>(digits.size()) && digits[static_cast<std::size_t>(n)] >= '5') {
+            int i = n - 1;
+            while (i >= 0 && out[static_cast<std::size_t>(i)] == '9') out[static_cast<std::size_t>(i--)] = '0';
+            if (i >= 0) {
+                ++out[static_cast<std::size_t>(i)];
+            } else {
+                out = "1" + out.substr(0, out.size() - 1);
+                ++exp;
+            }
+        }
+        return out;
+    };
+    int rounded_exponent = exponent;
+    std::string shown = round_to(significant, rounded_exponent);
+    // The exponent of the rounded value decides the layout.
+    const int decimals = std::max(0, significant - 1 - rounded_exponent);
+    std::string out = value < 0 ? "-" : "";
+    if (rounded_exponent >= 9 || decimals > 6) {
+        out += shown.substr(0, 1);
+        if (significant > 1) out += "." + shown.substr(1);
+        char exp[8];
+        std::snprintf(exp, sizeof exp, "e%c%02d", rounded_exponent < 0 ? '-' : '+', std::abs(rounded_exponent));
+        return out + exp;
+    }
+    if (decimals == 0) {
+        // Every figure before the decimal point is shown (12345 stays "12345"):
+        // the value rounded to a whole number.
+        int whole_exponent = exponent;
+        const std::string whole = round_to(exponent + 1, whole_exponent);
+        return out + whole + std::string(static_cast<std::size_t>(whole_exponent + 1) - whole.size(), '0');
+    }
+    if (rounded_exponent < 0)
+        return out + "0." + std::string(static_cast<std::size_t>(-rounded_exponent - 1), '0') + shown;
+    const std::size_t point = static_cast<std::size_t>(rounded_exponent + 1);
+    return out + shown.substr(0, point) + "." + shown.substr(point);
 }
 
 }  // namespace pinproof

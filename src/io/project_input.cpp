@@ -355,13 +355,13 @@ struct reader {
             const auto position = [&](const std::string& key, bool required, double fallback) -> std::optional<double> {
                 auto x = q(l, p, key, dims::length, required);
                 if (!x) return l.contains(key) || required ? std::nullopt : std::optional<double>(fallback);
-                if (span && (*x < 0 || *x > *span)) {
+                if (!span) return x;
+                const auto on_span = position_on_span(*x, *span);
+                if (!on_span)
                     problems.add(child(p, key), "expected a position within the span, 0 to " +
                                                     format_quantity(*span, dims::length, system) + " from the start, found " +
                                                     shown(l.at(key)));
-                    return std::nullopt;
-                }
-                return x;
+                return on_span;
             };
             if (*kind == "point" || *kind == "moment") {
                 const bool point = *kind == "point";

@@ -245,6 +245,10 @@ beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
 
     bool first = true;
     bool first_w = true;
+    // Moments within round-off of each other are equal: the first from the
+    // start is kept, so a position does not flip between equal extremes (the
+    // two zero-moment ends of a pinned beam under uplift).
+    const double moment_tol = 1e-12 * (load_scale_ * span_ + std::abs(m_start) + std::abs(m_end));
     for (const auto& e : elements_) {
         const auto w = combined(e, m_start, m_end);
         const auto w1 = polynomial::derivative(w);
@@ -254,11 +258,15 @@ beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
         // the shear (-EI w''') vanishes.
         const auto moment_candidate = [&](double sx) {
             const double M = -EI_ * polynomial::value(w2, sx);
-            if (first || M > s.max_sagging_moment) {
+            if (first || M > s.max_sagging_moment + moment_tol) {
                 s.max_sagging_moment = M;
                 s.max_sagging_at = e.x0 + sx;
-                first = false;
             }
+            if (first || M < s.max_hogging_moment - moment_tol) {
+                s.max_hogging_moment = M;
+                s.max_hogging_at = e.x0 + sx;
+            }
+            first = false;
         };
         moment_candidate(0.0);
         moment_candidate(e.length);
@@ -275,6 +283,11 @@ beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
         deflection_candidate(0.0);
         deflection_candidate(e.length);
         for (double sx : polynomial::roots_in(w1, 0.0, e.length)) deflection_candidate(sx);
+    }
+    // No hogging moment anywhere (to round-off): 0, at the start.
+    if (!(s.max_hogging_moment < -moment_tol)) {
+        s.max_hogging_moment = 0.0;
+        s.max_hogging_at = 0.0;
     }
     check_equilibrium(s);
     return s;

@@ -348,18 +348,25 @@ double clearance(const beam_end_geometry& g, rotation_sense sense, double rotati
 
 namespace {
 
+struct support_part {
+    std::string label;
+    double distance = 0;
+    point2 normal;  // unit normal of the part at its point nearest p
+};
+
 // Nearest labelled part of the support boundary to a point.
-std::pair<std::string, double> nearest_support_part(const support_geometry& s, point2 p)
+support_part nearest_support_part(const support_geometry& s, point2 p)
 {
-    std::pair<std::string, double> best{s.description, std::numeric_limits<double>::max()};
+    support_part best{s.description, std::numeric_limits<double>::max(), {1, 0}};
     for (const auto& seg : s.segments) {
         const double d = distance_to_segment(p, seg.from, seg.to);
-        if (d < best.second) best = {seg.label, d};
+        if (d < best.distance) best = {seg.label, d, (1.0 / norm(seg.to - seg.from)) * perp(seg.to - seg.from)};
     }
     for (const auto& arc : s.arcs) {
         const double d = within_arc(p, arc) ? std::abs(norm(p - arc.centre) - arc.radius)
                                             : std::min(norm(p - arc.from), norm(p - arc.to));
-        if (d < best.second) best = {arc.label, d};
+        const double r = norm(p - arc.centre);
+        if (d < best.distance && r > 0) best = {arc.label, d, (1.0 / r) * (p - arc.centre)};
     }
     return best;
 }
@@ -388,15 +395,20 @@ std::optional<contact_point> overlap(const beam_end_geometry& g, rotation_sense 
         const double v = inside_polygon(p, g.support.material) ? -d : d;
         if (v < score) {
             score = v;
+            const support_part part = nearest_support_part(g.support, p);
             best.outline_part = o.point_labels[i];
-            best.support_part = nearest_support_part(g.support, p).first;
+            best.support_part = part.label;
             best.at = o.points[i];
+            best.normal = part.normal;
+            best.lever_arm = std::abs(cross(p - c, part.normal));
         }
     }
     for (const auto& corner : g.support.corners) {
         const bool inside = inside_polygon(corner.at, moving_polygon);
         double nearest = std::numeric_limits<double>::max();
         std::size_t edge = 0;
+        // Support corners against outline edges: the force acts along the
+        // edge's normal through the corner.
         for (std::size_t i = 0; i < n; ++i) {
             if (o.edge_cut[i]) continue;
             const double d = distance_to_segment(corner.at, moving_polygon[i], moving_polygon[(i + 1) % n]);
@@ -411,9 +423,12 @@ std::optional<contact_point> overlap(const beam_end_geometry& g, rotation_sense 
             best.outline_part = o.edge_labels[edge];
             best.support_part = corner.label;
             best.at = rotated(corner.at, c, -angle);
+            const point2 ab = moving_polygon[(edge + 1) % n] - moving_polygon[edge];
+            best.normal = (1.0 / norm(ab)) * perp(ab);
+            best.lever_arm = std::abs(cross(corner.at - c, best.normal));
         }
     }
-    best.lever_arm = norm(best.at - c);
+    best.distance = norm(best.at - c);
     return best;
 }
 

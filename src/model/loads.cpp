@@ -1,5 +1,7 @@
 #include "pinproof/model/loads.hpp"
 
+#include <cmath>
+
 namespace pinproof {
 
 std::string to_string(load_kind k)
@@ -16,6 +18,17 @@ std::string to_string(load_kind k)
 std::string to_string(limit_state u)
 {
     return u == limit_state::strength ? "strength" : "service";
+}
+
+std::optional<double> position_on_span(double x, double span)
+{
+    // Unit conversions (mm, in, ft to m) round each value once; 1e-9 of the
+    // span is far above that round-off and far below any detailed dimension.
+    const double snap = 1e-9 * span;
+    if (std::abs(x) <= snap) return 0.0;
+    if (std::abs(x - span) <= snap) return span;
+    if (x < 0 || x > span) return std::nullopt;
+    return x;
 }
 
 double intensity_at(const load& l, double x)

@@ -98,6 +98,8 @@ void validate(const section_dimensions& d)
 // ---- catalogue text ---------------------------------------------------------
 
 constexpr std::string_view expected_header = "name,unit,h,b,tw,tf,r";
+// The same with the tabulated properties, each optional on a row.
+constexpr std::string_view tabulated_header = "name,unit,h,b,tw,tf,r,A,I,W_el,W_pl";
 
 [[noreturn]] void catalogue_fault(std::size_t line, std::size_t column, const std::string& message)
 {
@@ -160,6 +162,7 @@ std::vector<section_dimensions> parse_section_catalogue(std::string_view text)
     std::vector<section_dimensions> rows;
     std::vector<std::string> keys;
     bool header_seen = false;
+    bool with_tabulated = false;
     std::size_t line_no = 0;
     std::size_t pos = 0;
     while (pos < text.size()) {
@@ -171,18 +174,20 @@ std::vector<section_dimensions> parse_section_catalogue(std::string_view text)
         if (line.empty() || line.front() == '#') continue;
 
         if (!header_seen) {
-            if (line != expected_header) {
-                catalogue_fault(line_no, 1, "expected the header '" + std::string(expected_header) +
-                                                "', found '" + std::string(line) + "'");
+            if (line != expected_header && line != tabulated_header) {
+                catalogue_fault(line_no, 1, "expected the header '" + std::string(expected_header) + "' or '" +
+                                                std::string(tabulated_header) + "', found '" + std::string(line) + "'");
             }
             header_seen = true;
+            with_tabulated = line == tabulated_header;
             continue;
         }
 
         const auto fields = split_fields(line);
-        if (fields.size() != 7) {
-            catalogue_fault(line_no, 1, "expected 7 fields (" + std::string(expected_header) + "), found " +
-                                            std::to_string(fields.size()));
+        if (fields.size() != 7 && !(with_tabulated && fields.size() == 11)) {
+            catalogue_fault(line_no, 1, "expected 7 fields (" + std::string(expected_header) + ")" +
+                                            (with_tabulated ? " or 11 (" + std::string(tabulated_header) + ")" : "") +
+                                            ", found " + std::to_string(fields.size()));
         }
         section_dimensions d;
         d.name = std::string(fields[0]);
@@ -209,6 +214,22 @@ std::vector<section_dimensions> parse_section_catalogue(std::string_view text)
                                     ", found '" + std::string(f) + "'");
             }
             *targets[i] = v * scale;
+        }
+        // Tabulated properties, in the table's units: cm2, cm4, cm3 on a "mm"
+        // row, in2, in4, in3 on an "in" row. An empty field is computed.
+        std::optional<double>* tabulated[4] = {&d.A, &d.I, &d.W_el, &d.W_pl};
+        const double length = fields[1] == "mm" ? 1e-2 : 0.0254;
+        const int power[4] = {2, 4, 3, 3};
+        for (std::size_t i = 0; fields.size() == 11 && i < 4; ++i) {
+            const std::string_view f = fields[7 + i];
+            if (f.empty()) continue;
+            double v = 0.0;
+            const auto res = std::from_chars(f.data(), f.data() + f.size(), v);
+            if (res.ec != std::errc() || res.ptr != f.data() + f.size() || !std::isfinite(v) || v <= 0.0)
+                catalogue_fault(line_no, 8 + i,
+                                "expected a positive number or nothing for " +
+                                    std::string(split_fields(tabulated_header)[7 + i]) + ", found '" + std::string(f) + "'");
+            *tabulated[i] = v * std::pow(length, power[i]);
         }
         try {
             validate(d);
@@ -265,6 +286,16 @@ section rolled_i_section(const section_dimensions& d)
     return s;
 }
 
+section catalogue_section(const section_dimensions& d)
+{
+    section s = rolled_i_section(d);
+    if (d.A) s.area = *d.A;
+    if (d.I) s.I = *d.I;
+    if (d.W_el) s.W_el = *d.W_el;
+    if (d.W_pl) s.W_pl = *d.W_pl;
+    return s;
+}
+
 namespace {
 
 // The properties of every catalogue section with its matching key, computed
@@ -278,7 +309,7 @@ const std::vector<indexed_section>& catalogue_index()
 {
     static const std::vector<indexed_section> index = [] {
         std::vector<indexed_section> out;
-        for (const auto& d : parsed_catalogue()) out.push_back({lookup_key(d.name), rolled_i_section(d)});
+        for (const auto& d : parsed_catalogue()) out.push_back({lookup_key(d.name), catalogue_section(d)});
         return out;
     }();
     return index;

@@ -400,7 +400,8 @@ void report_writer::results_table(const combination_result& r)
           "<th>Fixed</th></tr>\n";
     const auto& f = result_fields();
     for (std::size_t i = 0; i < f.size(); ++i) {
-        const bool position = f[i].member == &beam_state::max_sagging_at || f[i].member == &beam_state::max_deflection_at;
+        const bool position = f[i].member == &beam_state::max_sagging_at || f[i].member == &beam_state::max_hogging_at ||
+                              f[i].member == &beam_state::max_deflection_at;
         auto cell = [&](double v) {
             return position ? format_number(std::abs(v) < 1e-12 ? 0.0 : u_.pos_in(v), 4) : u_.num(v, f[i].dim);
         };

@@ -434,7 +434,7 @@ void detail_sheet::gap_dimension()
     add_label({0.5 * (a.x + b.x), level}, text, "#0a7d2c");
 }
 
-// Centre, contact point and lever arm.
+// Centre, contact point and the line between them (the force arm is in the text: it is normal to the contact).
 void detail_sheet::centre_and_contact()
 {
     circle(centre, 6, "fill=\"white\" stroke=\"#000\" stroke-width=\"1.5\"");
@@ -447,7 +447,7 @@ void detail_sheet::centre_and_contact()
         circle(p, 4, "fill=\"#c0392b\" stroke=\"none\"");
         if (demand > 0) circle(turn(p, centre, angle), 3.5, "fill=\"none\" stroke=\"#c0392b\" stroke-width=\"1.2\"");
         add_label(p, "first contact at " + rad(*cl.rotation) + ": " + cl.contact->description(), "#8e1b1b");
-        add_label({0.5 * (centre.x + p.x), 0.5 * (centre.y + p.y)}, "lever arm " + len(cl.contact->lever_arm),
+        add_label({0.5 * (centre.x + p.x), 0.5 * (centre.y + p.y)}, "centre to contact " + len(cl.contact->distance),
                   "#8e1b1b");
     } else {
         add_label(centre, "no contact within pi/2 rad in this sense", "#8e1b1b");

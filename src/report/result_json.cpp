@@ -62,6 +62,9 @@ json detail_json(const detail_assessment& d, const joint& j)
                                    {"closure_rotation", number(c.closure_rotation)},
                                    {"contact_force", number(c.contact_force)},
                                    {"lever_arm", number(c.lever_arm)},
+                                   {"phase_start", to_string(c.result.start)},
+                                   {"phase_end", to_string(c.result.end)},
+                                   {"assumptions", c.assumptions},
                                    {"state", to_json(c.result.state)}};
     } else {
         out["closure_analysis"] = nullptr;

@@ -63,7 +63,8 @@ struct units_view {
     }
     static bool is_position(const result_field& f)
     {
-        return f.member == &beam_state::max_sagging_at || f.member == &beam_state::max_deflection_at;
+        return f.member == &beam_state::max_sagging_at || f.member == &beam_state::max_hogging_at ||
+               f.member == &beam_state::max_deflection_at;
     }
     std::string span(double m) const
     {
@@ -149,7 +150,7 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
         }
         if (jt.support_rotation > 0)
             o << "    demand includes the support's own rotation " << u.num(jt.support_rotation, dims::angle) << " "
-              << u.unit(dims::angle) << "\n";
+              << u.unit(dims::angle) << " in each sense (its sense is not given)\n";
         if (d.gap.min_gap_required)
             o << "    smallest as-detailed gap that passes: " << u.num(*d.gap.min_gap_required, dims::length) << " "
               << u.unit(dims::length) << "\n";
@@ -161,9 +162,13 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
             const auto& c = *d.consequence;
             const double M = j->end == beam_end::start ? c.result.state.moment_start : c.result.state.moment_end;
             o << "    after closure (" << c.combination << ", lower-bound stiffness): joint moment "
-              << u.num(M, dims::moment) << " " << u.unit(dims::moment) << ", flange contact force "
-              << u.num(c.contact_force, dims::force) << " " << u.unit(dims::force) << ", max sagging moment "
-              << u.num(c.result.state.max_sagging_moment, dims::moment) << " " << u.unit(dims::moment) << "\n";
+              << u.num(M, dims::moment) << " " << u.unit(dims::moment) << ", bearing force "
+              << u.num(c.contact_force, dims::force) << " " << u.unit(dims::force) << " at an arm of "
+              << u.num(c.lever_arm, dims::length) << " " << u.unit(dims::length) << ", max sagging moment "
+              << u.num(c.result.state.max_sagging_moment, dims::moment) << " " << u.unit(dims::moment)
+              << ", max hogging moment " << u.num(c.result.state.max_hogging_moment, dims::moment) << " "
+              << u.unit(dims::moment) << "\n";
+            o << "      " << wrap(c.assumptions, 88, "      ") << "\n";
         }
     }
 
@@ -276,7 +281,9 @@ std::string text_report(const project_assessment& a, const std::string& version)
          "                   moment in general: the largest end moment comes with that joint rigid and the far\n"
          "                   joint pinned (docs/method/beam-model.md)\n"
          "  range min, max   envelope over the four corners of the joint-stiffness range box; the maximum sagging\n"
-         "                   moment and the deflection are also searched inside the box\n"
+         "                   and hogging moments and the deflection are also searched inside the box\n"
+         "  max hogging      the most hogging span moment, ends included, negative (sagging +); 0 where the\n"
+         "                   beam nowhere hogs\n"
          "  S*L/EI           joint stiffness relative to the beam; fixity r = 1/(1 + 3EI/(S*L)) (0 pin, 1 fixed)\n"
          "  signs            reactions up +, end moments hogging +, deflection down +, end rotations + in the\n"
          "                   sense a simply supported beam rotates under gravity load\n"

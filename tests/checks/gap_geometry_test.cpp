@@ -15,6 +15,12 @@
 //                  bracketing solver applied to the contact equation written
 //                  out afresh in the test.
 //   [EN 10365]     IPE 300, IPE 400 dimensions (h, b, tw, tf, r).
+//   [free body]    the beam end after closure as a free body about its centre
+//                  of rotation C (first principles): frictionless contact, so
+//                  the bearing force acts along the normal to the touching
+//                  surfaces at the contact point, in the position at contact;
+//                  its arm is the perpendicular distance from C to that line,
+//                  |(P_contact - C) x n|. Written out afresh in each case.
 #include <doctest/doctest.h>
 
 #include <array>
@@ -106,7 +112,7 @@ TEST_CASE("fin plate closure against the closed form and the pack check value")
     CHECK(*sag.rotation == doctest::Approx(0.06748).epsilon(1e-4));  // pack value to its 4 figures
     CHECK(sag.contact->outline_part == "bottom flange corner");
     CHECK(sag.contact->support_part == "column flange face");
-    CHECK(sag.contact->lever_arm == doctest::Approx(std::hypot(0.050, 0.150)).epsilon(1e-12));
+    CHECK(sag.contact->distance == doctest::Approx(std::hypot(0.050, 0.150)).epsilon(1e-12));
 
     // The issue's hand form with e = s - g = 50 mm, y = dc: y sin(t) - e (1 - cos(t)) = g.
     const double t = *sag.rotation;
@@ -471,4 +477,102 @@ TEST_CASE("per-thread results of a detail on a section [closed form]: a detail t
     // The values differ, so a stale answer would have been seen.
     CHECK(fresh(b, ipe300()) < fresh(a, ipe300()));
     CHECK(fresh(a, deeper) != fresh(a, ipe300()));
+}
+
+namespace {
+point2 turned(point2 p, point2 c, double angle)
+{
+    const double cs = std::cos(angle), sn = std::sin(angle);
+    return {c.x + cs * (p.x - c.x) - sn * (p.y - c.y), c.y + sn * (p.x - c.x) + cs * (p.y - c.y)};
+}
+double arm(point2 at, point2 c, point2 n) { return std::abs((at.x - c.x) * n.y - (at.y - c.y) * n.x); }
+}  // namespace
+
+TEST_CASE("contact force arm - column flange and column web: vertical offset of the turned corner [free body] - tol 1e-12")
+{
+    // Fin plate on an IPE 300: C = (-60, -150) mm, bottom flange corner
+    // P = (-10, -300) mm turns by +t (sagging) to P' and touches the face x = 0.
+    // The force is horizontal (normal n = (1, 0)): arm = |P'.y - C.y|.
+    for (support_type st : {support_type::column_flange, support_type::column_web}) {
+        connection_detail d = fin_plate(10 * mm);
+        d.support = st;
+        const auto sag = find_closure(build_geometry(d, ipe300()), rotation_sense::sagging);
+        REQUIRE(sag.rotation);
+        REQUIRE(sag.contact);
+        const point2 C{-0.060, -0.150};
+        const point2 Pt = turned({-0.010, -0.300}, C, *sag.rotation);
+        CHECK(Pt.x == doctest::Approx(0.0).epsilon(1e-12));  // on the face
+        const double expected = std::abs(Pt.y - C.y);
+        CHECK(sag.contact->lever_arm == doctest::Approx(expected).epsilon(1e-12));
+        // Free body: the force F = M / arm balances M about C; the straight
+        // distance |CP| = 158.1 mm would give a force 8 % low (unsafe), the fault
+        // issue 11 found.
+        const double M = 100e3;  // any moment beyond the joint's own share
+        const double F = M / sag.contact->lever_arm;
+        CHECK(F * expected == doctest::Approx(M).epsilon(1e-12));
+        CHECK(sag.contact->distance / sag.contact->lever_arm == doctest::Approx(std::hypot(0.05, 0.15) / expected).epsilon(1e-12));
+        CHECK(sag.contact->distance > 1.07 * sag.contact->lever_arm);
+    }
+}
+
+TEST_CASE("contact force arm - beam web support: a flange tip corner against the beam's turned bottom flange [free body] - tol 1e-12")
+{
+    // Web cleats into an IPE 400 whose top is 80 mm above ours (the case of the
+    // test above): C = (0, -230) mm; the supporting beam's bottom flange tip
+    // upper corner Q = (-85.7, -306.5) mm touches our bottom flange face, which
+    // has turned by +t. The force acts at Q along that face's normal
+    // n = (-sin t, cos t): arm = |(Q - C) x n|.
+    connection_detail d = web_cleats(15 * mm);
+    d.support = support_type::beam_web;
+    d.support_beam = ipe400_support(-80 * mm);
+    const auto sag = find_closure(build_geometry(d, ipe300()), rotation_sense::sagging);
+    REQUIRE(sag.rotation);
+    REQUIRE(sag.contact);
+    REQUIRE(sag.contact->support_part == "supporting beam bottom flange tip, upper corner");
+    const double t = *sag.rotation;
+    const point2 C{0.0, -0.230}, Q{-0.0857, -0.3065};
+    const double expected = arm(Q, C, {-std::sin(t), std::cos(t)});
+    CHECK(sag.contact->lever_arm == doctest::Approx(expected).epsilon(1e-12));
+    CHECK(sag.contact->lever_arm < sag.contact->distance);
+}
+
+TEST_CASE("contact force arm - beam web support: a corner against the root fillet acts along its radius [free body] - tol 1e-12")
+{
+    // 10 mm gap: our bottom flange corner P = (-10, -300) mm turns about
+    // C = (0, -230) mm into the bottom root fillet, centre O = (-21, -285.5) mm,
+    // radius 21 mm. The force acts along O -> P' (the fillet's normal).
+    connection_detail d = web_cleats(10 * mm);
+    d.support = support_type::beam_web;
+    d.support_beam = ipe400_support(-80 * mm);
+    const auto sag = find_closure(build_geometry(d, ipe300()), rotation_sense::sagging);
+    REQUIRE(sag.rotation);
+    REQUIRE(sag.contact);
+    REQUIRE(sag.contact->support_part == "supporting beam bottom root fillet");
+    const point2 C{0.0, -0.230}, O{-0.021, -0.2855};
+    const point2 Pt = turned({-0.010, -0.300}, C, *sag.rotation);
+    const double r = std::hypot(Pt.x - O.x, Pt.y - O.y);
+    CHECK(r == doctest::Approx(0.021).epsilon(1e-9));  // on the fillet
+    const double expected = arm(Pt, C, {(Pt.x - O.x) / r, (Pt.y - O.y) / r});
+    CHECK(sag.contact->lever_arm == doctest::Approx(expected).epsilon(1e-9));
+}
+
+TEST_CASE("contact force arm - beam web support: a cope corner against the web face is horizontal [free body] - tol 1e-12")
+{
+    // Fin plate into an IPE 400 with a 40 x 100 mm top cope: in hogging the top
+    // cope corner at the beam end, P = (-10, -40) mm, turns by -t about
+    // C = (-60, -150) mm and touches the web face x = 0: the force is
+    // horizontal, arm |P'.y - C.y|.
+    connection_detail d = fin_plate(10 * mm);
+    d.support = support_type::beam_web;
+    d.support_beam = ipe400_support(0.0);
+    d.cope_top = cope{40 * mm, 100 * mm};
+    const auto g = build_geometry(d, ipe300());
+    const auto hog = find_closure(g, rotation_sense::hogging);
+    REQUIRE(hog.rotation);
+    REQUIRE(hog.contact);
+    REQUIRE(hog.contact->description() == "top cope corner against supporting beam web face");
+    const point2 C = g.centre_hogging;
+    const point2 Pt = turned(hog.contact->at, C, -*hog.rotation);
+    CHECK(Pt.x == doctest::Approx(0.0).epsilon(1e-12));
+    CHECK(hog.contact->lever_arm == doctest::Approx(std::abs(Pt.y - C.y)).epsilon(1e-12));
 }

@@ -299,6 +299,9 @@ TEST_CASE("format_number: significant figures - fixed or scientific layout (exac
     CHECK(format_number(-0.0) == "0");
     CHECK(format_number(2.0, 1) == "2");
     CHECK(format_number(1.0 / 3.0, 3) == "0.333");
+    CHECK(format_number(-9.9996) == "-10.00");
+    CHECK(format_number(99999.6) == "100000");
+    CHECK(format_number(0.00099996) == "0.001000");
 }
 
 TEST_CASE("format refuses non-finite values and bad precision with internal_error")
@@ -348,4 +351,29 @@ TEST_CASE("round trips parse(format_quantity(x)) (17 s.f.: 1e-12 relative - 4 s.
             CHECK(parse_quantity(full).dim == d);
             CHECK(close(parse_quantity(short_form).value, x, 5e-4));
         }
+}
+
+TEST_CASE("format_number: values that agree to 1e-9 print the same - round once from the decimal digits (exact strings)")
+{
+    // Issue 11: equal symmetric end values printed as 68.17 and 68.18. The rule
+    // is the project's (common practice, no source): round once, half away from
+    // zero, from the 9-figure decimal of the value.
+    const double below = 68.17499999999999, above = 68.17500000000001;
+    CHECK(format_number(below) == "68.18");
+    CHECK(format_number(above) == "68.18");
+    CHECK(format_number(-below) == "-68.18");
+    // 2.675 is stored as 2.67499999999999982236431605997495353221893310546875.
+    CHECK(format_number(2.675, 3) == "2.68");
+    CHECK(format_number(0.1 * 3, 1) == format_number(0.3, 1));
+    // A real difference above 1e-9 still shows.
+    CHECK(format_number(68.1749) == "68.17");
+    // Property: a value and its neighbours within 1e-12 relative print the same,
+    // over 10 000 values placed on the half-way points of 4 figures.
+    int differ = 0;
+    for (int k = 1000; k < 11000; ++k) {
+        const double half = (k + 0.5) * 1e-2;  // 10.005 ... 110.005
+        const std::string a = format_number(half * (1 - 1e-12)), b = format_number(half * (1 + 1e-12));
+        if (a != b) ++differ;
+    }
+    CHECK(differ == 0);
 }

@@ -11,6 +11,10 @@
 //            (standard gravity, 3rd CGPM 1901); kip = 1000 lbf; ksi = kip/in^2.
 //   [E-EN]   EN 1993-1-1:2005 3.2.6(1): E = 210 000 N/mm^2.
 //   [E-AISC] AISC 360-16, Symbols: E = 29 000 ksi.
+//   [SPAN-END] The project's rule (common practice, no source): a position
+//            within a relative 1e-9 of the span from 0 or from the span is that
+//            end; issue 11 found "7100 mm" on "7.1 m" and "384 in" on "32 ft"
+//            refused because the converted position lay one ulp above the span.
 // Tolerances are stated in each case.
 #include <doctest/doctest.h>
 
@@ -19,6 +23,7 @@
 #include <nlohmann/json.hpp>
 
 #include <algorithm>
+#include <charconv>
 #include <chrono>
 #include <cmath>
 #include <cstdio>
@@ -433,4 +438,88 @@ TEST_CASE("a 50 MB file with one wrong field is refused with exit 2 and its poin
     CHECK_FALSE(has_stray_temporary(tmp.path));
     // Speed belongs to the benchmark, not to a test: the time is only reported.
     MESSAGE("50 MB file refused in " << seconds << " s");
+}
+
+namespace {
+
+// One beam with the span and the end of a full-length distributed load and a
+// point load at the span end, each written in its own unit.
+std::string span_end_project(const std::string& span, const std::string& to)
+{
+    return R"({"format": "pinproof-project/1", "title": "t", "standard": "EN1993-1-8", "frame": "braced",
+  "beams": [{"id": "B", "span": ")" + span + R"(", "E": "210 GPa",
+    "section": {"I": "8356 cm4", "depth": "300 mm"},
+    "loads": [{"case": "G", "kind": "udl", "w": "20 kN/m", "from": "0 mm", "to": ")" + to + R"("},
+              {"case": "G", "kind": "point", "P": "5 kN", "at": ")" + to + R"("}],
+    "combinations": [{"name": "C", "use": "strength", "factors": {"G": 1}}],
+    "joints": {"start": {"stiffness": 0}, "end": {"stiffness": 0}}}]})";
+}
+
+// Shortest decimal that reads back as v ("7.1", not "7.0999999999999996").
+std::string shortest(double v)
+{
+    char buf[64];
+    const auto r = std::to_chars(buf, buf + sizeof buf, v);
+    return std::string(buf, r.ptr);
+}
+
+}  // namespace
+
+TEST_CASE("a load ending at the span written in another unit is the span end [SPAN-END] - exact")
+{
+    for (const auto& [span, to] : std::vector<std::pair<std::string, std::string>>{
+             {"7.1 m", "7100 mm"}, {"32 ft", "384 in"}, {"7100 mm", "7.1 m"}, {"384 in", "32 ft"}}) {
+        CAPTURE(span);
+        const project p = parse_project(span_end_project(span, to));
+        const beam& b = p.beams.at(0);
+        CHECK(b.loads.at(0).to == b.span);
+        CHECK(b.loads.at(1).from == b.span);
+    }
+}
+
+TEST_CASE("position_on_span: within 1e-9 of the span is the end and beyond is refused [SPAN-END] - exact")
+{
+    const double L = 7.1;
+    CHECK(position_on_span(L * (1 + 0.9e-9), L) == L);
+    CHECK(position_on_span(L * (1 - 0.9e-9), L) == L);
+    CHECK(position_on_span(-0.9e-9 * L, L) == 0.0);
+    CHECK_FALSE(position_on_span(L * (1 + 2e-9), L).has_value());
+    CHECK_FALSE(position_on_span(-2e-9 * L, L).has_value());
+    CHECK(position_on_span(0.5 * L, L) == 0.5 * L);
+}
+
+TEST_CASE("property: 1000 random spans with the load end in another unit are all accepted [SPAN-END] - exact")
+{
+    std::mt19937 rng(20261205);
+    std::uniform_int_distribution<int> metric(1000, 150000);  // span in mm, 1 m to 150 m
+    std::uniform_int_distribution<int> imperial(4, 600);      // span in quarter feet (3 in), 1 ft to 150 ft
+    std::uniform_int_distribution<int> pair(0, 5);
+    int refused = 0;
+    for (int i = 0; i < 1000; ++i) {
+        std::string span, to;
+        const int k = pair(rng);
+        if (k < 3) {
+            const int mm = metric(rng);
+            const std::string m = shortest(mm / 1000.0), cm = shortest(mm / 10.0), in_mm = std::to_string(mm);
+            if (k == 0) span = m + " m", to = in_mm + " mm";
+            else if (k == 1) span = in_mm + " mm", to = m + " m";
+            else span = cm + " cm", to = m + " m";
+        } else {
+            const int quarter_feet = imperial(rng);
+            const std::string ft = shortest(quarter_feet / 4.0), in = std::to_string(3 * quarter_feet);
+            if (k == 3) span = ft + " ft", to = in + " in";
+            else if (k == 4) span = in + " in", to = ft + " ft";
+            else span = ft + "ft", to = in + "in";
+        }
+        CAPTURE(span);
+        CAPTURE(to);
+        try {
+            const project p = parse_project(span_end_project(span, to));
+            CHECK(p.beams.at(0).loads.at(0).to == p.beams.at(0).span);
+        } catch (const input_error& e) {
+            ++refused;
+            FAIL_CHECK(e.what());
+        }
+    }
+    CHECK(refused == 0);
 }

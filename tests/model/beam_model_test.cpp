@@ -492,3 +492,49 @@ TEST_CASE("loads 1e-6 L apart keep equilibrium to 1e-9 (the case an assembled st
     CHECK_NOTHROW(m.solve(stiffness::spring(3e5), stiffness::rigid()));
     CHECK_NOTHROW(m.solve(stiffness::pinned(), stiffness::pinned()));
 }
+
+TEST_CASE("max hogging span moment - pinned beam under uplift: -wL^2/8 at L/2 [R8.1] - tol 1e-9")
+{
+    // Simply supported beam, UDL: M(L/2) = wL^2/8 [R8.1]; an upward load is the
+    // same with the sign reversed. Issue 11: this governing moment was reported nowhere.
+    const beam_model m(L, EI, {udl(-w)});
+    const beam_state s = m.solve(stiffness::pinned(), stiffness::pinned());
+    CHECK(s.max_hogging_moment == doctest::Approx(-w * L * L / 8).epsilon(1e-9));
+    CHECK(s.max_hogging_at == doctest::Approx(L / 2).epsilon(1e-9));
+    // Nothing sags: the largest M(x) is the zero at the supports, and of the two
+    // equal zeros the first from the start is kept (no flip on round-off).
+    CHECK(std::abs(s.max_sagging_moment) <= 1e-9 * w * L * L);
+    CHECK(s.max_sagging_at == 0.0);
+}
+
+TEST_CASE("max hogging span moment - none under gravity on pins: 0 at the start [R8.1] - exact")
+{
+    const beam_model m(L, EI, {udl(w)});
+    const beam_state s = m.solve(stiffness::pinned(), stiffness::pinned());
+    CHECK(s.max_hogging_moment == 0.0);
+    CHECK(s.max_hogging_at == 0.0);
+    CHECK(s.max_sagging_moment == doctest::Approx(w * L * L / 8).epsilon(1e-9));
+}
+
+TEST_CASE("max hogging span moment - fixed ends under gravity: -wL^2/12 at the start [R8.1] - tol 1e-9")
+{
+    // Fixed-fixed beam, UDL: end moments wL^2/12 hogging [R8.1]; the two equal
+    // extremes at the ends report the first from the start.
+    const beam_model m(L, EI, {udl(w)});
+    const beam_state s = m.solve(stiffness::rigid(), stiffness::rigid());
+    CHECK(s.max_hogging_moment == doctest::Approx(-w * L * L / 12).epsilon(1e-9));
+    CHECK(s.max_hogging_at == 0.0);
+    CHECK(s.max_sagging_moment == doctest::Approx(w * L * L / 24).epsilon(1e-9));
+}
+
+TEST_CASE("max hogging span moment - propped cantilever under uplift: sagging wL^2/8 at the fixed end [R8.1] - tol 1e-9")
+{
+    // Fixed start and pinned end under a UDL: M_A = wL^2/8 hogging, the span
+    // maximum 9wL^2/128 at 5L/8 from the fixed end [R8.1]. Under uplift both reverse.
+    const beam_model m(L, EI, {udl(-w)});
+    const beam_state s = m.solve(stiffness::rigid(), stiffness::pinned());
+    CHECK(s.max_sagging_moment == doctest::Approx(w * L * L / 8).epsilon(1e-9));
+    CHECK(s.max_sagging_at == 0.0);
+    CHECK(s.max_hogging_moment == doctest::Approx(-9 * w * L * L / 128).epsilon(1e-9));
+    CHECK(s.max_hogging_at == doctest::Approx(5 * L / 8).epsilon(1e-9));
+}

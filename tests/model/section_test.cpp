@@ -6,7 +6,10 @@
 //              DIN 1025-3, HE B as DIN 1025-2). Tabulated A, Iy, Wel,y, Wpl,y.
 //   [AISC]     AISC Steel Construction Manual, Table 1-1 (W shapes).
 //              Tabulated A, Ix, Sx, Zx.
-//   All handbook property values below are from memory of these tables.
+//   All handbook property values below are from memory of these tables,
+//   except W18x35, IPE 300, IPE 400 and HE 300 A, which are in the reference
+//   pack (section 8). The catalogue stores and uses the W shapes' tabulated
+//   A, Ix, Sx, Zx; IPE and HE properties are computed from the dimensions.
 //   [sympy]    python3-sympy exact integration of the section outline.
 //   [strips]   strip integration of the section outline, written here.
 #include <doctest/doctest.h>
@@ -50,6 +53,16 @@ section lookup(const char* name)
     return *s;
 }
 
+// The properties computed from the catalogue row's dimensions alone (the
+// check on the stored tabulated values, and on the dimensions).
+section computed(const char* name)
+{
+    for (const auto& d : catalogue())
+        if (d.name == name) return rolled_i_section(d);
+    FAIL("catalogue has no section " << name);
+    return {};
+}
+
 }  // namespace
 
 TEST_CASE("section properties against handbook tables (from memory) - tolerance 0.5 %")
@@ -72,7 +85,7 @@ TEST_CASE("section properties against handbook tables (from memory) - tolerance 
     for (const auto& row : rows) {
         CAPTURE(row.name);
         CAPTURE(row.source);
-        const section s = lookup(row.name);
+        const section s = computed(row.name);
         CHECK(rel_diff(*s.area, row.A) <= tol);
         CHECK(rel_diff(s.I, row.I) <= tol);
         CHECK(rel_diff(*s.W_el, row.W_el) <= tol);
@@ -80,7 +93,81 @@ TEST_CASE("section properties against handbook tables (from memory) - tolerance 
     }
 }
 
-TEST_CASE("every catalogue row reproduces its tabulated A and Iy (from memory)")
+TEST_CASE("W shapes use the tabulated A Ix Sx Zx of AISC Manual Table 1-1 - exact to 1e-12")
+{
+    // Issue 11: the values computed from the rounded dimensions and the
+    // equivalent fillet r = k_des - tf differ from the manual by up to 0.8 %,
+    // so the catalogue stores and uses the manual's. W18x35: reference pack
+    // section 8 (A 10.3 in2, Ix 510 in4, Sx 57.6 in3, Zx 66.5 in3); the other
+    // rows from memory of AISC Manual Table 1-1.
+    const handbook_row rows[] = {
+        {"W18x35", "AISC Table 1-1, reference pack section 8", 10.3 * in2, 510 * in4, 57.6 * in3, 66.5 * in3},
+        {"W16x40", "AISC Table 1-1 (from memory)", 11.8 * in2, 518 * in4, 64.7 * in3, 73.0 * in3},
+        {"W14x30", "AISC Table 1-1 (from memory)", 8.85 * in2, 291 * in4, 42.0 * in3, 47.3 * in3},
+        {"W10x22", "AISC Table 1-1 (from memory)", 6.49 * in2, 118 * in4, 23.2 * in3, 26.0 * in3},
+        {"W33x118", "AISC Table 1-1 (from memory)", 34.7 * in2, 5900 * in4, 359 * in3, 415 * in3},
+    };
+    for (const auto& row : rows) {
+        CAPTURE(row.name);
+        const section s = lookup(row.name);
+        CHECK(*s.area == doctest::Approx(row.A).epsilon(1e-12));
+        CHECK(s.I == doctest::Approx(row.I).epsilon(1e-12));
+        CHECK(*s.W_el == doctest::Approx(row.W_el).epsilon(1e-12));
+        CHECK(*s.W_pl == doctest::Approx(row.W_pl).epsilon(1e-12));
+    }
+    // Every W row stores all four; every European row none (computed, below).
+    for (const auto& d : catalogue()) {
+        CAPTURE(d.name);
+        const bool w = d.name.rfind("W", 0) == 0;
+        CHECK(d.A.has_value() == w);
+        CHECK(d.I.has_value() == w);
+        CHECK(d.W_el.has_value() == w);
+        CHECK(d.W_pl.has_value() == w);
+    }
+}
+
+TEST_CASE("the stored W values agree with the values computed from the dimensions within 0.9 % (from memory)")
+{
+    // The computation from dimensions is the check on each stored value: a
+    // mistyped or misremembered value moves by more than the 0.8 % the
+    // equivalent fillet explains.
+    for (const auto& d : catalogue()) {
+        if (!d.A) continue;
+        CAPTURE(d.name);
+        const section c = rolled_i_section(d);
+        CHECK(rel_diff(*c.area, *d.A) <= 0.009);
+        CHECK(rel_diff(c.I, *d.I) <= 0.009);
+        CHECK(rel_diff(*c.W_el, *d.W_el) <= 0.009);
+        CHECK(rel_diff(*c.W_pl, *d.W_pl) <= 0.009);
+    }
+}
+
+TEST_CASE("IPE and HE sections use the computed values - within 0.1 % of the EN 10365 values of the reference pack")
+{
+    // Reference pack section 8: IPE 300 53.8 cm2 / 8356 cm4 / 557 cm3 / 628 cm3,
+    // IPE 400 84.5 / 23 130 / 1156 / 1307, HE 300 A 112.5 / 18 260 / 1260 / 1383
+    // ([M] there, each reproduced by the formula within 0.1 % [D]). Tolerance:
+    // 0.1 %, the issue's bound for keeping the computed values, widened by the
+    // table's rounding of W_el, W_pl to whole cm3 where that is larger.
+    const handbook_row rows[] = {
+        {"IPE 300", "pack 8", 53.8 * cm2, 8356 * cm4, 557 * cm3, 628 * cm3},
+        {"IPE 400", "pack 8", 84.5 * cm2, 23130 * cm4, 1156 * cm3, 1307 * cm3},
+        {"HE 300 A", "pack 8", 112.5 * cm2, 18260 * cm4, 1260 * cm3, 1383 * cm3},
+    };
+    for (const auto& row : rows) {
+        CAPTURE(row.name);
+        const section s = lookup(row.name);
+        const section c = computed(row.name);
+        CHECK(*s.area == *c.area);  // the catalogue uses the computed value
+        CHECK(s.I == c.I);
+        CHECK(rel_diff(*s.area, row.A) <= 0.001);
+        CHECK(rel_diff(s.I, row.I) <= 0.001);
+        CHECK(rel_diff(*s.W_el, row.W_el) <= std::max(0.001, 0.5 * cm3 / row.W_el));
+        CHECK(rel_diff(*s.W_pl, row.W_pl) <= std::max(0.001, 0.5 * cm3 / row.W_pl));
+    }
+}
+
+TEST_CASE("every catalogue row computed from its dimensions reproduces its tabulated A and Iy (from memory)")
 {
     // A transcription guard for the whole catalogue: a mistyped dimension
     // moves A or Iy by more than the rounding of the tables.
@@ -122,13 +209,13 @@ TEST_CASE("every catalogue row reproduces its tabulated A and Iy (from memory)")
     };
     for (const auto& r : european) {
         CAPTURE(r.name);
-        const section s = lookup(r.name);
+        const section s = computed(r.name);
         CHECK(rel_diff(*s.area, r.A * cm2) <= 0.005);
         CHECK(rel_diff(s.I, r.I * cm4) <= 0.005);
     }
     for (const auto& r : w_shapes) {
         CAPTURE(r.name);
-        const section s = lookup(r.name);
+        const section s = computed(r.name);
         CHECK(rel_diff(*s.area, r.A * in2) <= 0.01);
         CHECK(rel_diff(s.I, r.I * in4) <= 0.01);
     }
@@ -185,7 +272,7 @@ TEST_CASE("closed forms against strip integration of the outline [strips] - tole
     // The midpoint rule error with 1e5 strips is far below 1e-6.
     for (const char* name : {"IPE 300", "HE 300 A", "HE 600 B", "W18x35", "IPE 80"}) {
         CAPTURE(name);
-        const section s = lookup(name);
+        const section s = computed(name);
         section_dimensions d{name, s.depth, *s.flange_width, *s.web_thickness, *s.flange_thickness, *s.root_radius};
         const integrated n = strip_integration(d, 100000);
         CHECK(rel_diff(*s.area, n.A) <= 1e-6);

@@ -62,7 +62,7 @@ TEST_CASE("the drawing states its factor - the closure and the review note")
     CHECK(svg.find("For review by a qualified engineer.") != std::string::npos);
     CHECK(svg.find("0.06748 rad") != std::string::npos);  // closure of the pack's fin plate case
     CHECK(svg.find("bottom flange corner against column flange face") != std::string::npos);
-    CHECK(svg.find("lever arm 158 mm") != std::string::npos);
+    CHECK(svg.find("centre to contact 158 mm") != std::string::npos);
     CHECK(svg.find("centre of rotation") != std::string::npos);
     CHECK(svg.find("gap 10.0 mm") != std::string::npos);
     CHECK(svg.find("nan") == std::string::npos);

@@ -69,7 +69,13 @@ struct closure_consequence {
     closed_state result;
     double closure_rotation = 0;  // rad, of the beam end (the support's own rotation taken off)
     double contact_force = 0;     // N: moment beyond the joint's own share over the lever arm
-    double lever_arm = 0;         // m, centre of rotation to the contact point
+    // m, perpendicular distance from the centre of rotation to the line of
+    // action of the bearing force (frictionless contact, normal to the surfaces)
+    double lever_arm = 0;
+    // What the state after closure is, in words: the model, each joint's phase
+    // (open, or closed and held at its closure rotation by contact), and what
+    // the state's stiffness fields mean. Shown in every output.
+    std::string assumptions;
 };
 
 struct detail_assessment {

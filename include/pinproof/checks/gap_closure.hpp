@@ -5,6 +5,7 @@
 #pragma once
 
 #include <optional>
+#include <string>
 
 #include "pinproof/model/beam_model.hpp"
 
@@ -18,6 +19,7 @@ struct closing_joint {
 };
 
 enum class joint_phase { closed_hogging, open, closed_sagging };
+std::string to_string(joint_phase p);  // "closed-hogging", "open", "closed-sagging"
 
 struct closed_state {
     beam_state state;

@@ -112,6 +112,10 @@ display_unit display_unit_for(dimension d, unit_system system);
 // (48.00, 0.01026; 12345 stays "12345"). Scientific notation ("1.500e+09") is
 // used when the rounded magnitude is >= 1e9 or fixed-point would need more
 // than 6 decimals, so no figure is ever lost. Zero (also -0) prints as "0".
+// Rounding happens once, in decimal: the value is first written to 9
+// significant figures and the shown figures are rounded from those digits,
+// half away from zero, so values that agree to about 1e-9 print the same
+// (68.17499999999999 and 68.17500000000001 both as "68.18").
 // `significant` must be 1..17, otherwise internal_error.
 std::string format_quantity(double si_value, dimension d, unit_system system, int significant = 4);
 

@@ -42,6 +42,12 @@ struct beam_state {
     double moment_end = 0;          // N*m, hogging positive
     double max_sagging_moment = 0;  // N*m, largest M(x) over the span (may be negative)
     double max_sagging_at = 0;      // m from the start
+    // N*m, the most hogging M(x) over the span, ends included (<= 0: the
+    // governing span moment under uplift); 0 at the start (x = 0) when M(x)
+    // is nowhere hogging. Of equal values within round-off, the first from
+    // the start is kept, for both extremes.
+    double max_hogging_moment = 0;
+    double max_hogging_at = 0;      // m from the start
     double max_deflection = 0;      // m, downward positive: w(x) of largest magnitude
     double max_deflection_at = 0;   // m from the start
     double rotation_start = 0;      // rad, positive as a simply supported beam under gravity

@@ -121,7 +121,15 @@ struct contact_point {
     std::string support_part;  // "support face", "supporting beam top flange tip", ...
     point2 at;                 // on the outline, at rest
     point2 centre;
-    double lever_arm = 0;      // distance from the centre to `at`
+    // Contact model: frictionless, so the bearing force acts along the normal
+    // to the touching surfaces at the contact point (the support face, a root
+    // fillet's radius, or the beam outline's edge where a support corner
+    // touches it), in the position at contact. Its arm about the centre of
+    // rotation is the perpendicular distance from the centre to that line of
+    // action (docs/method/gap-geometry.md), never longer than `distance`.
+    point2 normal;             // unit normal at contact, in the position at contact
+    double lever_arm = 0;      // m, perpendicular distance from the centre to the line of action
+    double distance = 0;       // m, straight distance from the centre to `at`
     std::string description() const;  // "bottom flange corner against support face"
 };
 

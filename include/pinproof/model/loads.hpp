@@ -2,6 +2,7 @@
 #pragma once
 
 #include <map>
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -24,6 +25,12 @@ struct load {
     double to = 0;         // distributed loads only
     std::string load_case; // e.g. "G", "Q"
 };
+
+// A position along the span as read from input (m), or nullopt when it lies
+// outside [0, span]. A position within a relative 1e-9 of the span from 0 or
+// from the span is that end exactly: "7100 mm" on a span of "7.1 m" converts
+// to one unit in the last place above the span, and is the span end.
+std::optional<double> position_on_span(double x, double span);
 
 // Line load intensity of a distributed load at x (N/m); 0 outside it.
 double intensity_at(const load& l, double x);

@@ -16,15 +16,17 @@ struct result_field {
     double beam_state::*member;
 };
 
-inline const std::array<result_field, 10>& result_fields()
+inline const std::array<result_field, 12>& result_fields()
 {
-    static const std::array<result_field, 10> fields{{
+    static const std::array<result_field, 12> fields{{
         {"reaction_start", "reaction, start (up +)", dims::force, &beam_state::reaction_start},
         {"reaction_end", "reaction, end (up +)", dims::force, &beam_state::reaction_end},
         {"moment_start", "end moment, start (hogging +)", dims::moment, &beam_state::moment_start},
         {"moment_end", "end moment, end (hogging +)", dims::moment, &beam_state::moment_end},
         {"max_sagging_moment", "max sagging moment", dims::moment, &beam_state::max_sagging_moment},
         {"max_sagging_at", "  at, from start", dims::length, &beam_state::max_sagging_at},
+        {"max_hogging_moment", "max hogging moment (0: none)", dims::moment, &beam_state::max_hogging_moment},
+        {"max_hogging_at", "  at, from start", dims::length, &beam_state::max_hogging_at},
         {"max_deflection", "max deflection (down +)", dims::length, &beam_state::max_deflection},
         {"max_deflection_at", "  at, from start", dims::length, &beam_state::max_deflection_at},
         {"rotation_start", "end rotation, start", dims::angle, &beam_state::rotation_start},

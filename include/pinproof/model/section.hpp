@@ -20,6 +20,10 @@ struct section_dimensions {
     double tw = 0;             // web thickness
     double tf = 0;             // flange thickness
     double r = 0;              // root radius
+    // Properties as tabulated by the section's standard, where the catalogue
+    // stores them (SI); the catalogue uses them in place of the values computed
+    // from the dimensions. nullopt: computed.
+    std::optional<double> A, I, W_el, W_pl;
 };
 
 struct section {
@@ -35,8 +39,14 @@ struct section {
     std::optional<double> W_pl;  // plastic section modulus, major axis
 };
 
-// Properties of a doubly symmetric rolled I section with four root fillets.
+// Properties of a doubly symmetric rolled I section with four root fillets,
+// computed from the dimensions (the tabulated values of `d` are ignored).
 section rolled_i_section(const section_dimensions& d);
+
+// The section as the catalogue gives it: computed from the dimensions, with
+// each tabulated property of `d` in place of the computed one (W shapes: AISC
+// Manual Table 1-1 A, Ix, Sx, Zx; docs/file-format.md says which is used).
+section catalogue_section(const section_dimensions& d);
 
 // Looks a section up in the built-in catalogue. Matching ignores case and
 // spaces and accepts common spellings ("IPE300", "HE 300 A", "HEA300",

@@ -1,0 +1,188 @@
+// Verification of checks of the assessment (src/checks/assessment.cpp) that
+// no other test file covers: the support rotation in the gap demand and the
+// reversal of an end moment across the combinations.
+//
+// References:
+//   [R8.1]  Simply supported beam, UDL: end rotation wL^3/(24 EI), M(L/2) = wL^2/8
+//           (Hicks, Civil Engineering Formulas, Fig. 2.2, confirmed; pack section 6).
+//   [MW63]  Monforton & Wu 1963, equal springs of fixity r under a symmetric load:
+//           M = MF 3r/(2 + r), MF = wL^2/12 (pack section 5).
+//   [RULE]  The project's rules (docs/method/checks.md; common practice, no source):
+//           the support rotation, a magnitude of unknown sense, adds to the demand
+//           of both senses; an end moment that changes sign across the combinations
+//           is a warning.
+#include <doctest/doctest.h>
+
+#include <cmath>
+#include <string>
+
+#include "pinproof/checks/assessment.hpp"
+#include "pinproof/io/project_input.hpp"
+#include "pinproof/model/project.hpp"
+
+using namespace pinproof;
+
+namespace {
+const check& find(const beam_assessment& a, const std::string& id)
+{
+    for (const auto& c : a.checks)
+        if (c.id == id) return c;
+    FAIL("no check " << id);
+    return a.checks.front();
+}
+}  // namespace
+
+namespace {
+// A 6 m IPE 300 on a fin plate at the start, with a support rotation, under a
+// downward (w > 0) or upward (w < 0) line load.
+std::string project_with_support_rotation(const std::string& w)
+{
+    return R"({"format": "pinproof-project/1", "title": "support rotation", "standard": "EN1993-1-8", "frame": "braced",
+      "beams": [{"id": "B", "span": "6 m", "section": "IPE 300",
+        "loads": [{"case": "G", "kind": "udl", "w": ")" + w + R"("}],
+        "combinations": [{"name": "ULS", "use": "strength", "factors": {"G": 1.0}}],
+        "joints": {"start": {"stiffness": 0, "support_rotation": "5 mrad",
+                             "detail": {"type": "fin-plate", "gap": "15 mm", "plate_top": "50 mm", "plate_depth": "200 mm",
+                                        "plate_thickness": "10 mm", "bolt_diameter": "20 mm", "bolt_rows": 3,
+                                        "bolt_pitch": "60 mm", "first_bolt": "40 mm", "bolt_line": "50 mm"}},
+                   "end": {"stiffness": 0}}}]})";
+}
+}  // namespace
+
+TEST_CASE("support rotation closes one side of the gap whatever the beam does: added in both senses [RULE] [R8.1] - tol 1e-9")
+{
+    // The project's rule (docs/method/checks.md; common practice, no source):
+    // the support rotation is a magnitude of unknown sense, so it adds to the
+    // sagging and to the hogging demand. Pinned end of a simply supported beam
+    // under a UDL: theta = w L^3 / (24 EI) (Hicks, Civil Engineering Formulas
+    // Fig. 2.2, confirmed; pack section 6).
+    const double phi = 5e-3;
+    SUBCASE("downward load: the beam turns sagging only - hogging demand is the support rotation alone")
+    {
+        const project p = parse_project(project_with_support_rotation("20 kN/m"));
+        const auto a = assess_beam(p, p.beams[0]);
+        REQUIRE(a.start.detail);
+        const double theta = 20e3 * 216.0 / (24.0 * p.beams[0].EI());
+        CHECK(a.start.detail->demand_sagging == doctest::Approx(theta + phi).epsilon(1e-9));
+        CHECK(a.start.detail->demand_hogging == doctest::Approx(phi).epsilon(1e-15));
+        CHECK(a.start.detail->gap.hogging.demand == doctest::Approx(phi).epsilon(1e-15));
+    }
+    SUBCASE("upward load: the beam turns hogging only - sagging demand is the support rotation alone")
+    {
+        const project p = parse_project(project_with_support_rotation("-20 kN/m"));
+        const auto a = assess_beam(p, p.beams[0]);
+        REQUIRE(a.start.detail);
+        const double theta = 20e3 * 216.0 / (24.0 * p.beams[0].EI());
+        CHECK(a.start.detail->demand_hogging == doctest::Approx(theta + phi).epsilon(1e-9));
+        CHECK(a.start.detail->demand_sagging == doctest::Approx(phi).epsilon(1e-15));
+        CHECK(a.start.detail->gap.sagging.demand == doctest::Approx(phi).epsilon(1e-15));
+    }
+}
+
+namespace {
+// A 6 m IPE 300 with equal joints under gravity G and wind uplift W, in two
+// strength combinations.
+std::string project_with_uplift(const std::string& stiffness)
+{
+    return R"({"format": "pinproof-project/1", "title": "uplift", "standard": "EN1993-1-8", "frame": "braced",
+      "beams": [{"id": "B", "span": "6 m", "section": "IPE 300", "E": "210 GPa",
+        "loads": [{"case": "G", "kind": "udl", "w": "5 kN/m"}, {"case": "W", "kind": "udl", "w": "-10 kN/m"}],
+        "combinations": [{"name": "gravity", "use": "strength", "factors": {"G": 1.35}},
+                         {"name": "uplift", "use": "strength", "factors": {"G": 1.0, "W": 1.5}}],
+        "joints": {"start": {"stiffness": )" + stiffness + R"(}, "end": {"stiffness": )" + stiffness + R"(}}}]})";
+}
+}  // namespace
+
+TEST_CASE("moment-reversal: a semi-rigid joint under gravity and uplift warns with both moments [MW63] [RULE] - tol 1e-9")
+{
+    const project p = parse_project(project_with_uplift("\"2 EI/L\""));
+    const auto a = assess_beam(p, p.beams[0]);
+    // S = 2 EI/L: r = 1/(1 + 3/2) = 0.4, M = (wL^2/12) 3r/(2 + r) = wL^2/12 x 0.5 [MW63].
+    const double L = 6.0, factor = 0.5;
+    const double gravity = 1.35 * 5e3 * L * L / 12 * factor;            // hogging
+    const double uplift = (1.5 * 10e3 - 1.0 * 5e3) * L * L / 12 * factor;  // sagging
+    for (const char* id : {"moment-reversal-start", "moment-reversal-end"}) {
+        CAPTURE(id);
+        const check& c = find(a, id);
+        CHECK(c.status == check_status::warn);
+        REQUIRE(c.value);
+        CHECK(*c.value == doctest::Approx(std::min(gravity, uplift)).epsilon(1e-9));
+        CHECK(c.message.find("gravity") != std::string::npos);
+        CHECK(c.message.find("uplift") != std::string::npos);
+    }
+    // The span moment under uplift: M(L/2) = -wL^2/8 + M_end, hogging [R8.1].
+    for (const auto& r : a.combinations) {
+        if (r.comb.name != "uplift") continue;
+        const double w_up = 1.5 * 10e3 - 5e3;
+        CHECK(r.corners[0].max_hogging_moment == doctest::Approx(-(w_up * L * L / 8 - uplift)).epsilon(1e-9));
+        CHECK(r.corners[0].max_hogging_at == doctest::Approx(L / 2).epsilon(1e-9));
+        CHECK(r.pinned.max_hogging_moment == doctest::Approx(-w_up * L * L / 8).epsilon(1e-9));
+    }
+}
+
+TEST_CASE("moment-reversal: a pinned joint takes no moment and passes [RULE] - exact")
+{
+    const project p = parse_project(project_with_uplift("0"));
+    const auto a = assess_beam(p, p.beams[0]);
+    CHECK(find(a, "moment-reversal-start").status == check_status::pass);
+    CHECK(find(a, "moment-reversal-end").status == check_status::pass);
+    CHECK(a.holds() == assess_beam(p, p.beams[0]).holds());
+}
+
+TEST_CASE("moment-reversal: gravity alone keeps the moment hogging and passes [RULE] - exact")
+{
+    std::string text = project_with_uplift("\"2 EI/L\"");
+    text.replace(text.find("\"W\": 1.5"), 8, "\"W\": 0.0");
+    const project p = parse_project(text);
+    const auto a = assess_beam(p, p.beams[0]);
+    const check& c = find(a, "moment-reversal-start");
+    CHECK(c.status == check_status::pass);
+    CHECK(c.message.find("hogging") != std::string::npos);
+}
+
+namespace {
+// An 8 m IPE 240 on a 1 mm end plate at the start (plate 40 mm below the top,
+// 150 mm deep): the gap closes in sagging under the strength combination.
+std::string project_closing()
+{
+    return R"({"format": "pinproof-project/1", "title": "closure", "standard": "EN1993-1-8", "frame": "braced",
+      "beams": [{"id": "B", "span": "8 m", "section": "IPE 240",
+        "loads": [{"case": "G", "kind": "udl", "w": "12 kN/m"}, {"case": "Q", "kind": "udl", "w": "10 kN/m"}],
+        "combinations": [{"name": "ULS", "use": "strength", "factors": {"G": 1.35, "Q": 1.5}}],
+        "joints": {"start": {"stiffness": {"min": "100 kN*m/rad", "max": "0.2 EI/L"},
+                             "detail": {"type": "end-plate", "plate_thickness": "1 mm", "plate_top": "40 mm",
+                                        "plate_depth": "150 mm", "bolt_rows": 2}},
+                   "end": {"stiffness": 0}}}]})";
+}
+}  // namespace
+
+TEST_CASE("state after closure: labelled with each joint's phase - bearing force from the free body [RULE] - tol 1e-12")
+{
+    // Free body of the beam end about its centre of rotation C (first
+    // principles; docs/method/gap-geometry.md): the end moment beyond the
+    // joint's own share S theta_c is carried by the bearing force F on the
+    // column face, horizontal (frictionless contact), at the arm |P'.y - C.y|
+    // of the turned bottom flange corner P'. End plate: C on the face at the
+    // plate's bottom edge, (0, -190) mm; P = (-1, -240) mm at rest.
+    const project p = parse_project(project_closing());
+    const auto a = assess_beam(p, p.beams[0]);
+    REQUIRE(a.start.detail);
+    REQUIRE(a.start.detail->consequence);
+    const auto& cc = *a.start.detail->consequence;
+    CHECK(cc.result.start == joint_phase::closed_sagging);
+    CHECK(cc.result.end == joint_phase::open);
+    CHECK(cc.assumptions.find("held at its closure rotation") != std::string::npos);
+    CHECK(cc.assumptions.find("End joint: open") != std::string::npos);
+    const double t = cc.closure_rotation;
+    const double Cx = 0.0, Cy = -0.190, Px = -0.001, Py = -0.240;
+    const double x = Cx + std::cos(t) * (Px - Cx) - std::sin(t) * (Py - Cy);
+    const double y = Cy + std::sin(t) * (Px - Cx) + std::cos(t) * (Py - Cy);
+    CHECK(x == doctest::Approx(0.0).epsilon(1e-12));  // the corner is on the face
+    const double arm = std::abs(y - Cy);
+    CHECK(cc.lever_arm == doctest::Approx(arm).epsilon(1e-12));
+    const double own = 100e3 * t;
+    CHECK(cc.contact_force * arm == doctest::Approx(std::abs(cc.result.state.moment_start) - own).epsilon(1e-12));
+    // The check's message labels the state.
+    for (const auto& c : a.checks)
+        if (c.id == "gap-closure-start") CHECK(c.message.find("held at its closure rotation") != std::string::npos);
+}
