@@ -419,7 +419,7 @@ std::string format_number(double value, int significant)
     if (rounded_exponent >= 9 || decimals > 6) {
         out += shown.substr(0, 1);
         if (significant > 1) out += "." + shown.substr(1);
-        char exp[8];
+        char exp[16];  // "e+" and at most the digits of an int
         std::snprintf(exp, sizeof exp, "e%c%02d", rounded_exponent < 0 ? '-' : '+', std::abs(rounded_exponent));
         return out + exp;
     }

@@ -125,6 +125,7 @@ beam_state state_at(const beam_model& model, const nonlinear_end (&ends)[2], dou
     beam_state s = model.state_for_end_moments(m[0] / lambda, m[1] / lambda);
     if (lambda != 1) {
         for (double* v : {&s.reaction_start, &s.reaction_end, &s.moment_start, &s.moment_end, &s.max_sagging_moment,
+                          &s.max_hogging_moment,
                           &s.max_deflection, &s.rotation_start, &s.rotation_end})
             *v *= lambda;
     }
