@@ -13,6 +13,7 @@
 #include "interruption.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/core/errors.hpp"
+#include "pinproof/core/input_file.hpp"
 #include "pinproof/core/output_file.hpp"
 #include "pinproof/model/project.hpp"
 #include "pinproof/report/result_json.hpp"
@@ -170,6 +171,7 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
     // SIGINT, SIGTERM and SIGHUP remove the temporaries and end the run with
     // 128 + the signal number (interruption.hpp).
     interruption_guard interruption;
+    forget_input_files_read();  // the inputs of this run only
     try {
         if (check->parsed()) return check_command(file, details, json_out, quiet, out);
         if (sections->parsed()) return sections_command(out);

@@ -15,18 +15,29 @@ namespace pinproof {
 namespace {
 
 std::mutex registry_mutex;
-std::vector<file_identity>& registry()
+struct file_read {
+    file_identity id;
+    std::string path;
+};
+std::vector<file_read>& registry()
 {
-    static std::vector<file_identity> files;
+    static std::vector<file_read> files;
     return files;
 }
 
-void remember(const struct stat& st)
+file_identity identity_of(const struct stat& st)
 {
-    const file_identity id{static_cast<std::uintmax_t>(st.st_dev), static_cast<std::uintmax_t>(st.st_ino)};
+    return {static_cast<std::uintmax_t>(st.st_dev), static_cast<std::uintmax_t>(st.st_ino)};
+}
+
+void remember(const struct stat& st, const std::string& path)
+{
+    const file_identity id = identity_of(st);
     std::lock_guard<std::mutex> lock(registry_mutex);
     auto& files = registry();
-    if (std::find(files.begin(), files.end(), id) == files.end()) files.push_back(id);
+    for (const auto& f : files)
+        if (f.id == id && f.path == path) return;
+    files.push_back({id, path});
 }
 
 std::string size_text(std::uintmax_t bytes)
@@ -88,7 +99,7 @@ std::string read_input_file(const std::string& path, const std::string& what)
     struct stat opened {};
     if (::fstat(fd.get(), &opened) != 0 || (!S_ISREG(opened.st_mode) && !S_ISFIFO(opened.st_mode)))
         throw input_error(path, std::string("expected the ") + what + " as a file, found " + kind_of(opened.st_mode));
-    remember(opened);
+    remember(opened, path);
 
     std::string text;
     if (S_ISREG(opened.st_mode)) text.reserve(static_cast<std::size_t>(opened.st_size));
@@ -112,7 +123,20 @@ std::string read_input_file(const std::string& path, const std::string& what)
 std::vector<file_identity> input_files_read()
 {
     std::lock_guard<std::mutex> lock(registry_mutex);
-    return registry();
+    std::vector<file_identity> out;
+    for (const auto& f : registry()) {
+        // A file deleted since may have given its inode to a new file: count
+        // only those still found under the name they were read by.
+        struct stat st {};
+        if (::stat(f.path.c_str(), &st) == 0 && identity_of(st) == f.id) out.push_back(f.id);
+    }
+    return out;
+}
+
+void forget_input_files_read()
+{
+    std::lock_guard<std::mutex> lock(registry_mutex);
+    registry().clear();
 }
 
 }  // namespace pinproof

@@ -31,7 +31,12 @@ struct file_identity {
 // max_input_bytes, or cannot be read. A pipe (FIFO) is read up to the same limit.
 std::string read_input_file(const std::string& path, const std::string& what);
 
-// The identities of every file read by read_input_file in this process.
+// The identities of the files read by read_input_file in this process (since
+// the last forget_input_files_read) that are still found under the name they
+// were read by.
 std::vector<file_identity> input_files_read();
+
+// Starts a new run: the files read before are no longer inputs.
+void forget_input_files_read();
 
 }  // namespace pinproof
