@@ -184,7 +184,7 @@ std::vector<resolved_target> resolve_all(const std::vector<std::pair<std::string
 // A temporary beside its target, removed on destruction unless renamed.
 class temporary {
 public:
-    temporary(const resolved_target& t)
+    explicit temporary(const resolved_target& t)
     {
         const std::string dir = directory_of(t.write_path);
         // Room for the prefix and the random part within NAME_MAX.
