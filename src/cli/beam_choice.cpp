@@ -1,30 +1,13 @@
 #include "beam_choice.hpp"
 
 #include <algorithm>
-#include <numeric>
 
+#include "pinproof/core/edit_distance.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/model/project.hpp"
 
 namespace pinproof::cli {
 namespace {
-
-// Levenshtein distance, capped: ids are short, and only the nearest matter.
-std::size_t edit_distance(const std::string& a, const std::string& b)
-{
-    std::vector<std::size_t> row(b.size() + 1);
-    std::iota(row.begin(), row.end(), std::size_t{0});
-    for (std::size_t i = 1; i <= a.size(); ++i) {
-        std::size_t diagonal = row[0];
-        row[0] = i;
-        for (std::size_t j = 1; j <= b.size(); ++j) {
-            const std::size_t above = row[j];
-            row[j] = std::min({row[j] + 1, row[j - 1] + 1, diagonal + (a[i - 1] == b[j - 1] ? 0 : 1)});
-            diagonal = above;
-        }
-    }
-    return row[b.size()];
-}
 
 std::string quoted_shortly(const std::string& s)
 {
