@@ -74,6 +74,8 @@ for out in d.json d-link.json; do
     same_file_case "batch --out-json $out (the catalogue)" batch s.csv --details d.json --out-json "$out"
     same_file_case "batch --out-csv x --out-json $out (the catalogue)" batch s.csv --details d.json --out-csv x.csv --out-json "$out"
 done
+same_file_case "detail --svg d.json (the --details catalogue)" detail p.json --details d.json --beam MZ-C/3-4 --svg d.json
+same_file_case "sweep --json d-link.json (the --details catalogue)" sweep p.json --details d.json --json d-link.json
 for out in s.csv s-link.csv; do
     same_file_case "batch --out-csv $out (the schedule)" batch s.csv --details d.json --out-csv "$out"
 done
@@ -96,6 +98,11 @@ grep -q "empty" ../err || fail "check --json '': message does not say empty: $(c
 "$bin" batch s.csv --details d.json --out-csv - --out-json - >../out 2>../err
 expect_refused "batch --out-csv - --out-json - (two on stdout)" $?
 "$bin" sweep p.json --csv same.out --json ./same.out >/dev/null 2>../err; expect_refused "sweep --csv and --json on one file" $?
+echo "previous run" >prev.csv; sha256sum p.json d.json s.csv prev.csv >../inputs.sum; ls -A | sort >../listing
+"$bin" batch s.csv --details d.json --out-csv prev.csv --out-json missing/b.json >/dev/null 2>../err
+expect_refused "batch: the second output's folder is missing, the first output keeps the previous run" $?
+"$bin" sweep p.json --csv prev.csv --json missing/s.json >/dev/null 2>../err
+expect_refused "sweep: the second output's folder is missing, the first output keeps the previous run" $?
 
 # --- Security: symbolic links planted by another user [POSIX] -------------
 if [ "$(id -u)" = 0 ] && command -v setpriv >/dev/null; then
