@@ -9,6 +9,7 @@
 #include <cstdio>
 #include <limits>
 #include <mutex>
+#include <system_error>
 #include <thread>
 
 #include "pinproof/core/errors.hpp"
@@ -232,7 +233,7 @@ batch_result run_batch(const schedule& s, const detail_catalogue& catalogue, con
     std::atomic<bool> stopped{false};
     std::mutex m;
     std::condition_variable finished;
-    unsigned running = jobs;
+    unsigned running = 0;  // workers started and not yet finished
     const auto work = [&] {
         for (;;) {
             const std::size_t first = next.fetch_add(chunk);
@@ -251,9 +252,32 @@ batch_result run_batch(const schedule& s, const detail_catalogue& catalogue, con
         std::lock_guard<std::mutex> lock(m);
         if (--running == 0) finished.notify_all();
     };
+    // The system may refuse a thread (RLIMIT_NPROC, memory): the batch then
+    // runs with the workers it has, or in this thread, rather than terminate.
     std::vector<std::thread> pool;
     pool.reserve(jobs);
-    for (unsigned j = 0; j < jobs; ++j) pool.emplace_back(work);
+    for (unsigned j = 0; j < jobs; ++j) {
+        {
+            std::lock_guard<std::mutex> lock(m);
+            ++running;
+        }
+        try {
+            pool.emplace_back(work);
+        } catch (const std::system_error&) {
+            std::lock_guard<std::mutex> lock(m);
+            --running;
+            break;
+        }
+    }
+    out.workers_asked = jobs;
+    out.workers = std::max<unsigned>(1, static_cast<unsigned>(pool.size()));
+    if (pool.empty()) {
+        {
+            std::lock_guard<std::mutex> lock(m);
+            ++running;
+        }
+        work();
+    }
     {
         std::unique_lock<std::mutex> lock(m);
         while (running > 0) {

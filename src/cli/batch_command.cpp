@@ -8,49 +8,17 @@
 #include <ostream>
 
 #include "cli.hpp"
+#include "count_option.hpp"
+#include "interruption.hpp"
 #include "pinproof/batch/batch.hpp"
 #include "pinproof/io/detail_catalogue.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/core/output_file.hpp"
 #include "pinproof/io/schedule.hpp"
 
-// After the library headers: <csignal> defines the macro si_value.
-#include <csignal>
-
 namespace pinproof::cli {
 namespace {
 
-// Set by SIGINT while a batch runs; the workers stop after their current row.
-std::atomic<bool> interrupted{false};
-static_assert(std::atomic<bool>::is_always_lock_free, "the SIGINT flag must be lock-free");
-
-extern "C" void on_interrupt(int) { interrupted.store(true); }
-
-// Installs the SIGINT handler for its lifetime and restores the previous one.
-class interrupt_guard {
-public:
-    interrupt_guard()
-    {
-        interrupted.store(false);
-        struct sigaction sa {};
-        sa.sa_handler = on_interrupt;
-        sigemptyset(&sa.sa_mask);
-        sa.sa_flags = 0;
-        installed_ = sigaction(SIGINT, &sa, &previous_) == 0;
-    }
-    ~interrupt_guard()
-    {
-        if (installed_) sigaction(SIGINT, &previous_, nullptr);
-    }
-    interrupt_guard(const interrupt_guard&) = delete;
-    interrupt_guard& operator=(const interrupt_guard&) = delete;
-
-private:
-    struct sigaction previous_ {};
-    bool installed_ = false;
-};
-
-constexpr int exit_interrupted = 130;  // 128 + SIGINT, the shell's convention
 constexpr std::size_t problems_shown = 50;
 
 // A bar on stderr, drawn only when stderr is a terminal and the run has taken
@@ -103,11 +71,15 @@ CLI::App* add_batch_subcommand(CLI::App& app, batch_command_options& o)
     cmd->add_option("--out-csv", o.out_csv, "Write the summary CSV to FILE ('-' for stdout; the default without --out-json)")
         ->type_name("FILE");
     cmd->add_option("--out-json", o.out_json, "Write the JSON result to FILE ('-' for stdout)")->type_name("FILE");
-    cmd->add_option("--jobs", o.jobs, "Worker threads (default: one per hardware thread)")
+    cmd->add_option("--jobs", o.jobs,
+                    "Worker threads, 0 to " + std::to_string(max_jobs) +
+                        "; 0 (the default) means one per hardware thread. Fewer are used when the system "
+                        "cannot start as many")
         ->type_name("N")
-        ->check(CLI::PositiveNumber);
-    cmd->footer("Exit codes: 0 every beam holds, 1 a beam does not hold, 2 a row was refused or the input is bad, "
-                "130 interrupted (nothing written).");
+        ->check(count_range(0, max_jobs));
+    cmd->footer("Exit codes: 0 every beam holds, 1 a beam does not hold, 2 a row was refused or the input is bad; "
+                "129, 130, 143 ended by SIGHUP, SIGINT, SIGTERM (nothing written). No output may be an input; "
+                "the outputs are written together, only when all succeed.");
     return cmd;
 }
 
@@ -120,37 +92,52 @@ int batch_command(const batch_command_options& o, std::ostream& out, std::ostrea
         return exit_error;
     }
     try {
+        // The outputs are refused before any work when they name an input.
+        output_set outputs;
+        outputs.add_input(o.schedule);
+        outputs.add_input(o.details);
+        if (!csv_target.empty() && csv_target != "-") outputs.add("--out-csv", csv_target, "");
+        if (!o.out_json.empty() && o.out_json != "-") outputs.add("--out-json", o.out_json, "");
+        outputs.check();
+
         const detail_catalogue catalogue = load_detail_catalogue_file(o.details);
         const schedule s = load_schedule_file(o.schedule);
 
-        interrupt_guard guard;
         progress_bar bar(err);
         batch_options options;
         options.jobs = o.jobs;
         options.json = !o.out_json.empty();
-        options.cancel = &interrupted;
+        options.cancel = &interruption_requested();
         options.progress = [&bar](std::size_t done, std::size_t total) { bar(done, total); };
+        // A signal stops the workers after their current row (interruption.hpp).
+        stop_cooperatively(true);
         const batch_result r = run_batch(s, catalogue, options);
         bar.clear();
-        if (r.cancelled || interrupted.load()) {
-            err << "pinproof: interrupted after " << std::count_if(r.rows.begin(), r.rows.end(), [](const batch_row& x) {
-                return x.line != 0;
-            }) << " of " << s.rows.size() << " beams; nothing was written.\n";
-            return exit_interrupted;
+        if (r.cancelled || interruption_requested().load()) {
+            err << "pinproof: interrupted by " << interruption_name() << " after "
+                << std::count_if(r.rows.begin(), r.rows.end(), [](const batch_row& x) { return x.line != 0; })
+                << " of " << s.rows.size() << " beams; nothing was written.\n";
+            return interruption_exit_code();
         }
+        // From here a signal ends the run at once, removing the temporaries.
+        stop_cooperatively(false);
+        if (r.workers < r.workers_asked)
+            err << "pinproof: note: the system could start only " << r.workers << " of " << r.workers_asked
+                << " worker threads; the batch ran with " << r.workers << ".\n";
 
         // Everything is computed before anything is written.
         std::string csv_text, json_text;
         if (!csv_target.empty()) csv_text = batch_summary_csv(r);
         if (!o.out_json.empty()) json_text = batch_result_json(r, s, catalogue);
-        if (!csv_target.empty()) {
-            if (csv_target == "-") out << csv_text;
-            else write_file_atomically(csv_target, csv_text);
-        }
-        if (!o.out_json.empty()) {
-            if (o.out_json == "-") out << json_text;
-            else write_file_atomically(o.out_json, json_text);
-        }
+        // Every file output is written, or none; then standard output.
+        output_set files;
+        files.add_input(o.schedule);
+        files.add_input(o.details);
+        if (!csv_target.empty() && csv_target != "-") files.add("--out-csv", csv_target, std::move(csv_text));
+        if (!o.out_json.empty() && o.out_json != "-") files.add("--out-json", o.out_json, std::move(json_text));
+        if (!files.empty()) files.commit();
+        if (csv_target == "-") out << csv_text;
+        if (o.out_json == "-") out << json_text;
 
         std::size_t shown = 0, refused_problems = 0;
         for (const auto& row : r.rows) {

@@ -9,6 +9,9 @@
 
 namespace pinproof::cli {
 
+// The most worker threads --jobs accepts.
+inline constexpr unsigned max_jobs = 256;
+
 struct batch_command_options {
     std::string schedule;  // CSV file
     std::string details;   // catalogue file (format pinproof-details/1)
@@ -21,8 +24,9 @@ struct batch_command_options {
 CLI::App* add_batch_subcommand(CLI::App& app, batch_command_options& options);
 
 // Runs it. Exit codes as for `check`: 0 every beam holds, 1 a beam does not
-// hold, 2 a row was refused or the input is bad; 130 when interrupted (SIGINT),
-// in which case nothing is written.
+// hold, 2 a row was refused or the input is bad; 128 + the signal number when
+// interrupted (130 SIGINT, 143 SIGTERM, 129 SIGHUP), in which case nothing is
+// written.
 int batch_command(const batch_command_options& options, std::ostream& out, std::ostream& err);
 
 }  // namespace pinproof::cli

@@ -1,5 +1,7 @@
 #include "detail_command.hpp"
 
+#include "beam_choice.hpp"
+
 #include <ostream>
 
 #include "pinproof/checks/assessment.hpp"
@@ -14,14 +16,14 @@ namespace pinproof::cli {
 int detail_command(const detail_options& o, std::ostream& out, std::ostream& err)
 {
     (void)err;
+    output_set outputs;
+    outputs.add_input(o.file);
+    outputs.add_input(o.details);
+    if (o.svg != "-") outputs.add("--svg", o.svg, "");
+    outputs.check();  // before any work
+
     const project p = load_project_file(o.file, o.details);
-    const beam* b = nullptr;
-    std::string ids;
-    for (const auto& candidate : p.beams) {
-        ids += (ids.empty() ? "" : ", ") + candidate.id;
-        if (candidate.id == o.beam) b = &candidate;
-    }
-    if (!b) throw input_error("--beam", "expected the id of a beam in " + o.file + " (" + ids + "), found \"" + o.beam + "\"");
+    const beam* b = &beam_by_id(p, o.beam, o.file);
     const beam_end e = o.end == "start" ? beam_end::start : beam_end::end;
     if (!b->at(e).detail)
         throw input_error(b->pointer + "/joints/" + o.end + "/detail",
@@ -37,7 +39,11 @@ int detail_command(const detail_options& o, std::ostream& out, std::ostream& err
     if (o.svg == "-") {
         out << *svg;
     } else {
-        write_file_atomically(o.svg, *svg);
+        output_set final_outputs;
+        final_outputs.add_input(o.file);
+        final_outputs.add_input(o.details);
+        final_outputs.add("--svg", o.svg, *svg);
+        final_outputs.commit();
         out << "Beam " << b->id << ", " << o.end << " joint: " << summary << "\n";
         out << "Drawing written to " << o.svg << ". Results support, and do not replace, the judgement of a "
                "qualified engineer.\n";

@@ -4,13 +4,13 @@
 
 #include <algorithm>
 #include <cmath>
-#include <fstream>
 #include <iostream>
 #include <iterator>
 #include <sstream>
 #include <stdexcept>
 
 #include "pinproof/core/errors.hpp"
+#include "pinproof/core/input_file.hpp"
 #include "pinproof/core/output_file.hpp"
 #include "pinproof/core/units.hpp"
 #include "pinproof/io/moment_rotation_points.hpp"
@@ -20,14 +20,12 @@
 namespace pinproof::cli {
 namespace {
 
+// The points file, or standard input for "-"; the input edge refuses a
+// directory, a device or a file over its size limit (core/input_file.hpp).
 std::string read_all(const std::string& file)
 {
     if (file == "-") return std::string(std::istreambuf_iterator<char>(std::cin), {});
-    std::ifstream in(file, std::ios::binary);
-    if (!in) throw input_error(file, "cannot be opened for reading");
-    std::ostringstream s;
-    s << in.rdbuf();
-    return s.str();
+    return read_input_file(file, "points file");
 }
 
 struct parameter_row {
@@ -140,7 +138,10 @@ int fit_command(const fit_options& o, std::ostream& out)
             out << svg;
             return 0;
         }
-        write_file_atomically(o.svg, svg);
+        output_set outputs;
+        outputs.add_input(o.file);
+        outputs.add("--svg", o.svg, svg);
+        outputs.commit();
     }
     out << s.str();
     return 0;

@@ -36,7 +36,9 @@ int new_command(const new_options& o, std::ostream& out)
     std::error_code ec;
     if (std::filesystem::symlink_status(o.output, ec).type() != std::filesystem::file_type::not_found)
         throw input_error(o.output, "exists already: pinproof new never replaces a file; choose another name");
-    write_file_atomically(o.output, text);
+    output_set outputs;
+    outputs.add("-o", o.output, text);
+    outputs.commit();
     out << "pinproof new: wrote " << o.output << " (" << (us ? "US customary, AISC 360" : "SI, EN 1993-1-8")
         << "). Edit it, then run: pinproof check " << o.output << "\n";
     return 0;

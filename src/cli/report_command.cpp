@@ -9,6 +9,7 @@
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/report/calculation_report.hpp"
 #include "pinproof/core/errors.hpp"
+#include "pinproof/core/input_file.hpp"
 #include "pinproof/core/output_file.hpp"
 #include "pinproof/model/project.hpp"
 #include "pinproof/io/project_input.hpp"
@@ -39,20 +40,27 @@ std::string today_iso()
 int report_command(const std::string& file, const std::string& out_path, std::ostream& out, std::ostream& /*err*/,
                    const std::string& details_file)
 {
+    output_set outputs;
+    outputs.add_input(file);
+    outputs.add_input(details_file);
+    outputs.add("-o", out_path, "");
+    outputs.check();  // before any work
+
     const project p = load_project_file(file, details_file);
     // The hash is of the bytes the project was read from.
-    std::ifstream in(file, std::ios::binary);
-    std::ostringstream bytes;
-    bytes << in.rdbuf();
-    if (!in) throw input_error(file, "expected a readable project file, found one that cannot be read");
+    const std::string bytes = read_input_file(file, "project file");
     const project_assessment a = assess_project(p);
     report_info info;
     info.input_file = file;
-    info.input_sha256 = input_hash(bytes.str());
+    info.input_sha256 = input_hash(bytes);
     info.date = today_iso();
     info.version = PINPROOF_VERSION;
     const std::string html = calculation_report_html(p, a, info);
-    write_file_atomically(out_path, html);
+    output_set final_outputs;
+    final_outputs.add_input(file);
+    final_outputs.add_input(details_file);
+    final_outputs.add("-o", out_path, html);
+    final_outputs.commit();
     out << "Report written to " << out_path << ": " << (a.all_hold() ? "every verdict holds" : "a verdict does not hold")
         << ".\n";
     return a.all_hold() ? 0 : 1;

@@ -1,6 +1,7 @@
 #include <CLI/CLI.hpp>
 #include <nlohmann/json.hpp>
 
+#include <new>
 #include <ostream>
 #include <sstream>
 
@@ -11,8 +12,10 @@
 #include "detail_command.hpp"
 #include "fit_command.hpp"
 #include "new_command.hpp"
+#include "interruption.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/core/errors.hpp"
+#include "pinproof/core/input_file.hpp"
 #include "pinproof/core/output_file.hpp"
 #include "pinproof/model/project.hpp"
 #include "pinproof/report/result_json.hpp"
@@ -24,6 +27,8 @@ namespace pinproof::cli {
 namespace {
 
 const char* const version = PINPROOF_VERSION;
+const char* const exit_codes_text = "Exit codes: 0 every verdict holds, 1 a verdict does not hold, 2 bad input or an "
+                                    "error; 129, 130, 143 ended by SIGHUP, SIGINT, SIGTERM (nothing written).";
 
 void report_input_error(const input_error& e, std::ostream& err)
 {
@@ -32,25 +37,53 @@ void report_input_error(const input_error& e, std::ostream& err)
     for (const auto& p : e.problems()) err << "error: " << p.where << ": " << p.message << "\n";
 }
 
-// Writes `text` to FILE, or to `out` for "-".
-void emit(const std::string& target, const std::string& text, std::ostream& out)
-{
-    if (target == "-") out << text;
-    else write_file_atomically(target, text);
-}
-
 int check_command(const std::string& file, const std::string& details, const std::string& json_out, bool quiet,
                   std::ostream& out)
 {
+    // The outputs are refused before any work when they name an input.
+    output_set outputs;
+    outputs.add_input(file);
+    outputs.add_input(details);
+    if (!json_out.empty() && json_out != "-") outputs.add("--json", json_out, "");
+    outputs.check();
+
     const project p = load_project_file(file, details);
     const project_assessment a = assess_project(p);
     // Everything is computed before anything is written.
     std::string json_text;
     if (!json_out.empty()) json_text = to_json(a).dump(2) + "\n";
     const std::string report = text_report(a, version);
-    if (!json_out.empty()) emit(json_out, json_text, out);
+    if (json_out == "-") {
+        out << json_text;
+    } else if (!json_out.empty()) {
+        output_set final_outputs;
+        final_outputs.add_input(file);
+        final_outputs.add_input(details);
+        final_outputs.add("--json", json_out, std::move(json_text));
+        final_outputs.commit();
+    }
     if (!quiet && json_out != "-") out << report;
     return a.all_hold() ? exit_holds : exit_does_not_hold;
+}
+
+// An option given with an empty value ("--json ''") is refused rather than
+// read as "not given".
+bool refuse_empty_values(const std::vector<const CLI::App*>& commands, std::ostream& err)
+{
+    for (const auto* cmd : commands) {
+        if (!cmd->parsed()) continue;
+        for (const auto* opt : cmd->get_options()) {
+            if (opt->count() == 0 || opt->get_type_size() == 0) continue;
+            for (const auto& v : opt->results()) {
+                if (!v.empty()) continue;
+                err << "pinproof: " << opt->get_name() << ": expected "
+                    << (opt->get_type_name() == "FILE" ? "a file name (or '-' for standard output)" : "a value")
+                    << ", found an empty text; nothing was written.\n";
+                return true;
+            }
+        }
+    }
+    return false;
 }
 
 int sections_command(std::ostream& out)
@@ -80,7 +113,7 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
     // At most one command; a missing one is reported after parsing, so that an
     // unknown option or word is named rather than hidden behind "a command is required".
     app.require_subcommand(0, 1);
-    app.footer("Exit codes: 0 every verdict holds, 1 a verdict does not hold, 2 bad input or an error.");
+    app.footer(exit_codes_text);
 
     std::string file, json_out, details;
     bool quiet = false;
@@ -88,11 +121,12 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
                                "overrides the project's \"details\" key";
     auto* check = app.add_subcommand("check", "Check every beam of a project file and print the report");
     check->add_option("FILE", file, "Project file (format pinproof-project/1)")->required();
-    check->add_option("--json", json_out, "Also write the machine-readable result to FILE ('-' for stdout)")
+    check->add_option("--json", json_out, "Also write the machine-readable result to FILE ('-' for stdout); "
+                                          "refused if FILE is an input")
         ->type_name("FILE");
     check->add_flag("-q,--quiet", quiet, "Print no text report (the exit code still gives the verdict)");
     check->add_option("--details", details, details_help)->type_name("FILE");
-    check->footer("Exit codes: 0 every verdict holds, 1 a verdict does not hold, 2 bad input or an error.");
+    check->footer(exit_codes_text);
 
     auto* sections = app.add_subcommand("sections", "List the built-in section catalogue");
 
@@ -140,6 +174,12 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
         return exit_error;
     }
 
+    if (refuse_empty_values({check, detail, sweep, batch, report}, err)) return exit_error;
+
+    // SIGINT, SIGTERM and SIGHUP remove the temporaries and end the run with
+    // 128 + the signal number (interruption.hpp).
+    interruption_guard interruption;
+    forget_input_files_read();  // the inputs of this run only
     try {
         if (check->parsed()) return check_command(file, details, json_out, quiet, out);
         if (sections->parsed()) return sections_command(out);
@@ -158,8 +198,15 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
         err << "pinproof: internal error: " << e.what()
             << "\nThis is a fault of pinproof, not of the input; nothing was written. Please report it with the input file.\n";
         return exit_error;
+    } catch (const std::bad_alloc&) {
+        err << "pinproof: error: out of memory; nothing was written. Reduce the size of the run (fewer points, "
+               "samples or beams).\n";
+        return exit_error;
     } catch (const std::exception& e) {
-        err << "pinproof: error: " << e.what() << "; nothing was written.\n";
+        const std::string what = e.what();
+        // A failure after some outputs were renamed says so itself.
+        err << "pinproof: error: " << what
+            << (what.find("already in place") == std::string::npos ? "; nothing was written.\n" : "\n");
         return exit_error;
     }
     return exit_error;

@@ -9,6 +9,8 @@
 #include <ostream>
 #include <sstream>
 
+#include "beam_choice.hpp"
+#include "count_option.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/checks/failure_probability.hpp"
 #include "pinproof/core/output_file.hpp"
@@ -28,8 +30,10 @@ void add_sweep_options(CLI::App& sub, sweep_options& o)
     sub.add_option("--combination", o.combination,
                    "Combination whose results are tabulated (default: the beam's first); the checks use all")
         ->type_name("NAME");
-    sub.add_option("--points", o.points, "Stiffness values between 0.01 and 1000 EI/L, log spaced (default 41)")
-        ->check(CLI::Range(2, 1000))
+    sub.add_option("--points", o.points,
+                   "Stiffness values between 0.01 and 1000 EI/L, log spaced: 2 to 1000 (default 41); with --grid "
+                   "at most " + std::to_string(max_grid_points) + ", as the grid holds (N+2) x (N+2) states")
+        ->check(count_range(2, 1000))
         ->type_name("N");
     sub.add_option("--end", o.end, "Move only this end (default: both ends together)")
         ->check(CLI::IsMember({"start", "end"}))
@@ -44,8 +48,12 @@ void add_sweep_options(CLI::App& sub, sweep_options& o)
     sub.add_option("--json", o.json_out, "Write the sweep, thresholds and probabilities as JSON ('-' for stdout)")
         ->type_name("FILE");
     sub.add_option("--monte-carlo", o.monte_carlo,
-                   "Also estimate the failure probabilities by N Monte Carlo samples (fixed seed)")
+                   "Also estimate the failure probabilities by N Monte Carlo samples (fixed seed): 0 (none, the "
+                   "default) to " + std::to_string(max_monte_carlo_samples))
+        ->check(count_range(0, max_monte_carlo_samples))
         ->type_name("N");
+    sub.footer("At most one output on standard output ('-'); no output may be an input. The outputs are written "
+               "together, only when all succeed.");
 }
 
 namespace {
@@ -74,12 +82,6 @@ stiffness parse_hold(const std::string& text, double EI_over_L)
                                 "multiple such as \"0.5 EI/L\" or \"rigid\", found \"" + text + "\"");
 }
 
-void emit(const std::string& target, const std::string& text, std::ostream& out)
-{
-    if (target == "-") out << text;
-    else write_file_atomically(target, text);
-}
-
 std::string stiffness_text(stiffness s, unit_system u)
 {
     return s.is_rigid() ? std::string("rigid") : format_quantity(s.value(), dims::rotational_stiffness, u);
@@ -89,18 +91,35 @@ std::string stiffness_text(stiffness s, unit_system u)
 
 int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err*/)
 {
+    // The outputs are refused before any work: two on standard output, one
+    // naming an input, or a grid too large to hold.
+    const std::pair<const char*, const std::string*> targets[] = {
+        {"--csv", &o.csv_out}, {"--svg", &o.svg_out}, {"--json", &o.json_out}};
+    const char* on_stdout = nullptr;
+    output_set outputs;
+    outputs.add_input(o.file);
+    outputs.add_input(o.details);
+    for (const auto& [option, path] : targets) {
+        if (*path != "-") {
+            if (!path->empty()) outputs.add(option, *path, "");
+            continue;
+        }
+        if (on_stdout)
+            throw input_error(option, std::string("expected at most one output on standard output ('-'), found ") +
+                                          on_stdout + " and " + option + " both '-'; name a file for one of them");
+        on_stdout = option;
+    }
+    outputs.check();
+    if (o.grid && o.points > max_grid_points)
+        throw input_error("--points", "expected at most " + std::to_string(max_grid_points) +
+                                          " points with --grid (a grid of (N+2) x (N+2) = " +
+                                          std::to_string((max_grid_points + 2) * (max_grid_points + 2)) +
+                                          " stiffness pairs, each held in memory with its results), found " +
+                                          std::to_string(o.points));
+
     const project p = load_project_file(o.file, o.details);
     if (p.beams.empty()) throw input_error("/beams", "expected at least one beam to sweep, found none");
-    const beam* b = &p.beams.front();
-    if (!o.beam_id.empty()) {
-        b = nullptr;
-        std::string known;
-        for (const auto& x : p.beams) {
-            if (x.id == o.beam_id) b = &x;
-            known += (known.empty() ? "" : ", ") + x.id;
-        }
-        if (!b) throw input_error("--beam", "expected one of the beam ids (" + known + "), found \"" + o.beam_id + "\"");
-    }
+    const beam* b = o.beam_id.empty() ? &p.beams.front() : &beam_by_id(p, o.beam_id, o.file);
     const stiffness_uncertainty uncertainty{b->start.distribution, b->end.distribution, b->stiffness_correlation};
 
     sweep_settings settings;
@@ -174,10 +193,18 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
         j["monte_carlo"] = m;
         json_text = j.dump(2) + "\n";
     }
-    if (!o.csv_out.empty()) emit(o.csv_out, csv, out);
-    if (!o.svg_out.empty()) emit(o.svg_out, svg, out);
-    if (!o.json_out.empty()) emit(o.json_out, json_text, out);
-    if (o.csv_out == "-" || o.svg_out == "-" || o.json_out == "-") return 0;
+    // Every file output is written, or none; then standard output.
+    output_set files;
+    files.add_input(o.file);
+    files.add_input(o.details);
+    std::string* texts[] = {&csv, &svg, &json_text};
+    for (std::size_t i = 0; i < 3; ++i)
+        if (!targets[i].second->empty() && *targets[i].second != "-")
+            files.add(targets[i].first, *targets[i].second, std::move(*texts[i]));
+    if (!files.empty()) files.commit();
+    for (std::size_t i = 0; i < 3; ++i)
+        if (*targets[i].second == "-") out << *texts[i];
+    if (on_stdout) return 0;
 
     // The summary.
     const unit_system u = p.units;

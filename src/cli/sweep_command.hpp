@@ -13,6 +13,14 @@ class App;
 
 namespace pinproof::cli {
 
+// The largest --points with --grid: (N+2)^2 states are held in memory with
+// their results: about 290 MB and 11 s at N = 100 (measured: see
+// docs/robustness.md; 1.1 GB at N = 200).
+inline constexpr int max_grid_points = 100;
+// The most Monte Carlo samples: about 45 s for one beam with two distributed
+// joints (measured: see docs/robustness.md); the memory does not grow with N.
+inline constexpr std::size_t max_monte_carlo_samples = 1'000'000;
+
 struct sweep_options {
     std::string file;
     std::string beam_id;        // empty: the first beam

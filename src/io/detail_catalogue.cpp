@@ -9,6 +9,7 @@
 #include <sstream>
 
 #include "io/json_fields.hpp"
+#include "pinproof/core/input_file.hpp"
 #include "pinproof/core/units.hpp"
 
 namespace pinproof {
@@ -231,12 +232,8 @@ detail_catalogue parse_detail_catalogue(std::string_view text, const std::string
 
 detail_catalogue load_detail_catalogue_file(const std::string& path)
 {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw input_error(path, "cannot open the detail catalogue for reading");
-    std::ostringstream buf;
-    buf << in.rdbuf();
-    if (in.bad()) throw input_error(path, "cannot read the detail catalogue");
-    return parse_detail_catalogue(buf.str(), path);
+    const std::string text = read_input_file(path, "detail catalogue");  // size, kind and identity checked (input_file.hpp)
+    return parse_detail_catalogue(text, path);
 }
 
 joint joint_for_beam(const catalogue_detail& d, double EI, double span)

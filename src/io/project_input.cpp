@@ -9,6 +9,7 @@
 #include <sstream>
 
 #include "io/json_fields.hpp"
+#include "pinproof/core/input_file.hpp"
 #include "pinproof/model/connection_detail.hpp"
 #include "pinproof/io/detail_catalogue.hpp"
 #include "pinproof/model/stiffness_distribution.hpp"
@@ -701,16 +702,12 @@ project parse_project(std::string_view text, const project_sources& sources)
 
 project load_project_file(const std::string& path, const std::string& details_file)
 {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw input_error(path, "cannot open the project file for reading");
-    std::ostringstream buf;
-    buf << in.rdbuf();
-    if (in.bad()) throw input_error(path, "cannot read the project file");
+    const std::string text = read_input_file(path, "project file");  // size, kind and identity checked (input_file.hpp)
     project_sources sources;
     sources.details_file = details_file;
     const auto slash = path.find_last_of('/');
     sources.base_dir = slash == std::string::npos ? "." : path.substr(0, slash == 0 ? 1 : slash);
-    return parse_project(buf.str(), sources);
+    return parse_project(text, sources);
 }
 
 }  // namespace pinproof

@@ -12,6 +12,7 @@
 #include <sstream>
 #include <stdexcept>
 
+#include "pinproof/core/input_file.hpp"
 #include "pinproof/core/units.hpp"
 #include "pinproof/io/connection_detail_input.hpp"
 #include "pinproof/io/project_input.hpp"
@@ -285,12 +286,8 @@ schedule parse_schedule(std::string_view text, const std::string& source)
 
 schedule load_schedule_file(const std::string& path)
 {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw input_error(path, "cannot open the schedule for reading");
-    std::ostringstream buf;
-    buf << in.rdbuf();
-    if (in.bad()) throw input_error(path, "cannot read the schedule");
-    return parse_schedule(buf.str(), path);
+    const std::string text = read_input_file(path, "schedule");  // size, kind and identity checked (input_file.hpp)
+    return parse_schedule(text, path);
 }
 
 namespace {

@@ -1,5 +1,7 @@
 #include "pinproof/model/section.hpp"
 
+#include "pinproof/core/edit_distance.hpp"
+
 #include <algorithm>
 #include <cctype>
 #include <charconv>
@@ -313,23 +315,6 @@ const std::vector<indexed_section>& catalogue_index()
         return out;
     }();
     return index;
-}
-
-// Levenshtein distance (insertions, deletions and substitutions of one character).
-std::size_t edit_distance(const std::string& a, const std::string& b)
-{
-    std::vector<std::size_t> row(b.size() + 1);
-    for (std::size_t j = 0; j <= b.size(); ++j) row[j] = j;
-    for (std::size_t i = 1; i <= a.size(); ++i) {
-        std::size_t diagonal = row[0];
-        row[0] = i;
-        for (std::size_t j = 1; j <= b.size(); ++j) {
-            const std::size_t above = row[j];
-            row[j] = std::min({row[j] + 1, row[j - 1] + 1, diagonal + (a[i - 1] == b[j - 1] ? 0 : 1)});
-            diagonal = above;
-        }
-    }
-    return row[b.size()];
 }
 
 }  // namespace

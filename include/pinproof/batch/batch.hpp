@@ -73,6 +73,8 @@ struct batch_result {
     std::vector<batch_row> rows;  // in input order
     batch_summary summary;
     bool cancelled = false;       // the run was stopped; rows are incomplete
+    unsigned workers_asked = 0;   // worker threads wanted (options.jobs, bounded by the rows)
+    unsigned workers = 0;         // worker threads the system could start (at least 1: the caller's own)
 };
 
 // Reads and assesses one row. Never throws: bad data refuses the row.

@@ -1,0 +1,42 @@
+// Reading an input file (project, detail catalogue, schedule) whole, with the
+// checks every reader needs before it reads: the path names a file, not a
+// directory or a device, and the file is not larger than max_input_bytes.
+//
+// Every file read here is remembered by its identity (device and inode), so
+// that an output naming the same file (under any name, through a symbolic or a
+// hard link) is refused before anything is written (output_file.hpp).
+#pragma once
+
+#include <cstdint>
+#include <string>
+#include <vector>
+
+namespace pinproof {
+
+// The largest input accepted: 512 MiB. No project, catalogue or schedule of a
+// real building comes near it (a 100 000-beam schedule is about 10 MB); the
+// limit keeps a wrong path (a disk image, /dev/zero) from exhausting memory.
+inline constexpr std::uintmax_t max_input_bytes = 512ull * 1024 * 1024;
+
+// The identity of a file: the same pair means the same file, whatever its name.
+struct file_identity {
+    std::uintmax_t device = 0;
+    std::uintmax_t inode = 0;
+    bool operator==(const file_identity& o) const { return device == o.device && inode == o.inode; }
+};
+
+// Reads the file at `path`. `what` names it in messages ("project file",
+// "detail catalogue", "schedule"). Throws input_error at `path` when it does
+// not exist, is a directory, a device or a socket, is larger than
+// max_input_bytes, or cannot be read. A pipe (FIFO) is read up to the same limit.
+std::string read_input_file(const std::string& path, const std::string& what);
+
+// The identities of the files read by read_input_file in this process (since
+// the last forget_input_files_read) that are still found under the name they
+// were read by.
+std::vector<file_identity> input_files_read();
+
+// Starts a new run: the files read before are no longer inputs.
+void forget_input_files_read();
+
+}  // namespace pinproof

@@ -1,0 +1,142 @@
+#include "pinproof/core/input_file.hpp"
+
+#include <fcntl.h>
+#include <sys/stat.h>
+#include <unistd.h>
+
+#include <algorithm>
+#include <cerrno>
+#include <cstring>
+#include <mutex>
+
+#include "pinproof/core/errors.hpp"
+
+namespace pinproof {
+namespace {
+
+std::mutex registry_mutex;
+struct file_read {
+    file_identity id;
+    std::string path;
+};
+std::vector<file_read>& registry()
+{
+    static std::vector<file_read> files;
+    return files;
+}
+
+file_identity identity_of(const struct stat& st)
+{
+    return {static_cast<std::uintmax_t>(st.st_dev), static_cast<std::uintmax_t>(st.st_ino)};
+}
+
+void remember(const struct stat& st, const std::string& path)
+{
+    const file_identity id = identity_of(st);
+    std::lock_guard<std::mutex> lock(registry_mutex);
+    auto& files = registry();
+    for (const auto& f : files)
+        if (f.id == id && f.path == path) return;
+    files.push_back({id, path});
+}
+
+std::string size_text(std::uintmax_t bytes)
+{
+    return std::to_string(bytes / (1024 * 1024)) + " MiB (" + std::to_string(bytes) + " bytes)";
+}
+
+// The kind of a file that is neither a regular file nor a pipe, for messages.
+const char* kind_of(mode_t mode)
+{
+    if (S_ISDIR(mode)) return "a directory";
+    if (S_ISCHR(mode)) return "a character device";
+    if (S_ISBLK(mode)) return "a block device";
+    if (S_ISSOCK(mode)) return "a socket";
+    return "a special file";
+}
+
+class descriptor {
+public:
+    explicit descriptor(int fd) : fd_(fd) {}
+    ~descriptor()
+    {
+        if (fd_ >= 0) ::close(fd_);
+    }
+    descriptor(const descriptor&) = delete;
+    descriptor& operator=(const descriptor&) = delete;
+    int get() const { return fd_; }
+
+private:
+    int fd_;
+};
+
+}  // namespace
+
+std::string read_input_file(const std::string& path, const std::string& what)
+{
+    const std::string limit = "the limit is " + size_text(max_input_bytes);
+    if (path.empty()) throw input_error("(command line)", "expected the path of the " + what + ", found an empty name");
+    // Look before opening: opening a FIFO with no writer would block, and a
+    // directory opens fine on Linux.
+    struct stat st {};
+    if (::stat(path.c_str(), &st) != 0) {
+        const int e = errno;
+        throw input_error(path, "cannot open the " + what + " for reading: " + std::strerror(e));
+    }
+    if (!S_ISREG(st.st_mode) && !S_ISFIFO(st.st_mode))
+        throw input_error(path, std::string("expected the ") + what + " as a file, found " + kind_of(st.st_mode));
+    if (S_ISREG(st.st_mode) && static_cast<std::uintmax_t>(st.st_size) > max_input_bytes)
+        throw input_error(path, "expected a " + what + " of at most 512 MiB, found " +
+                                    size_text(static_cast<std::uintmax_t>(st.st_size)) + "; nothing was read");
+
+    descriptor fd(::open(path.c_str(), O_RDONLY | O_CLOEXEC | O_NOCTTY));
+    if (fd.get() < 0) {
+        const int e = errno;
+        throw input_error(path, "cannot open the " + what + " for reading: " + std::strerror(e));
+    }
+    // The file opened may differ from the one looked at (renamed in between):
+    // judge the one actually read.
+    struct stat opened {};
+    if (::fstat(fd.get(), &opened) != 0 || (!S_ISREG(opened.st_mode) && !S_ISFIFO(opened.st_mode)))
+        throw input_error(path, std::string("expected the ") + what + " as a file, found " + kind_of(opened.st_mode));
+    remember(opened, path);
+
+    std::string text;
+    if (S_ISREG(opened.st_mode)) text.reserve(static_cast<std::size_t>(opened.st_size));
+    char buf[1 << 16];
+    for (;;) {
+        const ssize_t n = ::read(fd.get(), buf, sizeof buf);
+        if (n == 0) break;
+        if (n < 0) {
+            if (errno == EINTR) continue;
+            const int e = errno;
+            throw input_error(path, "cannot read the " + what + ": " + std::strerror(e));
+        }
+        // A file that grows while it is read, or a pipe, is still held to the limit.
+        if (text.size() + static_cast<std::size_t>(n) > max_input_bytes)
+            throw input_error(path, "expected a " + what + " of at most 512 MiB, found more; " + limit);
+        text.append(buf, static_cast<std::size_t>(n));
+    }
+    return text;
+}
+
+std::vector<file_identity> input_files_read()
+{
+    std::lock_guard<std::mutex> lock(registry_mutex);
+    std::vector<file_identity> out;
+    for (const auto& f : registry()) {
+        // A file deleted since may have given its inode to a new file: count
+        // only those still found under the name they were read by.
+        struct stat st {};
+        if (::stat(f.path.c_str(), &st) == 0 && identity_of(st) == f.id) out.push_back(f.id);
+    }
+    return out;
+}
+
+void forget_input_files_read()
+{
+    std::lock_guard<std::mutex> lock(registry_mutex);
+    registry().clear();
+}
+
+}  // namespace pinproof
