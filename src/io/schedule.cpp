@@ -4,6 +4,7 @@
 #include "pinproof/model/connection_detail.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cctype>
 #include <cmath>
 #include <cstdlib>
@@ -383,131 +384,116 @@ struct row_reader {
     }
 };
 
-}  // namespace
-
-schedule_row read_schedule_row(const schedule& s, std::size_t index, const detail_catalogue& catalogue)
+// A record that cannot be read cell by cell: a misplaced quote, or a count of
+// cells other than the header's. Adds the problem and returns true.
+bool refuse_malformed_record(const schedule& s, const csv_record& rec, schedule_row& out)
 {
-    schedule_row out;
-    const csv_record& rec = s.rows.at(index);
-    out.line = rec.line;
     const std::string at_line = "line " + std::to_string(rec.line);
     if (rec.bad_column != 0) {
         std::string where = at_line + ", column " + std::to_string(rec.bad_column);
         if (rec.bad_column <= s.columns.size()) where += " (" + s.columns[rec.bad_column - 1] + ")";
         out.problems.push_back({where, rec.bad_reason});
         if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = rec.cells[*c];
-        return out;
+        return true;
     }
-    if (rec.cells.size() != s.columns.size()) {
-        if (rec.cells.size() < s.columns.size()) {
-            const std::size_t col = rec.cells.size();
-            out.problems.push_back({at_line + ", column " + std::to_string(col + 1) + " (" + s.columns[col] + ")",
-                                    "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
-                                        std::to_string(rec.cells.size()) + " cells in the row"});
-        } else {
-            out.problems.push_back({at_line + ", column " + std::to_string(s.columns.size() + 1),
-                                    "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
-                                        std::to_string(rec.cells.size()) + " cells in the row"});
-        }
-        if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = rec.cells[*c];
-        return out;
+    if (rec.cells.size() == s.columns.size()) return false;
+    if (rec.cells.size() < s.columns.size()) {
+        const std::size_t col = rec.cells.size();
+        out.problems.push_back({at_line + ", column " + std::to_string(col + 1) + " (" + s.columns[col] + ")",
+                                "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
+                                    std::to_string(rec.cells.size()) + " cells in the row"});
+    } else {
+        out.problems.push_back({at_line + ", column " + std::to_string(s.columns.size() + 1),
+                                "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
+                                    std::to_string(rec.cells.size()) + " cells in the row"});
     }
+    if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = rec.cells[*c];
+    return true;
+}
 
-    row_reader r{s, rec, out.problems};
-    auto id = r.cell("id", true);
-    if (id) out.id = *id;
-    if (id && s.earlier_line_with_same_id[index] != 0)
-        r.add(*s.column("id"), "expected a unique beam id, found " + in_quotes(*id) + ", already used on line " +
-                                   std::to_string(s.earlier_line_with_same_id[index]));
-
+// The row's combination set, standard and frame.
+struct row_rules {
     combination_set set = combination_set::en1990;
+    design_standard standard = design_standard::en1993_1_8;
+    frame_bracing frame = frame_bracing::braced;
+};
+
+row_rules read_row_rules(row_reader& r)
+{
+    const schedule& s = r.s;
+    row_rules out;
     if (auto c = r.cell("combinations", false)) {
         auto parsed = parse_combination_set(*c);
         if (!parsed) r.add(*s.column("combinations"), "expected a combination set, \"EN1990\" or \"ASCE7\", found " + in_quotes(*c));
-        else set = *parsed;
+        else out.set = *parsed;
     }
-    design_standard standard = set == combination_set::en1990 ? design_standard::en1993_1_8 : design_standard::aisc360;
+    out.standard = out.set == combination_set::en1990 ? design_standard::en1993_1_8 : design_standard::aisc360;
     if (auto c = r.cell("standard", false)) {
-        if (*c == "EN1993-1-8" || *c == "AISC360") standard = parse_design_standard(*c);
+        if (*c == "EN1993-1-8" || *c == "AISC360") out.standard = parse_design_standard(*c);
         else r.add(*s.column("standard"), "expected \"EN1993-1-8\" or \"AISC360\", found " + in_quotes(*c));
     }
-    frame_bracing frame = frame_bracing::braced;
     if (auto c = r.cell("frame", false)) {
-        if (*c == "braced" || *c == "unbraced") frame = parse_frame_bracing(*c);
+        if (*c == "braced" || *c == "unbraced") out.frame = parse_frame_bracing(*c);
         else r.add(*s.column("frame"), "expected \"braced\" or \"unbraced\", found " + in_quotes(*c));
     }
+    return out;
+}
 
-    auto span = r.positive_cell("span", dims::length, true);
-    std::optional<double> E = r.positive_cell("E", dims::pressure, false);
-    const bool E_default = !r.cell("E", false);
-    if (E_default) E = standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
-
+std::optional<section> read_row_section(row_reader& r)
+{
     std::optional<section> sec;
     if (auto name = r.cell("section", true)) {
         sec = find_catalogue_section(*name);
         if (!sec)
-            r.add(*s.column("section"),
+            r.add(*r.s.column("section"),
                   "expected a section name from the built-in catalogue (IPE 80 to IPE 600, HE 100 A to HE 600 A, "
                   "HE 100 B to HE 600 B, W shapes such as W18x35; pinproof sections lists them), " +
                       unknown_section_text(*name));
     }
+    return sec;
+}
 
-    std::optional<double> line_loads[2];
+// The line loads of cases G and Q, downward, not both zero.
+std::array<std::optional<double>, 2> read_row_line_loads(row_reader& r)
+{
+    std::array<std::optional<double>, 2> line_loads;
     const char* load_cols[2] = {"g", "q"};
     for (int i = 0; i < 2; ++i) {
         line_loads[i] = r.quantity_cell(load_cols[i], dims::line_load, true);
         if (line_loads[i] && *line_loads[i] < 0) {
-            r.add(*s.column(load_cols[i]), std::string("expected a downward line load of zero or more, found ") +
-                                               in_quotes(rec.cells[*s.column(load_cols[i])]));
+            r.add(*r.s.column(load_cols[i]), std::string("expected a downward line load of zero or more, found ") +
+                                                 in_quotes(r.rec.cells[*r.s.column(load_cols[i])]));
             line_loads[i].reset();
         }
     }
     if (line_loads[0] && line_loads[1] && *line_loads[0] + *line_loads[1] == 0.0)
-        r.add(*s.column("g"), "expected a load on the beam (g or q above zero), found g = 0 and q = 0");
+        r.add(*r.s.column("g"), "expected a load on the beam (g or q above zero), found g = 0 and q = 0");
+    return line_loads;
+}
 
-    const catalogue_detail* details[2] = {nullptr, nullptr};
+// The catalogue entries named by the start and end cells.
+std::array<const catalogue_detail*, 2> read_row_details(row_reader& r, const detail_catalogue& catalogue)
+{
+    std::array<const catalogue_detail*, 2> details = {nullptr, nullptr};
     const char* end_cols[2] = {"start", "end"};
     for (int i = 0; i < 2; ++i) {
         auto d = r.cell(end_cols[i], true);
         if (!d) continue;
         details[i] = catalogue.find(*d);
         if (!details[i])
-            r.add(*s.column(end_cols[i]), "expected a detail id from the catalogue" +
-                                              (catalogue.source.empty() ? std::string() : " " + catalogue.source) +
-                                              " (" + catalogue.id_list() + "), found " + in_quotes(*d));
+            r.add(*r.s.column(end_cols[i]), "expected a detail id from the catalogue" +
+                                                (catalogue.source.empty() ? std::string() : " " + catalogue.source) +
+                                                " (" + catalogue.id_list() + "), found " + in_quotes(*d));
     }
-    auto deflection = r.deflection_cell();
-    std::string description;
-    if (auto d = r.cell("description", false)) description = *d;
+    return details;
+}
 
-    out.settings.format = project_format;
-    out.settings.title = s.source;
-    out.settings.standard = standard;
-    out.settings.frame = frame;
-    out.settings.units = r.system == unit_system::us_customary ? unit_system::us_customary : unit_system::si;
-    if (!out.problems.empty()) return out;
-
-    beam b;
-    b.id = *id;
-    b.description = description;
-    b.span = *span;
-    b.E = *E;
-    b.E_is_default = E_default;
-    b.sec = *sec;
-    for (int i = 0; i < 2; ++i) {
-        load l;
-        l.kind = load_kind::udl;
-        l.value = *line_loads[i];
-        l.from = 0.0;
-        l.to = *span;
-        l.load_case = i == 0 ? "G" : "Q";
-        b.loads.push_back(l);
-    }
-    b.combinations = combinations_of(set);
-    b.start = joint_for_beam(*details[0], b.EI(), b.span);
-    b.end = joint_for_beam(*details[1], b.EI(), b.span);
-    // The catalogue entry's geometry, with its type, for the end-gap check. A
-    // problem in it is the catalogue's, named by its pointer there.
+// The catalogue entries' geometry, with their type, for the end-gap check. A
+// problem in it is the catalogue's, named by its pointer there. Returns false
+// (after adding the problems) when a geometry is refused.
+bool attach_detail_geometry(beam& b, const std::array<const catalogue_detail*, 2>& details, const std::string& at_line,
+                            schedule_row& out)
+{
     // A schedule repeats few pairs of detail and section: each pair is read once
     // per thread (the reading depends on nothing else). The cache is found by
     // the entry's address and the section, and a hit is used only when the
@@ -549,10 +535,69 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
                 out.problems.push_back({at_line + " (" + (i == 0 ? "start" : "end") + " detail " + d.id + ", catalogue " +
                                             pr.where + ")",
                                         pr.message});
-            return out;
+            return false;
         }
         (i == 0 ? b.start : b.end).detail = detail;
     }
+    return true;
+}
+
+}  // namespace
+
+schedule_row read_schedule_row(const schedule& s, std::size_t index, const detail_catalogue& catalogue)
+{
+    schedule_row out;
+    const csv_record& rec = s.rows.at(index);
+    out.line = rec.line;
+    const std::string at_line = "line " + std::to_string(rec.line);
+    if (refuse_malformed_record(s, rec, out)) return out;
+
+    row_reader r{s, rec, out.problems};
+    auto id = r.cell("id", true);
+    if (id) out.id = *id;
+    if (id && s.earlier_line_with_same_id[index] != 0)
+        r.add(*s.column("id"), "expected a unique beam id, found " + in_quotes(*id) + ", already used on line " +
+                                   std::to_string(s.earlier_line_with_same_id[index]));
+
+    const row_rules rules = read_row_rules(r);
+    auto span = r.positive_cell("span", dims::length, true);
+    std::optional<double> E = r.positive_cell("E", dims::pressure, false);
+    const bool E_default = !r.cell("E", false);
+    if (E_default) E = rules.standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
+    const std::optional<section> sec = read_row_section(r);
+    const auto line_loads = read_row_line_loads(r);
+    const auto details = read_row_details(r, catalogue);
+    auto deflection = r.deflection_cell();
+    std::string description;
+    if (auto d = r.cell("description", false)) description = *d;
+
+    out.settings.format = project_format;
+    out.settings.title = s.source;
+    out.settings.standard = rules.standard;
+    out.settings.frame = rules.frame;
+    out.settings.units = r.system == unit_system::us_customary ? unit_system::us_customary : unit_system::si;
+    if (!out.problems.empty()) return out;
+
+    beam b;
+    b.id = *id;
+    b.description = description;
+    b.span = *span;
+    b.E = *E;
+    b.E_is_default = E_default;
+    b.sec = *sec;
+    for (int i = 0; i < 2; ++i) {
+        load l;
+        l.kind = load_kind::udl;
+        l.value = *line_loads[i];
+        l.from = 0.0;
+        l.to = *span;
+        l.load_case = i == 0 ? "G" : "Q";
+        b.loads.push_back(l);
+    }
+    b.combinations = combinations_of(rules.set);
+    b.start = joint_for_beam(*details[0], b.EI(), b.span);
+    b.end = joint_for_beam(*details[1], b.EI(), b.span);
+    if (!attach_detail_geometry(b, details, at_line, out)) return out;
     b.deflection = deflection;
     b.pointer = at_line;
     out.input = std::move(b);
