@@ -9,6 +9,7 @@
 #include "report_command.hpp"
 #include "sweep_command.hpp"
 #include "detail_command.hpp"
+#include "pinproof/core/printable_text.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/core/output_file.hpp"
@@ -27,7 +28,7 @@ void report_input_error(const input_error& e, std::ostream& err)
 {
     err << "pinproof: the input has " << e.total() << " problem" << (e.total() == 1 ? "" : "s")
         << "; nothing was written.\n";
-    for (const auto& p : e.problems()) err << "error: " << p.where << ": " << p.message << "\n";
+    for (const auto& p : e.problems()) err << "error: " << message_text(p.where) << ": " << message_text(p.message) << "\n";
 }
 
 // Writes `text` to FILE, or to `out` for "-".
@@ -145,11 +146,11 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
         report_input_error(e, err);
         return exit_error;
     } catch (const internal_error& e) {
-        err << "pinproof: internal error: " << e.what()
+        err << "pinproof: internal error: " << message_text(e.what())
             << "\nThis is a fault of pinproof, not of the input; nothing was written. Please report it with the input file.\n";
         return exit_error;
     } catch (const std::exception& e) {
-        err << "pinproof: error: " << e.what() << "; nothing was written.\n";
+        err << "pinproof: error: " << message_text(e.what()) << "; nothing was written.\n";
         return exit_error;
     }
     return exit_error;

@@ -8,7 +8,9 @@
 #include <fstream>
 #include <sstream>
 
+#include "io/json_document.hpp"
 #include "io/json_fields.hpp"
+#include "io/plausibility.hpp"
 #include "pinproof/core/units.hpp"
 
 namespace pinproof {
@@ -46,6 +48,11 @@ std::optional<catalogue_stiffness> read_bound(const json& v, const std::string& 
     }
     const auto s = absolute_stiffness(v, ptr, problems);
     if (!s) return std::nullopt;
+    // The ceiling of every stiffness, as in a project file (io/plausibility.hpp).
+    if (auto m = plausibility::stiffness_too_large(*s, unit_system::si, shown(v))) {
+        problems.add(ptr, *m);
+        return std::nullopt;
+    }
     out.value = *s;
     return out;
 }
@@ -217,15 +224,7 @@ detail_catalogue read_detail_catalogue(const json& doc, const std::string& sourc
 
 detail_catalogue parse_detail_catalogue(std::string_view text, const std::string& source)
 {
-    json doc;
-    try {
-        doc = json::parse(text.begin(), text.end());
-    } catch (const json::parse_error& e) {
-        const std::string what = e.what();
-        const auto pos = what.find("syntax error");
-        throw input_error(located(source, line_column(text, e.byte > 0 ? e.byte - 1 : 0)),
-                          "the catalogue is not valid JSON: " + (pos == std::string::npos ? what : what.substr(pos)));
-    }
+    const json doc = json_document::parse(text, "catalogue", source);
     return read_detail_catalogue(doc, source);
 }
 

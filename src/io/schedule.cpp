@@ -13,6 +13,9 @@
 #include <sstream>
 #include <stdexcept>
 
+#include "io/input_text.hpp"
+#include "io/plausibility.hpp"
+#include "pinproof/core/printable_text.hpp"
 #include "pinproof/core/units.hpp"
 #include "pinproof/io/connection_detail_input.hpp"
 #include "pinproof/io/project_input.hpp"
@@ -36,7 +39,7 @@ std::string trimmed(std::string_view t)
 std::string in_quotes(const std::string& s)
 {
     std::string t = s.size() > 60 ? s.substr(0, 57) + "..." : s;
-    return "\"" + t + "\"";
+    return "\"" + message_text(t) + "\"";
 }
 
 std::string found_cell(const std::string& s) { return s.empty() ? "an empty cell" : in_quotes(s); }
@@ -240,6 +243,10 @@ schedule parse_schedule(std::string_view text, const std::string& source)
 {
     schedule s;
     s.source = source;
+    input_text::refuse_non_utf8_encodings(text, "schedule");
+    if (text.find('\r') != std::string_view::npos && text.find('\n') == std::string_view::npos)
+        throw input_error("line 1", "expected lines ending in LF or CRLF, found lines ending in CR alone (an old "
+                                    "Macintosh text format); save the schedule with LF or CRLF line endings");
     std::vector<csv_record> records = read_csv(text);
     if (records.empty())
         throw input_error("line 1", "expected a header row naming the columns (id, span, section, g, q, start, end), "
@@ -278,7 +285,10 @@ schedule parse_schedule(std::string_view text, const std::string& source)
     for (std::size_t i = 0; i < s.rows.size(); ++i) {
         const auto& cells = s.rows[i].cells;
         if (id_col >= cells.size() || cells[id_col].empty()) continue;
-        auto [it, inserted] = first_line.emplace(cells[id_col], s.rows[i].line);
+        // Ids are compared as the row reads them: trimmed of spaces and tabs.
+        const std::string id = trimmed(cells[id_col]);
+        if (id.empty()) continue;
+        auto [it, inserted] = first_line.emplace(id, s.rows[i].line);
         if (!inserted) s.earlier_line_with_same_id[i] = it->second;
     }
     return s;
@@ -344,6 +354,19 @@ struct row_reader {
         }
     }
 
+    // A positive quantity within a plausible range (io/plausibility.hpp), as in a project file.
+    std::optional<double> plausible_cell(const std::string& name, dimension d, bool required,
+                                         plausibility::plausible_range range)
+    {
+        auto v = positive_cell(name, d, required);
+        if (!v) return v;
+        if (auto m = plausibility::outside(*v, range, d, system, in_quotes(rec.cells[*s.column(name)]))) {
+            add(*s.column(name), *m);
+            return std::nullopt;
+        }
+        return v;
+    }
+
     std::optional<double> positive_cell(const std::string& name, dimension d, bool required)
     {
         auto v = quantity_cell(name, d, required);
@@ -378,6 +401,12 @@ struct row_reader {
         }
         auto len = positive_cell("deflection_limit", dims::length, false);
         if (!len) return std::nullopt;
+        if (*len > plausibility::plausible_deflection_limit) {
+            add(col, "expected a positive deflection limit of at most " +
+                         format_quantity(plausibility::plausible_deflection_limit, dims::length, system) + ", found " +
+                         in_quotes(*v));
+            return std::nullopt;
+        }
         out.absolute = *len;
         if (bare_number(*v)) out.text = format_quantity(*len, dims::length, unit_system::si);
         return out;
@@ -393,10 +422,25 @@ bool refuse_malformed_record(const schedule& s, const csv_record& rec, schedule_
         std::string where = at_line + ", column " + std::to_string(rec.bad_column);
         if (rec.bad_column <= s.columns.size()) where += " (" + s.columns[rec.bad_column - 1] + ")";
         out.problems.push_back({where, rec.bad_reason});
-        if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = rec.cells[*c];
+        if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = message_text(trimmed(rec.cells[*c]));
         return true;
     }
-    if (rec.cells.size() == s.columns.size()) return false;
+    if (rec.cells.size() == s.columns.size()) {
+        // Control characters (a line break in a quoted cell too): an id or a
+        // description is one line of text, shown on a terminal and in files.
+        bool refused = false;
+        for (std::size_t col = 0; col < rec.cells.size(); ++col)
+            if (const auto c = first_control_character(rec.cells[col])) {
+                out.problems.push_back({at_line + ", column " + std::to_string(col + 1) + " (" + s.columns[col] + ")",
+                                        "expected text without control characters, found " +
+                                            describe_code_point(c->code_point) + " at byte " +
+                                            std::to_string(c->offset + 1) + " of the cell"});
+                refused = true;
+            }
+        if (refused)
+            if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = message_text(trimmed(rec.cells[*c]));
+        return refused;
+    }
     if (rec.cells.size() < s.columns.size()) {
         const std::size_t col = rec.cells.size();
         out.problems.push_back({at_line + ", column " + std::to_string(col + 1) + " (" + s.columns[col] + ")",
@@ -407,7 +451,7 @@ bool refuse_malformed_record(const schedule& s, const csv_record& rec, schedule_
                                 "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
                                     std::to_string(rec.cells.size()) + " cells in the row"});
     }
-    if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = rec.cells[*c];
+    if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = message_text(trimmed(rec.cells[*c]));
     return true;
 }
 
@@ -460,6 +504,13 @@ std::array<std::optional<double>, 2> read_row_line_loads(row_reader& r)
     const char* load_cols[2] = {"g", "q"};
     for (int i = 0; i < 2; ++i) {
         line_loads[i] = r.quantity_cell(load_cols[i], dims::line_load, true);
+        if (line_loads[i])
+            if (auto m = plausibility::load_too_large(*line_loads[i], dims::line_load, r.system,
+                                                      in_quotes(r.rec.cells[*r.s.column(load_cols[i])]))) {
+                r.add(*r.s.column(load_cols[i]), *m);
+                line_loads[i].reset();
+                continue;
+            }
         if (line_loads[i] && *line_loads[i] < 0) {
             r.add(*r.s.column(load_cols[i]), std::string("expected a downward line load of zero or more, found ") +
                                                  in_quotes(r.rec.cells[*r.s.column(load_cols[i])]));
@@ -560,8 +611,8 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
                                    std::to_string(s.earlier_line_with_same_id[index]));
 
     const row_rules rules = read_row_rules(r);
-    auto span = r.positive_cell("span", dims::length, true);
-    std::optional<double> E = r.positive_cell("E", dims::pressure, false);
+    auto span = r.plausible_cell("span", dims::length, true, plausibility::plausible_span);
+    std::optional<double> E = r.plausible_cell("E", dims::pressure, false, plausibility::plausible_E);
     const bool E_default = !r.cell("E", false);
     if (E_default) E = rules.standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
     const std::optional<section> sec = read_row_section(r);
@@ -597,6 +648,22 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     b.combinations = combinations_of(rules.set);
     b.start = joint_for_beam(*details[0], b.EI(), b.span);
     b.end = joint_for_beam(*details[1], b.EI(), b.span);
+    // A stiffness given as a multiple of EI/L meets the project file's ceiling here, with this beam's EI/L.
+    bool stiffness_ok = true;
+    for (int i = 0; i < 2; ++i) {
+        const joint& j = i == 0 ? b.start : b.end;
+        for (const stiffness& k : {j.range.min, j.range.max})
+            if (!k.is_rigid())
+                if (auto m = plausibility::stiffness_too_large(k.value(), r.system,
+                                                               "catalogue detail \"" + message_text(details[i]->id) + "\" = " +
+                                                                   format_quantity(k.value(), dims::rotational_stiffness, r.system) +
+                                                                   " on this beam")) {
+                    r.add(*s.column(i == 0 ? "start" : "end"), *m);
+                    stiffness_ok = false;
+                    break;
+                }
+    }
+    if (!stiffness_ok) return out;
     if (!attach_detail_geometry(b, details, at_line, out)) return out;
     b.deflection = deflection;
     b.pointer = at_line;
