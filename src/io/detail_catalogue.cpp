@@ -11,6 +11,7 @@
 #include "io/json_document.hpp"
 #include "io/json_fields.hpp"
 #include "io/plausibility.hpp"
+#include "pinproof/core/spelling.hpp"
 #include "pinproof/core/units.hpp"
 
 namespace pinproof {
@@ -177,6 +178,14 @@ void detail_catalogue::rebuild_index()
     for (std::size_t i = 0; i < details.size(); ++i) index_.emplace(details[i].id, i);
 }
 
+std::vector<std::string> detail_catalogue::ids() const
+{
+    std::vector<std::string> out;
+    out.reserve(details.size());
+    for (const auto& d : details) out.push_back(d.id);
+    return out;
+}
+
 std::string detail_catalogue::id_list(std::size_t limit) const
 {
     std::string out;
@@ -267,7 +276,8 @@ std::size_t resolve_detail_references(json& doc, const detail_catalogue& catalog
             if (!d) {
                 problems.add(ptr, "expected an inline joint or a detail id from the catalogue" +
                                       (catalogue.source.empty() ? std::string() : " " + catalogue.source) + " (" +
-                                      catalogue.id_list() + "), found \"" + id + "\", which is not in it");
+                                      catalogue.id_list() + "), found \"" + id + "\", which is not in it" +
+                                      did_you_mean(id, catalogue.ids()));
                 continue;
             }
             json inline_joint = json::object();

@@ -2,6 +2,7 @@
 
 #include "io/input_text.hpp"
 #include "pinproof/core/printable_text.hpp"
+#include "pinproof/core/spelling.hpp"
 
 #include <cctype>
 #include <cmath>
@@ -226,8 +227,8 @@ void reject_unknown_keys(const json& obj, const std::string& pointer, const std:
         if (ok) continue;
         std::string list;
         for (const auto& k : known) list += (list.empty() ? "" : ", ") + k;
-        problems.add(child(pointer, it.key()),
-                     "unknown field \"" + it.key() + "\" (known fields here: " + list + ", notes)");
+        problems.add(child(pointer, it.key()), "unknown field \"" + it.key() + "\" (known fields here: " + list +
+                                                   ", notes)" + did_you_mean(it.key(), known));
     }
 }
 

@@ -16,6 +16,7 @@
 #include "io/input_text.hpp"
 #include "io/plausibility.hpp"
 #include "pinproof/core/printable_text.hpp"
+#include "pinproof/core/spelling.hpp"
 #include "pinproof/core/units.hpp"
 #include "pinproof/io/connection_detail_input.hpp"
 #include "pinproof/io/project_input.hpp"
@@ -265,9 +266,12 @@ schedule parse_schedule(std::string_view text, const std::string& source)
         const std::string where = at_header + ", column " + std::to_string(i + 1);
         const auto& req = schedule_required_columns();
         const auto& opt = schedule_optional_columns();
-        if (std::find(req.begin(), req.end(), name) == req.end() && std::find(opt.begin(), opt.end(), name) == opt.end())
-            problems.add(where, "expected a column name (" + known + "), found " + found_cell(name));
-        else if (std::find(s.columns.begin(), s.columns.end(), name) != s.columns.end())
+        if (std::find(req.begin(), req.end(), name) == req.end() && std::find(opt.begin(), opt.end(), name) == opt.end()) {
+            std::vector<std::string> names = req;
+            names.insert(names.end(), opt.begin(), opt.end());
+            problems.add(where, "expected a column name (" + known + "), found " + found_cell(name) +
+                                    did_you_mean(name, names));
+        } else if (std::find(s.columns.begin(), s.columns.end(), name) != s.columns.end())
             problems.add(where + " (" + name + ")", "expected each column once, found \"" + name + "\" a second time");
         s.columns.push_back(name);
     }
@@ -534,7 +538,8 @@ std::array<const catalogue_detail*, 2> read_row_details(row_reader& r, const det
         if (!details[i])
             r.add(*r.s.column(end_cols[i]), "expected a detail id from the catalogue" +
                                                 (catalogue.source.empty() ? std::string() : " " + catalogue.source) +
-                                                " (" + catalogue.id_list() + "), found " + in_quotes(*d));
+                                                " (" + catalogue.id_list() + "), found " + in_quotes(*d) +
+                                                did_you_mean(*d, catalogue.ids()));
     }
     return details;
 }
