@@ -220,3 +220,11 @@ TEST_CASE("beam line of a uniformly loaded beam with the far end pinned [ROARK] 
     const double S = 5e6, th = bl.fixed_moment * bl.pinned_rotation / (S * bl.pinned_rotation + bl.fixed_moment);
     CHECK(close_rel(bl.upper.rotation, th, 1e-12));
 }
+
+TEST_CASE("html escape [XML 1.0 2.2]: C0 controls other than tab and line breaks become U+FFFD - exact")
+{
+    // W3C, Extensible Markup Language 1.0 (5th ed.), 2.2 Characters: Char
+    // excludes U+0000..U+0008, U+000B, U+000C, U+000E..U+001F.
+    CHECK(pinproof::html_escape("B1\x1b[8m<x>") == "B1\xEF\xBF\xBD[8m&lt;x&gt;");
+    CHECK(pinproof::html_escape(std::string("a\0b\tc\n", 6)) == "a\xEF\xBF\xBD" "b\tc\n");
+}
