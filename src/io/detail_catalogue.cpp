@@ -11,6 +11,7 @@
 #include "io/json_document.hpp"
 #include "io/json_fields.hpp"
 #include "io/plausibility.hpp"
+#include "pinproof/io/stiffness_distribution_input.hpp"
 #include "pinproof/core/spelling.hpp"
 #include "pinproof/core/units.hpp"
 
@@ -140,6 +141,17 @@ std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr
             problems.add(child(ptr, key), "expected an object, found " + shown(*g));
             ok = false;
             continue;
+        }
+        // A distribution is checked here too, so that its problems are named at
+        // the catalogue's pointer; values written as multiples of EI/L wait
+        // for a beam (EI/L = 0 leaves them unresolved, without a problem).
+        if (std::string(key) == "stiffness_distribution") {
+            const std::size_t before = problems.size();
+            (void)read_stiffness_distribution(*g, child(ptr, key), 0.0, problems);
+            if (problems.size() != before) {
+                ok = false;
+                continue;
+            }
         }
         (std::string(key) == "geometry" ? d.geometry : d.stiffness_distribution) = *g;
     }
