@@ -12,6 +12,7 @@
 #include <system_error>
 #include <thread>
 
+#include "pinproof/core/csv_cell.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/report/result_json.hpp"
 
@@ -116,19 +117,6 @@ void refuse(batch_row& row, std::vector<input_problem> problems)
     row.worst_ratio.reset();
     row.message.clear();
     for (const auto& p : row.problems) row.message += (row.message.empty() ? "" : "; ") + p.where + ": " + p.message;
-}
-
-// RFC 4180: a cell holding a comma, a quote or a line break is quoted, with
-// quotes doubled.
-std::string csv_cell(const std::string& s)
-{
-    if (s.find_first_of(",\"\r\n") == std::string::npos) return s;
-    std::string out = "\"";
-    for (char c : s) {
-        if (c == '"') out += '"';
-        out += c;
-    }
-    return out + "\"";
 }
 
 std::string fixed(const std::optional<double>& v, double scale, int decimals)

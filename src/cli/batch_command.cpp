@@ -10,6 +10,7 @@
 #include "cli.hpp"
 #include "count_option.hpp"
 #include "interruption.hpp"
+#include "pinproof/core/printable_text.hpp"
 #include "pinproof/batch/batch.hpp"
 #include "pinproof/io/detail_catalogue.hpp"
 #include "pinproof/core/errors.hpp"
@@ -56,7 +57,7 @@ void report_problems(const std::vector<input_problem>& problems, std::ostream& e
 {
     err << "pinproof: the input has " << problems.size() << " problem" << (problems.size() == 1 ? "" : "s")
         << "; nothing was written.\n";
-    for (const auto& p : problems) err << "error: " << p.where << ": " << p.message << "\n";
+    for (const auto& p : problems) err << "error: " << message_text(p.where) << ": " << message_text(p.message) << "\n";
 }
 
 }  // namespace
@@ -144,7 +145,7 @@ int batch_command(const batch_command_options& o, std::ostream& out, std::ostrea
             if (row.verdict != batch_verdict::refused) continue;
             for (const auto& p : row.problems) {
                 ++refused_problems;
-                if (shown++ < problems_shown) err << "error: " << p.where << ": " << p.message << "\n";
+                if (shown++ < problems_shown) err << "error: " << message_text(p.where) << ": " << message_text(p.message) << "\n";
             }
         }
         if (refused_problems > problems_shown)

@@ -13,6 +13,7 @@
 #include "fit_command.hpp"
 #include "new_command.hpp"
 #include "interruption.hpp"
+#include "pinproof/core/printable_text.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/core/input_file.hpp"
@@ -34,7 +35,7 @@ void report_input_error(const input_error& e, std::ostream& err)
 {
     err << "pinproof: the input has " << e.total() << " problem" << (e.total() == 1 ? "" : "s")
         << "; nothing was written.\n";
-    for (const auto& p : e.problems()) err << "error: " << p.where << ": " << p.message << "\n";
+    for (const auto& p : e.problems()) err << "error: " << message_text(p.where) << ": " << message_text(p.message) << "\n";
 }
 
 int check_command(const std::string& file, const std::string& details, const std::string& json_out, bool quiet,
@@ -195,7 +196,7 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
         report_input_error(e, err);
         return exit_error;
     } catch (const internal_error& e) {
-        err << "pinproof: internal error: " << e.what()
+        err << "pinproof: internal error: " << message_text(e.what())
             << "\nThis is a fault of pinproof, not of the input; nothing was written. Please report it with the input file.\n";
         return exit_error;
     } catch (const std::bad_alloc&) {
@@ -205,7 +206,7 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
     } catch (const std::exception& e) {
         const std::string what = e.what();
         // A failure after some outputs were renamed says so itself.
-        err << "pinproof: error: " << what
+        err << "pinproof: error: " << message_text(what)
             << (what.find("already in place") == std::string::npos ? "; nothing was written.\n" : "\n");
         return exit_error;
     }

@@ -194,6 +194,277 @@ bool edges_touch(point2 a, point2 b, point2 c, point2 d)
     return (o1 == 0 && on(a, b, c)) || (o2 == 0 && on(a, b, d)) || (o3 == 0 && on(c, d, a)) || (o4 == 0 && on(c, d, b));
 }
 
+// Field names of the fitting, which differ by type.
+struct fitting_keys {
+    std::string top, depth, thickness;
+};
+
+fitting_keys keys_of(detail_type type)
+{
+    const bool cleats = type == detail_type::web_cleats;
+    return {cleats ? "cleat_top" : "plate_top", cleats ? "cleat_depth" : "plate_depth",
+            cleats ? "cleat_thickness" : "plate_thickness"};
+}
+
+// The fields a detail of this type may have.
+std::vector<std::string> known_detail_fields(detail_type type, const fitting_keys& k)
+{
+    const bool fin = type == detail_type::fin_plate, end = type == detail_type::end_plate,
+               custom = type == detail_type::custom;
+    std::vector<std::string> known = {"type", "gap_tolerance", "support", "supporting_beam", "centre_of_rotation"};
+    if (custom) {
+        known.push_back("outline");
+    } else {
+        for (const char* key : {"cope_top", "cope_bottom", "bolt_diameter", "hole_diameter", "bolt_rows", "bolt_pitch",
+                                "first_bolt"})
+            known.push_back(key);
+        known.push_back(k.top);
+        known.push_back(k.depth);
+        known.push_back(k.thickness);
+        if (!end) known.push_back("gap");
+        if (fin || end) known.push_back("plate_grade");
+        if (fin) known.push_back("bolt_line");
+    }
+    return known;
+}
+
+// The fitting of a standard detail (fin plate, cleats, end plate): gap, plate,
+// bolts and their defaults, and whether the fitting fits the beam.
+void read_fitting(reader& r, connection_detail& d, const fitting_keys& k, double h, std::size_t before)
+{
+    const json& value = r.obj();
+    const std::string& pointer = r.pointer();
+    problem_list& problems = r.problems();
+    const bool fin = d.type == detail_type::fin_plate, cleats = d.type == detail_type::web_cleats,
+               end = d.type == detail_type::end_plate;
+    const auto gap = end ? std::optional<double>(0.0) : r.length("gap", default_gap);
+    const auto thickness = r.length(k.thickness, default_thickness);
+    const auto bolt = r.length("bolt_diameter", default_bolt);
+    const auto hole = r.length("hole_diameter", default_hole(bolt.value_or(default_bolt)));
+    const auto pitch = r.length("bolt_pitch", default_pitch);
+    const auto first = r.length("first_bolt", default_first_bolt);
+    const auto top = r.length(k.top, default_plate_top, true);
+    const auto line = fin ? r.length("bolt_line", default_bolt_line) : std::optional<double>(0.0);
+    long long rows = 0;  // 0: not given
+    if (const auto v = jf::integer_field(value, pointer, "bolt_rows", false, problems)) {
+        if (*v < 1)
+            r.problem("bolt_rows", "expected at least 1 bolt row, found " + std::to_string(*v));
+        else if (*v > 50)
+            r.problem("bolt_rows", "expected at most 50 bolt rows, found " + std::to_string(*v));
+        else
+            rows = *v;
+    }
+    std::optional<double> depth;
+    if (r.has(k.depth)) depth = r.length(k.depth, std::nullopt);
+    if (fin || end)
+        if (auto g = jf::choice_field(value, pointer, "plate_grade", {"S275", "S355"}, false, problems))
+            d.grade = *g == "S355" ? plate_grade::s355 : plate_grade::s275;
+
+    if (!(gap && thickness && bolt && hole && pitch && first && top && line && problems.size() == before)) return;
+    // Rows and depth from each other, or the fewest rows reaching 0.6 h.
+    long long n = rows;
+    if (n < 1 && depth)
+        n = std::max(1LL, static_cast<long long>(std::floor((*depth - 2 * *first) / *pitch + 1e-9)) + 1);
+    if (n < 1)
+        for (n = 1; 2 * *first + (n - 1) * *pitch < min_depth_ratio * h - 1e-9 && n < 50;) ++n;
+    const double hp = depth ? *depth : 2 * *first + (n - 1) * *pitch;
+
+    d.gap = end ? *thickness : *gap;
+    d.plate_top = *top;
+    d.plate_depth = hp;
+    d.plate_thickness = *thickness;
+    d.bolts.diameter = *bolt;
+    d.bolts.hole_diameter = *hole;
+    d.bolts.rows = static_cast<int>(n);
+    d.bolts.pitch = *pitch;
+    d.bolts.first_bolt = *first;
+    d.bolts.bolt_line = *line;
+
+    if (*hole < *bolt)
+        r.problem("hole_diameter", "expected a hole at least as large as the bolt (" + r.show(*bolt) +
+                                       "), found " + r.show(*hole));
+    const std::string what = fin ? "fin plate" : cleats ? "cleats" : "end plate";
+    if (hp > h)
+        r.problem(k.depth, "the " + what + " is deeper than the beam (depth " + r.show(h) + "): found " + r.show(hp));
+    else if (d.plate_top + hp > h + 1e-12)
+        r.problem(k.depth, "the " + what + " extends below the beam: top " + r.show(d.plate_top) + " + depth " +
+                               r.show(hp) + " = " + r.show(d.plate_top + hp) + ", beam depth " + r.show(h));
+    if (*first + (n - 1) * *pitch >= hp)
+        r.problem(rows > 0 ? "bolt_rows" : k.depth,
+                  std::to_string(n) + " bolt row(s) at " + r.show(*pitch) + " pitch from " + r.show(*first) +
+                      " need a " + what + " deeper than " + r.show(*first + (n - 1) * *pitch) + ", found " +
+                      r.show(hp));
+}
+
+// Whether the closed outline q has a repeated adjacent point or two edges that
+// cross or touch; each such fault is a problem at `lp`.
+bool outline_is_simple(const std::vector<point2>& q, const std::string& lp, problem_list& problems)
+{
+    const std::size_t n = q.size();
+    bool ok = true;
+    for (std::size_t i = 0; i < n && ok; ++i)
+        for (std::size_t j = i + 1; j < n && ok; ++j) {
+            const bool adjacent = j == i + 1 || (i == 0 && j == n - 1);
+            if (adjacent) {
+                if (q[i].x == q[j].x && q[i].y == q[j].y) {
+                    problems.add(jf::child(lp, j), "repeats point " + std::to_string(i + 1));
+                    ok = false;
+                }
+                continue;
+            }
+            if (edges_touch(q[i], q[(i + 1) % n], q[j], q[(j + 1) % n])) {
+                problems.add(lp, "the outline crosses or touches itself (edges " + std::to_string(i + 1) + "-" +
+                                     std::to_string((i + 1) % n + 1) + " and " + std::to_string(j + 1) + "-" +
+                                     std::to_string((j + 1) % n + 1) + ")");
+                ok = false;
+            }
+        }
+    return ok;
+}
+
+// custom: the outline gives the gap.
+void read_custom_outline(reader& r, connection_detail& d)
+{
+    const json& value = r.obj();
+    const std::string& pointer = r.pointer();
+    problem_list& problems = r.problems();
+    if (!r.has("outline")) {
+        problems.add(jf::child(pointer, "outline"), "missing required field \"outline\" (a list of points {x, y})");
+    } else {
+        const json& list = value["outline"];
+        const std::string lp = jf::child(pointer, "outline");
+        if (!list.is_array() || list.size() < 3) {
+            problems.add(lp, "expected a list of at least 3 points {\"x\": ..., \"y\": ...}, found " + jf::shown(list));
+        } else {
+            bool ok = true;
+            for (std::size_t i = 0; i < list.size(); ++i) {
+                auto pnt = read_point(list[i], jf::child(lp, i), problems);
+                if (pnt)
+                    d.outline.push_back(*pnt);
+                else
+                    ok = false;
+            }
+            if (ok) {
+                std::vector<point2> q;
+                for (const auto& p : d.outline) q.push_back({p.from_support, p.below_top});
+                ok = outline_is_simple(q, lp, problems);
+            }
+            if (ok) {
+                d.gap = d.outline.front().from_support;
+                for (const auto& p : d.outline) d.gap = std::min(d.gap, p.from_support);
+                for (std::size_t i = 0; i < d.outline.size(); ++i)
+                    if (d.outline[i].from_support <= d.gap_tolerance)
+                        problems.add(jf::child(jf::child(lp, i), "x"),
+                                     "every outline point must stand clear of the support face by more than "
+                                     "gap_tolerance (" + r.show(d.gap_tolerance) + "), found " +
+                                         r.show(d.outline[i].from_support));
+            }
+        }
+    }
+    if (!r.has("centre_of_rotation"))
+        problems.add(jf::child(pointer, "centre_of_rotation"),
+                     "missing required field \"centre_of_rotation\": a custom detail has no default centre");
+}
+
+// Copes of a standard detail, and whether the bolts or the fitting fall in them.
+void read_copes(reader& r, connection_detail& d, const fitting_keys& k, double h, std::size_t before)
+{
+    const bool fin = d.type == detail_type::fin_plate, cleats = d.type == detail_type::web_cleats;
+    if (r.has("cope_top")) d.cope_top = read_cope(r, "cope_top", h);
+    if (r.has("cope_bottom")) d.cope_bottom = read_cope(r, "cope_bottom", h);
+    if (d.cope_top && d.cope_bottom && d.cope_top->depth + d.cope_bottom->depth >= h)
+        r.problem("cope_bottom", "the copes leave no web: top " + r.show(d.cope_top->depth) + " + bottom " +
+                                     r.show(d.cope_bottom->depth) + " >= beam depth " + r.show(h));
+    if (r.problems().size() != before) return;
+    const double bottom = d.plate_top + d.plate_depth;
+    const std::string what = fin ? "fin plate bolts" : cleats ? "cleats" : "end plate";
+    if (fin) {
+        // Bolts within the cope length must sit in the remaining web.
+        for (int i = 0; i < d.bolts.rows; ++i) {
+            const double y = d.plate_top + d.bolts.first_bolt + i * d.bolts.pitch;
+            if (d.cope_top && d.bolts.bolt_line < d.cope_top->length && y <= d.cope_top->depth) {
+                r.problem("first_bolt", "bolt row " + std::to_string(i + 1) + " (" + r.show(y) +
+                                            " below the top) falls in the top cope (depth " +
+                                            r.show(d.cope_top->depth) + ")");
+                break;
+            }
+            if (d.cope_bottom && d.bolts.bolt_line < d.cope_bottom->length && y >= h - d.cope_bottom->depth) {
+                r.problem("bolt_rows", "bolt row " + std::to_string(i + 1) + " (" + r.show(y) +
+                                           " below the top) falls in the bottom cope (depth " +
+                                           r.show(d.cope_bottom->depth) + ")");
+                break;
+            }
+        }
+    } else {
+        if (d.cope_top && d.plate_top < d.cope_top->depth)
+            r.problem(k.top, "the " + what + " start within the top cope: top " + r.show(d.plate_top) +
+                                 ", cope depth " + r.show(d.cope_top->depth));
+        if (d.cope_bottom && bottom > h - d.cope_bottom->depth)
+            r.problem(k.depth, "the " + what + " reach into the bottom cope: bottom " + r.show(bottom) +
+                                   " below the top, cope starts at " + r.show(h - d.cope_bottom->depth));
+    }
+}
+
+// The supporting beam of a beam-web support (and only of one).
+void read_support(reader& r, connection_detail& d)
+{
+    if (d.support == support_type::beam_web) {
+        if (!r.has("supporting_beam"))
+            r.problems().add(jf::child(r.pointer(), "supporting_beam"),
+                             "missing required field \"supporting_beam\" for a beam-web support (its \"section\" or "
+                             "dimensions and \"top\", the level of its top below the top of this beam)");
+        else
+            d.support_beam = read_supporting_beam(r);
+    } else if (r.has("supporting_beam")) {
+        r.problem("supporting_beam", "applies only to a \"beam-web\" support, found support \"" + to_string(d.support) + "\"");
+    }
+}
+
+// The centre of rotation, if given: on or beyond the support face, within the beam depth.
+void read_centre_of_rotation(reader& r, connection_detail& d, double h)
+{
+    if (!r.has("centre_of_rotation")) return;
+    problem_list& problems = r.problems();
+    const std::string cp = jf::child(r.pointer(), "centre_of_rotation");
+    if (auto c = read_point(r.obj()["centre_of_rotation"], cp, problems)) {
+        if (c->from_support < 0)
+            problems.add(jf::child(cp, "x"), "the centre of rotation lies inside the support: x is measured from "
+                                             "the support face along the beam and must be 0 or more, found " +
+                                                 r.show(c->from_support));
+        else if (c->below_top < 0 || c->below_top > h)
+            problems.add(jf::child(cp, "y"), "the centre of rotation lies outside the beam depth: expected 0 to " +
+                                                 r.show(h) + " below the top, found " + r.show(c->below_top));
+        else
+            d.centre_of_rotation = c;
+    }
+}
+
+// The beam end must stand clear of the support at rest, at the worst-case gap.
+void check_clear_at_rest(reader& r, const connection_detail& d, const section& beam)
+{
+    const beam_end_geometry g = build_geometry(d, beam);
+    const auto hit = overlap(g, rotation_sense::sagging, 0.0);
+    if (!hit) return;
+    std::string where = "gap";
+    if (d.type == detail_type::custom)
+        where = "outline";
+    else if (d.support_beam)
+        where = hit->support_part.find("bottom") != std::string::npos ? "cope_bottom" : "cope_top";
+    std::string hint;
+    if (d.support_beam) {
+        const supporting_beam& sb = *d.support_beam;
+        const auto level = [&](double v) {
+            return r.show(std::abs(v)) + (v >= 0 ? " below" : " above") + " the top of this beam";
+        };
+        hint = "; a cope must clear the supporting beam's flanges and root fillets: its top flange with the "
+               "fillet reaches down to " + level(sb.top_flange_underside() + sb.root_radius) +
+               ", its bottom flange with the fillet rises to " + level(sb.bottom_flange_top() - sb.root_radius) +
+               ", and the flange tips stand " + r.show(sb.flange_outstand()) +
+               " out from the web face (worst-case gap " + r.show(d.worst_case_gap()) + ")";
+    }
+    r.problems().add(jf::child(r.pointer(), where), "the beam end overlaps the support at rest: " + hit->description() + hint);
+}
+
 }  // namespace
 
 connection_detail read_connection_detail(const nlohmann::json& value, const std::string& pointer, const section& beam,
@@ -207,29 +478,9 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
     const auto type_text = jf::choice_field(value, pointer, "type", detail_type_names(), true, problems);
     if (!type_text) return d;  // which fields apply depends on the type
     d.type = *parse_detail_type(*type_text);
-    const bool fin = d.type == detail_type::fin_plate, cleats = d.type == detail_type::web_cleats,
-               end = d.type == detail_type::end_plate, custom = d.type == detail_type::custom;
-
-    // Field names of the fitting differ by type.
-    const std::string top_key = cleats ? "cleat_top" : "plate_top";
-    const std::string depth_key = cleats ? "cleat_depth" : "plate_depth";
-    const std::string thick_key = cleats ? "cleat_thickness" : "plate_thickness";
-
-    std::vector<std::string> known = {"type", "gap_tolerance", "support", "supporting_beam", "centre_of_rotation"};
-    if (custom) {
-        known.push_back("outline");
-    } else {
-        for (const char* k : {"cope_top", "cope_bottom", "bolt_diameter", "hole_diameter", "bolt_rows", "bolt_pitch",
-                              "first_bolt"})
-            known.push_back(k);
-        known.push_back(top_key);
-        known.push_back(depth_key);
-        known.push_back(thick_key);
-        if (!end) known.push_back("gap");
-        if (fin || end) known.push_back("plate_grade");
-        if (fin) known.push_back("bolt_line");
-    }
-    jf::reject_unknown_keys(value, pointer, known, problems);
+    const bool end = d.type == detail_type::end_plate, custom = d.type == detail_type::custom;
+    const fitting_keys k = keys_of(d.type);
+    jf::reject_unknown_keys(value, pointer, known_detail_fields(d.type, k), problems);
 
     const double h = beam.depth;
     if (!(h > 0) || !std::isfinite(h)) {
@@ -243,219 +494,20 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
     const auto tolerance = r.length("gap_tolerance", 0.0, true);
     if (tolerance) d.gap_tolerance = *tolerance;
 
-    if (!custom) {
-        const auto gap = end ? std::optional<double>(0.0) : r.length("gap", default_gap);
-        const auto thickness = r.length(thick_key, default_thickness);
-        const auto bolt = r.length("bolt_diameter", default_bolt);
-        const auto hole = r.length("hole_diameter", default_hole(bolt.value_or(default_bolt)));
-        const auto pitch = r.length("bolt_pitch", default_pitch);
-        const auto first = r.length("first_bolt", default_first_bolt);
-        const auto top = r.length(top_key, default_plate_top, true);
-        const auto line = fin ? r.length("bolt_line", default_bolt_line) : std::optional<double>(0.0);
-        long long rows = 0;  // 0: not given
-        if (const auto v = jf::integer_field(value, pointer, "bolt_rows", false, problems)) {
-            if (*v < 1)
-                r.problem("bolt_rows", "expected at least 1 bolt row, found " + std::to_string(*v));
-            else if (*v > 50)
-                r.problem("bolt_rows", "expected at most 50 bolt rows, found " + std::to_string(*v));
-            else
-                rows = *v;
-        }
-        std::optional<double> depth;
-        if (r.has(depth_key)) depth = r.length(depth_key, std::nullopt);
-        if (fin || end)
-            if (auto g = jf::choice_field(value, pointer, "plate_grade", {"S275", "S355"}, false, problems))
-                d.grade = *g == "S355" ? plate_grade::s355 : plate_grade::s275;
-
-        if (gap && thickness && bolt && hole && pitch && first && top && line && problems.size() == before) {
-            // Rows and depth from each other, or the fewest rows reaching 0.6 h.
-            long long n = rows;
-            if (n < 1 && depth)
-                n = std::max(1LL, static_cast<long long>(std::floor((*depth - 2 * *first) / *pitch + 1e-9)) + 1);
-            if (n < 1)
-                for (n = 1; 2 * *first + (n - 1) * *pitch < min_depth_ratio * h - 1e-9 && n < 50;) ++n;
-            const double hp = depth ? *depth : 2 * *first + (n - 1) * *pitch;
-
-            d.gap = end ? *thickness : *gap;
-            d.plate_top = *top;
-            d.plate_depth = hp;
-            d.plate_thickness = *thickness;
-            d.bolts.diameter = *bolt;
-            d.bolts.hole_diameter = *hole;
-            d.bolts.rows = static_cast<int>(n);
-            d.bolts.pitch = *pitch;
-            d.bolts.first_bolt = *first;
-            d.bolts.bolt_line = *line;
-
-            if (*hole < *bolt)
-                r.problem("hole_diameter", "expected a hole at least as large as the bolt (" + r.show(*bolt) +
-                                               "), found " + r.show(*hole));
-            const std::string what = fin ? "fin plate" : cleats ? "cleats" : "end plate";
-            if (hp > h)
-                r.problem(depth_key, "the " + what + " is deeper than the beam (depth " + r.show(h) + "): found " +
-                                         r.show(hp));
-            else if (d.plate_top + hp > h + 1e-12)
-                r.problem(depth_key, "the " + what + " extends below the beam: top " + r.show(d.plate_top) + " + depth " +
-                                         r.show(hp) + " = " + r.show(d.plate_top + hp) + ", beam depth " + r.show(h));
-            if (*first + (n - 1) * *pitch >= hp)
-                r.problem(rows > 0 ? "bolt_rows" : depth_key,
-                          std::to_string(n) + " bolt row(s) at " + r.show(*pitch) + " pitch from " + r.show(*first) +
-                              " need a " + what + " deeper than " + r.show(*first + (n - 1) * *pitch) + ", found " +
-                              r.show(hp));
-        }
-    } else {
-        // custom: the outline gives the gap.
-        if (!r.has("outline")) {
-            problems.add(jf::child(pointer, "outline"), "missing required field \"outline\" (a list of points {x, y})");
-        } else {
-            const json& list = value["outline"];
-            const std::string lp = jf::child(pointer, "outline");
-            if (!list.is_array() || list.size() < 3) {
-                problems.add(lp, "expected a list of at least 3 points {\"x\": ..., \"y\": ...}, found " + jf::shown(list));
-            } else {
-                bool ok = true;
-                for (std::size_t i = 0; i < list.size(); ++i) {
-                    auto pnt = read_point(list[i], jf::child(lp, i), problems);
-                    if (pnt)
-                        d.outline.push_back(*pnt);
-                    else
-                        ok = false;
-                }
-                if (ok) {
-                    const std::size_t n = d.outline.size();
-                    std::vector<point2> q;
-                    for (const auto& p : d.outline) q.push_back({p.from_support, p.below_top});
-                    for (std::size_t i = 0; i < n && ok; ++i)
-                        for (std::size_t j = i + 1; j < n && ok; ++j) {
-                            const bool adjacent = j == i + 1 || (i == 0 && j == n - 1);
-                            if (adjacent) {
-                                if (q[i].x == q[j].x && q[i].y == q[j].y) {
-                                    problems.add(jf::child(lp, j), "repeats point " + std::to_string(i + 1));
-                                    ok = false;
-                                }
-                                continue;
-                            }
-                            if (edges_touch(q[i], q[(i + 1) % n], q[j], q[(j + 1) % n])) {
-                                problems.add(lp, "the outline crosses or touches itself (edges " + std::to_string(i + 1) +
-                                                     "-" + std::to_string((i + 1) % n + 1) + " and " +
-                                                     std::to_string(j + 1) + "-" + std::to_string((j + 1) % n + 1) + ")");
-                                ok = false;
-                            }
-                        }
-                    if (ok) {
-                        d.gap = d.outline.front().from_support;
-                        for (const auto& p : d.outline) d.gap = std::min(d.gap, p.from_support);
-                        for (std::size_t i = 0; i < n; ++i)
-                            if (d.outline[i].from_support <= d.gap_tolerance)
-                                problems.add(jf::child(jf::child(lp, i), "x"),
-                                             "every outline point must stand clear of the support face by more than "
-                                             "gap_tolerance (" + r.show(d.gap_tolerance) + "), found " +
-                                                 r.show(d.outline[i].from_support));
-                    }
-                }
-            }
-        }
-        if (!r.has("centre_of_rotation"))
-            problems.add(jf::child(pointer, "centre_of_rotation"),
-                         "missing required field \"centre_of_rotation\": a custom detail has no default centre");
-    }
+    if (!custom)
+        read_fitting(r, d, k, h, before);
+    else
+        read_custom_outline(r, d);
 
     // Gap and tolerance.
     if (!custom && problems.size() == before && d.gap_tolerance >= d.gap)
         r.problem("gap_tolerance", "expected less than the " + std::string(end ? "plate thickness" : "gap") + " (" +
                                        r.show(d.gap) + "), found " + r.show(d.gap_tolerance));
 
-    // Copes.
-    if (!custom) {
-        if (r.has("cope_top")) d.cope_top = read_cope(r, "cope_top", h);
-        if (r.has("cope_bottom")) d.cope_bottom = read_cope(r, "cope_bottom", h);
-        if (d.cope_top && d.cope_bottom && d.cope_top->depth + d.cope_bottom->depth >= h)
-            r.problem("cope_bottom", "the copes leave no web: top " + r.show(d.cope_top->depth) + " + bottom " +
-                                         r.show(d.cope_bottom->depth) + " >= beam depth " + r.show(h));
-        if (problems.size() == before) {
-            const double bottom = d.plate_top + d.plate_depth;
-            const std::string what = fin ? "fin plate bolts" : cleats ? "cleats" : "end plate";
-            if (fin) {
-                // Bolts within the cope length must sit in the remaining web.
-                for (int i = 0; i < d.bolts.rows; ++i) {
-                    const double y = d.plate_top + d.bolts.first_bolt + i * d.bolts.pitch;
-                    if (d.cope_top && d.bolts.bolt_line < d.cope_top->length && y <= d.cope_top->depth) {
-                        r.problem("first_bolt", "bolt row " + std::to_string(i + 1) + " (" + r.show(y) +
-                                                    " below the top) falls in the top cope (depth " +
-                                                    r.show(d.cope_top->depth) + ")");
-                        break;
-                    }
-                    if (d.cope_bottom && d.bolts.bolt_line < d.cope_bottom->length && y >= h - d.cope_bottom->depth) {
-                        r.problem("bolt_rows", "bolt row " + std::to_string(i + 1) + " (" + r.show(y) +
-                                                   " below the top) falls in the bottom cope (depth " +
-                                                   r.show(d.cope_bottom->depth) + ")");
-                        break;
-                    }
-                }
-            } else {
-                if (d.cope_top && d.plate_top < d.cope_top->depth)
-                    r.problem(top_key, "the " + what + " start within the top cope: top " + r.show(d.plate_top) +
-                                           ", cope depth " + r.show(d.cope_top->depth));
-                if (d.cope_bottom && bottom > h - d.cope_bottom->depth)
-                    r.problem(depth_key, "the " + what + " reach into the bottom cope: bottom " + r.show(bottom) +
-                                             " below the top, cope starts at " + r.show(h - d.cope_bottom->depth));
-            }
-        }
-    }
-
-    // Support.
-    if (d.support == support_type::beam_web) {
-        if (!r.has("supporting_beam"))
-            problems.add(jf::child(pointer, "supporting_beam"),
-                         "missing required field \"supporting_beam\" for a beam-web support (its \"section\" or "
-                         "dimensions and \"top\", the level of its top below the top of this beam)");
-        else
-            d.support_beam = read_supporting_beam(r);
-    } else if (r.has("supporting_beam")) {
-        r.problem("supporting_beam", "applies only to a \"beam-web\" support, found support \"" + to_string(d.support) + "\"");
-    }
-
-    // Centre of rotation.
-    if (r.has("centre_of_rotation")) {
-        const std::string cp = jf::child(pointer, "centre_of_rotation");
-        if (auto c = read_point(value["centre_of_rotation"], cp, problems)) {
-            if (c->from_support < 0)
-                problems.add(jf::child(cp, "x"), "the centre of rotation lies inside the support: x is measured from "
-                                                 "the support face along the beam and must be 0 or more, found " +
-                                                     r.show(c->from_support));
-            else if (c->below_top < 0 || c->below_top > h)
-                problems.add(jf::child(cp, "y"), "the centre of rotation lies outside the beam depth: expected 0 to " +
-                                                     r.show(h) + " below the top, found " + r.show(c->below_top));
-            else
-                d.centre_of_rotation = c;
-        }
-    }
-
-    // The beam end must stand clear of the support at rest, at the worst-case gap.
-    if (problems.size() == before) {
-        const beam_end_geometry g = build_geometry(d, beam);
-        if (const auto hit = overlap(g, rotation_sense::sagging, 0.0)) {
-            std::string where = "gap";
-            if (custom)
-                where = "outline";
-            else if (d.support_beam)
-                where = hit->support_part.find("bottom") != std::string::npos ? "cope_bottom" : "cope_top";
-            std::string hint;
-            if (d.support_beam) {
-                const supporting_beam& sb = *d.support_beam;
-                const auto level = [&](double v) {
-                    return r.show(std::abs(v)) + (v >= 0 ? " below" : " above") + " the top of this beam";
-                };
-                hint = "; a cope must clear the supporting beam's flanges and root fillets: its top flange with the "
-                       "fillet reaches down to " + level(sb.top_flange_underside() + sb.root_radius) +
-                       ", its bottom flange with the fillet rises to " + level(sb.bottom_flange_top() - sb.root_radius) +
-                       ", and the flange tips stand " + r.show(sb.flange_outstand()) +
-                       " out from the web face (worst-case gap " + r.show(d.worst_case_gap()) + ")";
-            }
-            problems.add(jf::child(pointer, where),
-                         "the beam end overlaps the support at rest: " + hit->description() + hint);
-        }
-    }
+    if (!custom) read_copes(r, d, k, h, before);
+    read_support(r, d);
+    read_centre_of_rotation(r, d, h);
+    if (problems.size() == before) check_clear_at_rest(r, d, beam);
     return d;
 }
 

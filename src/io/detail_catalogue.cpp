@@ -8,8 +8,12 @@
 #include <fstream>
 #include <sstream>
 
+#include "io/json_document.hpp"
 #include "io/json_fields.hpp"
 #include "pinproof/core/input_file.hpp"
+#include "io/plausibility.hpp"
+#include "pinproof/io/stiffness_distribution_input.hpp"
+#include "pinproof/core/spelling.hpp"
 #include "pinproof/core/units.hpp"
 
 namespace pinproof {
@@ -47,6 +51,11 @@ std::optional<catalogue_stiffness> read_bound(const json& v, const std::string& 
     }
     const auto s = absolute_stiffness(v, ptr, problems);
     if (!s) return std::nullopt;
+    // The ceiling of every stiffness, as in a project file (io/plausibility.hpp).
+    if (auto m = plausibility::stiffness_too_large(*s, unit_system::si, shown(v))) {
+        problems.add(ptr, *m);
+        return std::nullopt;
+    }
     out.value = *s;
     return out;
 }
@@ -134,6 +143,17 @@ std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr
             ok = false;
             continue;
         }
+        // A distribution is checked here too, so that its problems are named at
+        // the catalogue's pointer; values written as multiples of EI/L wait
+        // for a beam (EI/L = 0 leaves them unresolved, without a problem).
+        if (std::string(key) == "stiffness_distribution") {
+            const std::size_t before = problems.size();
+            (void)read_stiffness_distribution(*g, child(ptr, key), 0.0, problems);
+            if (problems.size() != before) {
+                ok = false;
+                continue;
+            }
+        }
         (std::string(key) == "geometry" ? d.geometry : d.stiffness_distribution) = *g;
     }
     if (!ok) return std::nullopt;
@@ -169,6 +189,14 @@ void detail_catalogue::rebuild_index()
 {
     index_.clear();
     for (std::size_t i = 0; i < details.size(); ++i) index_.emplace(details[i].id, i);
+}
+
+std::vector<std::string> detail_catalogue::ids() const
+{
+    std::vector<std::string> out;
+    out.reserve(details.size());
+    for (const auto& d : details) out.push_back(d.id);
+    return out;
 }
 
 std::string detail_catalogue::id_list(std::size_t limit) const
@@ -218,15 +246,7 @@ detail_catalogue read_detail_catalogue(const json& doc, const std::string& sourc
 
 detail_catalogue parse_detail_catalogue(std::string_view text, const std::string& source)
 {
-    json doc;
-    try {
-        doc = json::parse(text.begin(), text.end());
-    } catch (const json::parse_error& e) {
-        const std::string what = e.what();
-        const auto pos = what.find("syntax error");
-        throw input_error(located(source, line_column(text, e.byte > 0 ? e.byte - 1 : 0)),
-                          "the catalogue is not valid JSON: " + (pos == std::string::npos ? what : what.substr(pos)));
-    }
+    const json doc = json_document::parse(text, "catalogue", source);
     return read_detail_catalogue(doc, source);
 }
 
@@ -265,7 +285,8 @@ std::size_t resolve_detail_references(json& doc, const detail_catalogue& catalog
             if (!d) {
                 problems.add(ptr, "expected an inline joint or a detail id from the catalogue" +
                                       (catalogue.source.empty() ? std::string() : " " + catalogue.source) + " (" +
-                                      catalogue.id_list() + "), found \"" + id + "\", which is not in it");
+                                      catalogue.id_list() + "), found \"" + id + "\", which is not in it" +
+                                      did_you_mean(id, catalogue.ids()));
                 continue;
             }
             json inline_joint = json::object();

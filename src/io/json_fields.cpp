@@ -1,5 +1,9 @@
 #include "io/json_fields.hpp"
 
+#include "io/input_text.hpp"
+#include "pinproof/core/printable_text.hpp"
+#include "pinproof/core/spelling.hpp"
+
 #include <cctype>
 #include <cmath>
 #include <stdexcept>
@@ -30,9 +34,10 @@ std::string shown(const json& value)
     case json::value_t::null: return "null";
     default: break;
     }
-    std::string s = value.dump();
+    // Invisible characters are shown as code points (core/printable_text.hpp).
+    std::string s = value.dump(-1, ' ', false, json::error_handler_t::replace);
     if (s.size() > 60) s = s.substr(0, 57) + "...";
-    return s;
+    return message_text(s);
 }
 
 std::optional<double> quantity(const json& value, const std::string& pointer, dimension expected,
@@ -158,19 +163,7 @@ std::optional<bool> bool_field(const json& obj, const std::string& pointer, cons
     return v->get<bool>();
 }
 
-std::string line_column(std::string_view text, std::size_t byte)
-{
-    std::size_t line = 1, col = 1;
-    for (std::size_t i = 0; i < byte && i < text.size(); ++i) {
-        if (text[i] == '\n') {
-            ++line;
-            col = 1;
-        } else {
-            ++col;
-        }
-    }
-    return "line " + std::to_string(line) + ", column " + std::to_string(col);
-}
+std::string line_column(std::string_view text, std::size_t byte) { return input_text::line_column(text, byte); }
 
 std::optional<double> multiple_of_EI_over_L(const std::string& text)
 {
@@ -234,8 +227,8 @@ void reject_unknown_keys(const json& obj, const std::string& pointer, const std:
         if (ok) continue;
         std::string list;
         for (const auto& k : known) list += (list.empty() ? "" : ", ") + k;
-        problems.add(child(pointer, it.key()),
-                     "unknown field \"" + it.key() + "\" (known fields here: " + list + ", notes)");
+        problems.add(child(pointer, it.key()), "unknown field \"" + it.key() + "\" (known fields here: " + list +
+                                                   ", notes)" + did_you_mean(it.key(), known));
     }
 }
 

@@ -8,8 +8,10 @@
 #include <set>
 #include <sstream>
 
+#include "io/json_document.hpp"
 #include "io/json_fields.hpp"
 #include "pinproof/core/input_file.hpp"
+#include "io/plausibility.hpp"
 #include "pinproof/model/connection_detail.hpp"
 #include "pinproof/io/detail_catalogue.hpp"
 #include "pinproof/model/stiffness_distribution.hpp"
@@ -29,23 +31,7 @@ using namespace json_fields;
 constexpr double default_E_en = 210e9;
 constexpr double default_E_aisc = 29000.0 * 6894757.293168361;
 
-// Bounds far outside any building beam. They keep the analysis where double
-// arithmetic and the equilibrium check of beam_model are meaningful, so that an
-// absurd value is reported at its field instead of failing inside the engine
-// (common practice, no source).
-struct plausible_range {
-    double lo, hi;  // SI
-};
-constexpr plausible_range plausible_span{0.01, 1000.0};      // m
-constexpr plausible_range plausible_E{1e9, 1e12};            // Pa (structural steel: about 2.1e11)
-constexpr plausible_range plausible_I{1e-10, 10.0};          // m^4 (IPE 80: 8.0e-7)
-constexpr double plausible_load_magnitude = 1e12;            // N, N/m, N*m
-constexpr double plausible_factor_magnitude = 1e3;
-constexpr plausible_range plausible_section_size{1e-4, 10.0};   // m: depth, flange and web sizes
-constexpr plausible_range plausible_section_area{1e-6, 10.0};   // m^2
-constexpr double plausible_deflection_limit = 10.0;          // m, an absolute limit
-constexpr double plausible_support_rotation = 0.5;           // rad
-constexpr double plausible_stiffness = 1e40;                 // N*m/rad; "rigid" is exact (1e30 agrees with it)
+using namespace plausibility;  // the ranges of every input path (io/plausibility.hpp)
 
 // A plain decimal number (no unit), by the units parser's number rules: no
 // hexadecimal, nan or inf.
@@ -86,11 +72,9 @@ struct reader {
                                     bool required, plausible_range r)
     {
         auto v = positive(obj, ptr, key, d, required);
-        if (v && (*v < r.lo || *v > r.hi)) {
-            problems.add(child(ptr, key), "expected a " + describe(d) + " between " + format_quantity(r.lo, d, system) +
-                                              " and " + format_quantity(r.hi, d, system) +
-                                              " (a value outside this range is not a building beam), found " +
-                                              shown(obj.at(key)));
+        if (!v) return v;
+        if (auto m = outside(*v, r, d, system, shown(obj.at(key)))) {
+            problems.add(child(ptr, key), *m);
             return std::nullopt;
         }
         return v;
@@ -100,10 +84,9 @@ struct reader {
     std::optional<double> load_value(const json& obj, const std::string& ptr, const std::string& key, dimension d)
     {
         auto v = q(obj, ptr, key, d, true);
-        if (v && std::abs(*v) > plausible_load_magnitude) {
-            problems.add(child(ptr, key), "expected a " + describe(d) + " of magnitude at most " +
-                                              format_quantity(plausible_load_magnitude, d, system) + ", found " +
-                                              shown(obj.at(key)));
+        if (!v) return v;
+        if (auto m = load_too_large(*v, d, system, shown(obj.at(key)))) {
+            problems.add(child(ptr, key), *m);
             return std::nullopt;
         }
         return v;
@@ -582,52 +565,6 @@ struct reader {
     }
 };
 
-// The parser's message quotes the bytes it read, which may be invalid UTF-8:
-// bytes outside ASCII are shown as \xNN so that the message itself stays valid text.
-std::string printable(const std::string& message)
-{
-    static const char hex[] = "0123456789ABCDEF";
-    std::string out;
-    for (unsigned char c : message) {
-        if (c < 0x80) {
-            out += static_cast<char>(c);
-        } else {
-            out += "\\x";
-            out += hex[c >> 4];
-            out += hex[c & 15];
-        }
-    }
-    return out;
-}
-
-// Finds where parsing stopped. nlohmann_json reports a number too large for a
-// double ("1e400") as out_of_range without its position, so the text is
-// scanned again with a handler that only records the error.
-struct error_locator : nlohmann::json_sax<json> {
-    std::size_t byte = 0;
-    std::string message;
-    bool null() override { return true; }
-    bool boolean(bool) override { return true; }
-    bool number_integer(number_integer_t) override { return true; }
-    bool number_unsigned(number_unsigned_t) override { return true; }
-    bool number_float(number_float_t, const string_t&) override { return true; }
-    bool string(string_t&) override { return true; }
-    bool binary(binary_t&) override { return true; }
-    bool start_object(std::size_t) override { return true; }
-    bool key(string_t&) override { return true; }
-    bool end_object() override { return true; }
-    bool start_array(std::size_t) override { return true; }
-    bool end_array() override { return true; }
-    bool parse_error(std::size_t position, const std::string&, const json::exception& e) override
-    {
-        byte = position;
-        message = e.what();
-        const auto tag = message.find("] ");
-        if (tag != std::string::npos) message = message.substr(tag + 2);
-        return false;
-    }
-};
-
 }  // namespace
 
 project read_project(const json& doc)
@@ -663,22 +600,7 @@ project read_project(const json& doc)
 
 project parse_project(std::string_view text, const project_sources& sources)
 {
-    json doc;
-    try {
-        doc = json::parse(text.begin(), text.end());
-    } catch (const json::parse_error& e) {
-        const std::string what = e.what();
-        const auto pos = what.find("syntax error");
-        throw input_error(line_column(text, e.byte > 0 ? e.byte - 1 : 0),
-                          "the file is not valid JSON: " + printable(pos == std::string::npos ? what : what.substr(pos)));
-    } catch (const json::exception& e) {
-        error_locator locator;
-        json::sax_parse(text.begin(), text.end(), &locator);
-        if (locator.message.empty()) throw input_error("/", std::string("the file cannot be read as JSON: ") + e.what());
-        throw input_error(line_column(text, locator.byte > 0 ? locator.byte - 1 : 0),
-                          "expected every number within the range of a double (about 1.8e308), found " +
-                              locator.message);
-    }
+    json doc = json_document::parse(text, "file");
     // Joints given as detail ids are replaced by the catalogue's entries first:
     // the catalogue named on the command line, or the file named by "details".
     std::string catalogue_path = sources.details_file;

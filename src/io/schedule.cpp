@@ -4,6 +4,7 @@
 #include "pinproof/model/connection_detail.hpp"
 
 #include <algorithm>
+#include <array>
 #include <cctype>
 #include <cmath>
 #include <cstdlib>
@@ -13,6 +14,10 @@
 #include <stdexcept>
 
 #include "pinproof/core/input_file.hpp"
+#include "io/input_text.hpp"
+#include "io/plausibility.hpp"
+#include "pinproof/core/printable_text.hpp"
+#include "pinproof/core/spelling.hpp"
 #include "pinproof/core/units.hpp"
 #include "pinproof/io/connection_detail_input.hpp"
 #include "pinproof/io/project_input.hpp"
@@ -36,7 +41,7 @@ std::string trimmed(std::string_view t)
 std::string in_quotes(const std::string& s)
 {
     std::string t = s.size() > 60 ? s.substr(0, 57) + "..." : s;
-    return "\"" + t + "\"";
+    return "\"" + message_text(t) + "\"";
 }
 
 std::string found_cell(const std::string& s) { return s.empty() ? "an empty cell" : in_quotes(s); }
@@ -240,6 +245,10 @@ schedule parse_schedule(std::string_view text, const std::string& source)
 {
     schedule s;
     s.source = source;
+    input_text::refuse_non_utf8_encodings(text, "schedule");
+    if (text.find('\r') != std::string_view::npos && text.find('\n') == std::string_view::npos)
+        throw input_error("line 1", "expected lines ending in LF or CRLF, found lines ending in CR alone (an old "
+                                    "Macintosh text format); save the schedule with LF or CRLF line endings");
     std::vector<csv_record> records = read_csv(text);
     if (records.empty())
         throw input_error("line 1", "expected a header row naming the columns (id, span, section, g, q, start, end), "
@@ -258,9 +267,12 @@ schedule parse_schedule(std::string_view text, const std::string& source)
         const std::string where = at_header + ", column " + std::to_string(i + 1);
         const auto& req = schedule_required_columns();
         const auto& opt = schedule_optional_columns();
-        if (std::find(req.begin(), req.end(), name) == req.end() && std::find(opt.begin(), opt.end(), name) == opt.end())
-            problems.add(where, "expected a column name (" + known + "), found " + found_cell(name));
-        else if (std::find(s.columns.begin(), s.columns.end(), name) != s.columns.end())
+        if (std::find(req.begin(), req.end(), name) == req.end() && std::find(opt.begin(), opt.end(), name) == opt.end()) {
+            std::vector<std::string> names = req;
+            names.insert(names.end(), opt.begin(), opt.end());
+            problems.add(where, "expected a column name (" + known + "), found " + found_cell(name) +
+                                    did_you_mean(name, names));
+        } else if (std::find(s.columns.begin(), s.columns.end(), name) != s.columns.end())
             problems.add(where + " (" + name + ")", "expected each column once, found \"" + name + "\" a second time");
         s.columns.push_back(name);
     }
@@ -278,7 +290,10 @@ schedule parse_schedule(std::string_view text, const std::string& source)
     for (std::size_t i = 0; i < s.rows.size(); ++i) {
         const auto& cells = s.rows[i].cells;
         if (id_col >= cells.size() || cells[id_col].empty()) continue;
-        auto [it, inserted] = first_line.emplace(cells[id_col], s.rows[i].line);
+        // Ids are compared as the row reads them: trimmed of spaces and tabs.
+        const std::string id = trimmed(cells[id_col]);
+        if (id.empty()) continue;
+        auto [it, inserted] = first_line.emplace(id, s.rows[i].line);
         if (!inserted) s.earlier_line_with_same_id[i] = it->second;
     }
     return s;
@@ -340,6 +355,19 @@ struct row_reader {
         }
     }
 
+    // A positive quantity within a plausible range (io/plausibility.hpp), as in a project file.
+    std::optional<double> plausible_cell(const std::string& name, dimension d, bool required,
+                                         plausibility::plausible_range range)
+    {
+        auto v = positive_cell(name, d, required);
+        if (!v) return v;
+        if (auto m = plausibility::outside(*v, range, d, system, in_quotes(rec.cells[*s.column(name)]))) {
+            add(*s.column(name), *m);
+            return std::nullopt;
+        }
+        return v;
+    }
+
     std::optional<double> positive_cell(const std::string& name, dimension d, bool required)
     {
         auto v = quantity_cell(name, d, required);
@@ -374,137 +402,151 @@ struct row_reader {
         }
         auto len = positive_cell("deflection_limit", dims::length, false);
         if (!len) return std::nullopt;
+        if (*len > plausibility::plausible_deflection_limit) {
+            add(col, "expected a positive deflection limit of at most " +
+                         format_quantity(plausibility::plausible_deflection_limit, dims::length, system) + ", found " +
+                         in_quotes(*v));
+            return std::nullopt;
+        }
         out.absolute = *len;
         if (bare_number(*v)) out.text = format_quantity(*len, dims::length, unit_system::si);
         return out;
     }
 };
 
-}  // namespace
-
-schedule_row read_schedule_row(const schedule& s, std::size_t index, const detail_catalogue& catalogue)
+// A record that cannot be read cell by cell: a misplaced quote, or a count of
+// cells other than the header's. Adds the problem and returns true.
+bool refuse_malformed_record(const schedule& s, const csv_record& rec, schedule_row& out)
 {
-    schedule_row out;
-    const csv_record& rec = s.rows.at(index);
-    out.line = rec.line;
     const std::string at_line = "line " + std::to_string(rec.line);
     if (rec.bad_column != 0) {
         std::string where = at_line + ", column " + std::to_string(rec.bad_column);
         if (rec.bad_column <= s.columns.size()) where += " (" + s.columns[rec.bad_column - 1] + ")";
         out.problems.push_back({where, rec.bad_reason});
-        if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = rec.cells[*c];
-        return out;
+        if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = message_text(trimmed(rec.cells[*c]));
+        return true;
     }
-    if (rec.cells.size() != s.columns.size()) {
-        if (rec.cells.size() < s.columns.size()) {
-            const std::size_t col = rec.cells.size();
-            out.problems.push_back({at_line + ", column " + std::to_string(col + 1) + " (" + s.columns[col] + ")",
-                                    "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
-                                        std::to_string(rec.cells.size()) + " cells in the row"});
-        } else {
-            out.problems.push_back({at_line + ", column " + std::to_string(s.columns.size() + 1),
-                                    "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
-                                        std::to_string(rec.cells.size()) + " cells in the row"});
-        }
-        if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = rec.cells[*c];
-        return out;
+    if (rec.cells.size() == s.columns.size()) {
+        // Control characters (a line break in a quoted cell too): an id or a
+        // description is one line of text, shown on a terminal and in files.
+        bool refused = false;
+        for (std::size_t col = 0; col < rec.cells.size(); ++col)
+            if (const auto c = first_control_character(rec.cells[col])) {
+                out.problems.push_back({at_line + ", column " + std::to_string(col + 1) + " (" + s.columns[col] + ")",
+                                        "expected text without control characters, found " +
+                                            describe_code_point(c->code_point) + " at byte " +
+                                            std::to_string(c->offset + 1) + " of the cell"});
+                refused = true;
+            }
+        if (refused)
+            if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = message_text(trimmed(rec.cells[*c]));
+        return refused;
     }
+    if (rec.cells.size() < s.columns.size()) {
+        const std::size_t col = rec.cells.size();
+        out.problems.push_back({at_line + ", column " + std::to_string(col + 1) + " (" + s.columns[col] + ")",
+                                "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
+                                    std::to_string(rec.cells.size()) + " cells in the row"});
+    } else {
+        out.problems.push_back({at_line + ", column " + std::to_string(s.columns.size() + 1),
+                                "expected " + std::to_string(s.columns.size()) + " cells as in the header, found " +
+                                    std::to_string(rec.cells.size()) + " cells in the row"});
+    }
+    if (auto c = s.column("id"); c && *c < rec.cells.size()) out.id = message_text(trimmed(rec.cells[*c]));
+    return true;
+}
 
-    row_reader r{s, rec, out.problems};
-    auto id = r.cell("id", true);
-    if (id) out.id = *id;
-    if (id && s.earlier_line_with_same_id[index] != 0)
-        r.add(*s.column("id"), "expected a unique beam id, found " + in_quotes(*id) + ", already used on line " +
-                                   std::to_string(s.earlier_line_with_same_id[index]));
-
+// The row's combination set, standard and frame.
+struct row_rules {
     combination_set set = combination_set::en1990;
+    design_standard standard = design_standard::en1993_1_8;
+    frame_bracing frame = frame_bracing::braced;
+};
+
+row_rules read_row_rules(row_reader& r)
+{
+    const schedule& s = r.s;
+    row_rules out;
     if (auto c = r.cell("combinations", false)) {
         auto parsed = parse_combination_set(*c);
         if (!parsed) r.add(*s.column("combinations"), "expected a combination set, \"EN1990\" or \"ASCE7\", found " + in_quotes(*c));
-        else set = *parsed;
+        else out.set = *parsed;
     }
-    design_standard standard = set == combination_set::en1990 ? design_standard::en1993_1_8 : design_standard::aisc360;
+    out.standard = out.set == combination_set::en1990 ? design_standard::en1993_1_8 : design_standard::aisc360;
     if (auto c = r.cell("standard", false)) {
-        if (*c == "EN1993-1-8" || *c == "AISC360") standard = parse_design_standard(*c);
+        if (*c == "EN1993-1-8" || *c == "AISC360") out.standard = parse_design_standard(*c);
         else r.add(*s.column("standard"), "expected \"EN1993-1-8\" or \"AISC360\", found " + in_quotes(*c));
     }
-    frame_bracing frame = frame_bracing::braced;
     if (auto c = r.cell("frame", false)) {
-        if (*c == "braced" || *c == "unbraced") frame = parse_frame_bracing(*c);
+        if (*c == "braced" || *c == "unbraced") out.frame = parse_frame_bracing(*c);
         else r.add(*s.column("frame"), "expected \"braced\" or \"unbraced\", found " + in_quotes(*c));
     }
+    return out;
+}
 
-    auto span = r.positive_cell("span", dims::length, true);
-    std::optional<double> E = r.positive_cell("E", dims::pressure, false);
-    const bool E_default = !r.cell("E", false);
-    if (E_default) E = standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
-
+std::optional<section> read_row_section(row_reader& r)
+{
     std::optional<section> sec;
     if (auto name = r.cell("section", true)) {
         sec = find_catalogue_section(*name);
         if (!sec)
-            r.add(*s.column("section"),
+            r.add(*r.s.column("section"),
                   "expected a section name from the built-in catalogue (IPE 80 to IPE 600, HE 100 A to HE 600 A, "
                   "HE 100 B to HE 600 B, W shapes such as W18x35; pinproof sections lists them), " +
                       unknown_section_text(*name));
     }
+    return sec;
+}
 
-    std::optional<double> line_loads[2];
+// The line loads of cases G and Q, downward, not both zero.
+std::array<std::optional<double>, 2> read_row_line_loads(row_reader& r)
+{
+    std::array<std::optional<double>, 2> line_loads;
     const char* load_cols[2] = {"g", "q"};
     for (int i = 0; i < 2; ++i) {
         line_loads[i] = r.quantity_cell(load_cols[i], dims::line_load, true);
+        if (line_loads[i])
+            if (auto m = plausibility::load_too_large(*line_loads[i], dims::line_load, r.system,
+                                                      in_quotes(r.rec.cells[*r.s.column(load_cols[i])]))) {
+                r.add(*r.s.column(load_cols[i]), *m);
+                line_loads[i].reset();
+                continue;
+            }
         if (line_loads[i] && *line_loads[i] < 0) {
-            r.add(*s.column(load_cols[i]), std::string("expected a downward line load of zero or more, found ") +
-                                               in_quotes(rec.cells[*s.column(load_cols[i])]));
+            r.add(*r.s.column(load_cols[i]), std::string("expected a downward line load of zero or more, found ") +
+                                                 in_quotes(r.rec.cells[*r.s.column(load_cols[i])]));
             line_loads[i].reset();
         }
     }
     if (line_loads[0] && line_loads[1] && *line_loads[0] + *line_loads[1] == 0.0)
-        r.add(*s.column("g"), "expected a load on the beam (g or q above zero), found g = 0 and q = 0");
+        r.add(*r.s.column("g"), "expected a load on the beam (g or q above zero), found g = 0 and q = 0");
+    return line_loads;
+}
 
-    const catalogue_detail* details[2] = {nullptr, nullptr};
+// The catalogue entries named by the start and end cells.
+std::array<const catalogue_detail*, 2> read_row_details(row_reader& r, const detail_catalogue& catalogue)
+{
+    std::array<const catalogue_detail*, 2> details = {nullptr, nullptr};
     const char* end_cols[2] = {"start", "end"};
     for (int i = 0; i < 2; ++i) {
         auto d = r.cell(end_cols[i], true);
         if (!d) continue;
         details[i] = catalogue.find(*d);
         if (!details[i])
-            r.add(*s.column(end_cols[i]), "expected a detail id from the catalogue" +
-                                              (catalogue.source.empty() ? std::string() : " " + catalogue.source) +
-                                              " (" + catalogue.id_list() + "), found " + in_quotes(*d));
+            r.add(*r.s.column(end_cols[i]), "expected a detail id from the catalogue" +
+                                                (catalogue.source.empty() ? std::string() : " " + catalogue.source) +
+                                                " (" + catalogue.id_list() + "), found " + in_quotes(*d) +
+                                                did_you_mean(*d, catalogue.ids()));
     }
-    auto deflection = r.deflection_cell();
-    std::string description;
-    if (auto d = r.cell("description", false)) description = *d;
+    return details;
+}
 
-    out.settings.format = project_format;
-    out.settings.title = s.source;
-    out.settings.standard = standard;
-    out.settings.frame = frame;
-    out.settings.units = r.system == unit_system::us_customary ? unit_system::us_customary : unit_system::si;
-    if (!out.problems.empty()) return out;
-
-    beam b;
-    b.id = *id;
-    b.description = description;
-    b.span = *span;
-    b.E = *E;
-    b.E_is_default = E_default;
-    b.sec = *sec;
-    for (int i = 0; i < 2; ++i) {
-        load l;
-        l.kind = load_kind::udl;
-        l.value = *line_loads[i];
-        l.from = 0.0;
-        l.to = *span;
-        l.load_case = i == 0 ? "G" : "Q";
-        b.loads.push_back(l);
-    }
-    b.combinations = combinations_of(set);
-    b.start = joint_for_beam(*details[0], b.EI(), b.span);
-    b.end = joint_for_beam(*details[1], b.EI(), b.span);
-    // The catalogue entry's geometry, with its type, for the end-gap check. A
-    // problem in it is the catalogue's, named by its pointer there.
+// The catalogue entries' geometry, with their type, for the end-gap check. A
+// problem in it is the catalogue's, named by its pointer there. Returns false
+// (after adding the problems) when a geometry is refused.
+bool attach_detail_geometry(beam& b, const std::array<const catalogue_detail*, 2>& details, const std::string& at_line,
+                            schedule_row& out)
+{
     // A schedule repeats few pairs of detail and section: each pair is read once
     // per thread (the reading depends on nothing else). The cache is found by
     // the entry's address and the section, and a hit is used only when the
@@ -546,10 +588,85 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
                 out.problems.push_back({at_line + " (" + (i == 0 ? "start" : "end") + " detail " + d.id + ", catalogue " +
                                             pr.where + ")",
                                         pr.message});
-            return out;
+            return false;
         }
         (i == 0 ? b.start : b.end).detail = detail;
     }
+    return true;
+}
+
+}  // namespace
+
+schedule_row read_schedule_row(const schedule& s, std::size_t index, const detail_catalogue& catalogue)
+{
+    schedule_row out;
+    const csv_record& rec = s.rows.at(index);
+    out.line = rec.line;
+    const std::string at_line = "line " + std::to_string(rec.line);
+    if (refuse_malformed_record(s, rec, out)) return out;
+
+    row_reader r{s, rec, out.problems};
+    auto id = r.cell("id", true);
+    if (id) out.id = *id;
+    if (id && s.earlier_line_with_same_id[index] != 0)
+        r.add(*s.column("id"), "expected a unique beam id, found " + in_quotes(*id) + ", already used on line " +
+                                   std::to_string(s.earlier_line_with_same_id[index]));
+
+    const row_rules rules = read_row_rules(r);
+    auto span = r.plausible_cell("span", dims::length, true, plausibility::plausible_span);
+    std::optional<double> E = r.plausible_cell("E", dims::pressure, false, plausibility::plausible_E);
+    const bool E_default = !r.cell("E", false);
+    if (E_default) E = rules.standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
+    const std::optional<section> sec = read_row_section(r);
+    const auto line_loads = read_row_line_loads(r);
+    const auto details = read_row_details(r, catalogue);
+    auto deflection = r.deflection_cell();
+    std::string description;
+    if (auto d = r.cell("description", false)) description = *d;
+
+    out.settings.format = project_format;
+    out.settings.title = s.source;
+    out.settings.standard = rules.standard;
+    out.settings.frame = rules.frame;
+    out.settings.units = r.system == unit_system::us_customary ? unit_system::us_customary : unit_system::si;
+    if (!out.problems.empty()) return out;
+
+    beam b;
+    b.id = *id;
+    b.description = description;
+    b.span = *span;
+    b.E = *E;
+    b.E_is_default = E_default;
+    b.sec = *sec;
+    for (int i = 0; i < 2; ++i) {
+        load l;
+        l.kind = load_kind::udl;
+        l.value = *line_loads[i];
+        l.from = 0.0;
+        l.to = *span;
+        l.load_case = i == 0 ? "G" : "Q";
+        b.loads.push_back(l);
+    }
+    b.combinations = combinations_of(rules.set);
+    b.start = joint_for_beam(*details[0], b.EI(), b.span);
+    b.end = joint_for_beam(*details[1], b.EI(), b.span);
+    // A stiffness given as a multiple of EI/L meets the project file's ceiling here, with this beam's EI/L.
+    bool stiffness_ok = true;
+    for (int i = 0; i < 2; ++i) {
+        const joint& j = i == 0 ? b.start : b.end;
+        for (const stiffness& k : {j.range.min, j.range.max})
+            if (!k.is_rigid())
+                if (auto m = plausibility::stiffness_too_large(k.value(), r.system,
+                                                               "catalogue detail \"" + message_text(details[i]->id) + "\" = " +
+                                                                   format_quantity(k.value(), dims::rotational_stiffness, r.system) +
+                                                                   " on this beam")) {
+                    r.add(*s.column(i == 0 ? "start" : "end"), *m);
+                    stiffness_ok = false;
+                    break;
+                }
+    }
+    if (!stiffness_ok) return out;
+    if (!attach_detail_geometry(b, details, at_line, out)) return out;
     b.deflection = deflection;
     b.pointer = at_line;
     out.input = std::move(b);

@@ -73,6 +73,16 @@ std::optional<double> read_positive_number(const json& obj, const std::string& p
     return v;
 }
 
+// Plausible scatter of a joint stiffness: a coefficient of variation from
+// 0.001 to 10 (measured joint stiffnesses scatter with CoV of the order of
+// 0.2 to 1; common practice, no source). Outside it the distribution's own
+// arithmetic breaks down (sigma = sqrt(ln(1 + cov^2)) overflows or vanishes).
+constexpr double min_cov = 1e-3, max_cov = 10.0;
+
+bool cov_plausible(double cov) { return cov >= min_cov && cov <= max_cov; }
+
+std::string cov_range_text() { return "0.001 and 10"; }  // min_cov and max_cov
+
 }  // namespace
 
 std::optional<stiffness_distribution> read_stiffness_distribution(const json& value, const std::string& pointer,
@@ -99,15 +109,28 @@ std::optional<stiffness_distribution> read_stiffness_distribution(const json& va
             reject_unknown_keys(value, pointer, {"kind", "p05", "p95"}, problems);
             auto p05 = S("p05");
             auto p95 = S("p95");
+            // The fractiles of a lognormal are median * exp(-/+ 1.6449 sigma), so
+            // p95/p05 = exp(3.2897 sigma) with sigma = sqrt(ln(1 + cov^2)).
+            const auto ratio_for = [](double cov) { return std::exp(2 * 1.6448536269514722 * std::sqrt(std::log1p(cov * cov))); };
             if (p05 && p95 && !(*p95 > *p05))
                 problems.add(child(pointer, "p95"), "expected the 95 % fractile above the 5 % fractile, found " +
                                                         shown(value.at("p95")) + " not above " + shown(value.at("p05")));
+            else if (p05 && p95 && !(*p95 / *p05 >= ratio_for(min_cov) && *p95 / *p05 <= ratio_for(max_cov)))
+                problems.add(child(pointer, "p95"), "expected the 95 % fractile between " +
+                                                        format_number(ratio_for(min_cov), 4) + " and " +
+                                                        format_number(ratio_for(max_cov), 4) +
+                                                        " times the 5 % fractile (a coefficient of variation between " +
+                                                        cov_range_text() + "), found " + shown(value.at("p95")) +
+                                                        " with p05 " + shown(value.at("p05")));
             else if (p05 && p95) out = stiffness_distribution::lognormal_from_fractiles(*p05, *p95);
         } else {
             reject_unknown_keys(value, pointer, {"kind", "median", "cov"}, problems);
             auto median = S("median");
             auto cov = read_positive_number(value, pointer, "cov", "a coefficient of variation", problems);
-            if (median && cov) out = stiffness_distribution::lognormal(*median, *cov);
+            if (cov && !cov_plausible(*cov))
+                problems.add(child(pointer, "cov"), "expected a coefficient of variation between " + cov_range_text() +
+                                                        ", found " + shown(value.at("cov")));
+            else if (median && cov) out = stiffness_distribution::lognormal(*median, *cov);
         }
     } else if (*kind == "uniform-log") {
         reject_unknown_keys(value, pointer, {"kind", "min", "max"}, problems);
@@ -121,7 +144,11 @@ std::optional<stiffness_distribution> read_stiffness_distribution(const json& va
         reject_unknown_keys(value, pointer, {"kind", "mean", "sd"}, problems);
         auto mean = S("mean");
         auto sd = S("sd");
-        if (mean && sd) out = stiffness_distribution::normal(*mean, *sd);
+        if (mean && sd && !cov_plausible(*sd / *mean))
+            problems.add(child(pointer, "sd"), "expected a standard deviation between " + cov_range_text() +
+                                                   " times the mean (a coefficient of variation), found " +
+                                                   shown(value.at("sd")) + " with mean " + shown(value.at("mean")));
+        else if (mean && sd) out = stiffness_distribution::normal(*mean, *sd);
     }
     if (problems.size() != before || unresolved) return std::nullopt;
     return out;

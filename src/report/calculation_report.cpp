@@ -30,7 +30,7 @@ std::string html_escape(std::string_view text)
         case '>': out += "&gt;"; break;
         case '"': out += "&quot;"; break;
         case '\'': out += "&#39;"; break;
-        default: out += c;
+        default: out += (static_cast<unsigned char>(c) < 0x20 && c != '\t' && c != '\n' && c != '\r') ? "\xEF\xBF\xBD" : std::string(1, c);  // XML 1.0 2.2: no C0 but tab, LF, CR
         }
     }
     return out;

@@ -27,7 +27,7 @@ std::string esc(const std::string& s)
         case '<': o += "&lt;"; break;
         case '>': o += "&gt;"; break;
         case '"': o += "&quot;"; break;
-        default: o += c;
+        default: o += (static_cast<unsigned char>(c) < 0x20 && c != '\t' && c != '\n' && c != '\r') ? "\xEF\xBF\xBD" : std::string(1, c);  // XML 1.0 2.2: no C0 but tab, LF, CR
         }
     }
     return o;

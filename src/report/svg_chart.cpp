@@ -32,7 +32,7 @@ std::string escape(const std::string& s)
         case '<': out += "&lt;"; break;
         case '>': out += "&gt;"; break;
         case '"': out += "&quot;"; break;
-        default: out += c;
+        default: out += (static_cast<unsigned char>(c) < 0x20 && c != '\t' && c != '\n' && c != '\r') ? "\xEF\xBF\xBD" : std::string(1, c);  // XML 1.0 2.2: no C0 but tab, LF, CR
         }
     }
     return out;

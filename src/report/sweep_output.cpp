@@ -5,6 +5,7 @@
 #include <cmath>
 #include <sstream>
 
+#include "pinproof/core/csv_cell.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/report/svg_chart.hpp"
@@ -34,7 +35,7 @@ std::string sweep_csv(const sweep_result& s)
          "fixity_end [1]";
     for (const auto& f : result_fields()) o << "," << f.key << " [" << si_unit(f.dim) << "]";
     if (!s.rows.empty())
-        for (const auto& c : s.rows.front().checks) o << "," << c.id;
+        for (const auto& c : s.rows.front().checks) o << "," << csv_cell(c.id);
     o << "\n";
     const auto stiff = [&](stiffness k) {
         std::ostringstream t;

@@ -4,6 +4,7 @@
 #include <cmath>
 #include <sstream>
 
+#include "pinproof/core/printable_text.hpp"
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/checks/failure_probability.hpp"
 #include "pinproof/checks/threshold.hpp"
@@ -290,7 +291,8 @@ std::string text_report(const project_assessment& a, const std::string& version)
          "  statuses         pass, FAIL, warn (to pass on or to look at; does not change the verdict),\n"
          "                   n/a (not applicable: the reason is given)\n\n";
     o << "Caution: " << wrap(caution_text, 90, "         ") << "\n";
-    return o.str();
+    // Ids, titles and descriptions come from the input: nothing in them may act on a terminal.
+    return terminal_text(o.str());
 }
 
 }  // namespace pinproof

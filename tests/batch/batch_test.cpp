@@ -185,6 +185,25 @@ TEST_CASE("batch: a bad row is refused and the others are checked [common practi
     CHECK(csv.find("inf") == std::string::npos);
 }
 
+TEST_CASE("batch: formula-leading ids are neutralised in the summary CSV and trimmed ids are duplicates [OWASP CSV Injection]")
+{
+    // OWASP, "CSV Injection": a cell starting with =, +, -, @ is prefixed by
+    // an apostrophe; numbers keep their sign (core/csv_cell.hpp).
+    const schedule s = parse_schedule("id,span,section,g,q,start,end\n"
+                                      "=1+1,6 m,IPE 300,8 kN/m,5 kN/m,PIN,PIN\n"
+                                      "-B2,6 m,IPE 300,8 kN/m,5 kN/m,PIN,PIN\n"
+                                      "\" -B2 \",6 m,IPE 300,8 kN/m,5 kN/m,PIN,PIN\n");
+    const batch_result r = run_batch(s, test_details(), {});
+    REQUIRE(r.rows.size() == 3);
+    const std::string csv = batch_summary_csv(r);
+    CHECK(csv.find("\n2,'=1+1,holds,") != std::string::npos);
+    CHECK(csv.find("\n3,'-B2,holds,") != std::string::npos);
+    CHECK(r.rows[2].verdict == batch_verdict::refused);
+    REQUIRE_FALSE(r.rows[2].problems.empty());
+    CHECK(r.rows[2].problems[0].where == "line 4, column 1 (id)");
+    CHECK(r.rows[2].problems[0].message.find("already used on line 3") != std::string::npos);
+}
+
 TEST_CASE("batch: results keep the input order with 2 jobs and equal those of 1 job [common practice and no source] - exact")
 {
     const schedule s = parse_schedule(many_rows(300));

@@ -169,4 +169,59 @@ inline void schedule_input(std::string_view text, const detail_catalogue& catalo
     require_finite(nlohmann::json::parse(j));
 }
 
+// Detail catalogues: parse_detail_catalogue, then, for a catalogue that is
+// read, its first and last entries used at the two ends of one beam, by a
+// project file (resolve_detail_references, read_project, assess_project and
+// both outputs) and by a schedule row (the batch path).
+inline void catalogue_input(std::string_view text)
+{
+    detail_catalogue c;
+    try {
+        c = parse_detail_catalogue(text);
+    } catch (const input_error& e) {
+        require_well_formed(e, false);
+        return;
+    }
+    require(!c.details.empty(), "a catalogue read without details");
+    const std::string first = c.details.front().id, last = c.details.back().id;
+    nlohmann::json doc = nlohmann::json::parse(R"({"format": "pinproof-project/1", "title": "fuzz",
+        "standard": "EN1993-1-8", "frame": "braced", "beams": [{"id": "B1", "span": "6 m", "section": "IPE 300",
+        "loads": [{"case": "G", "kind": "udl", "w": "10 kN/m"}],
+        "combinations": [{"name": "ULS", "use": "strength", "factors": {"G": 1.35}},
+                         {"name": "SLS", "use": "service", "factors": {"G": 1.0}}]}]})");
+    doc["beams"][0]["joints"] = {{"start", first}, {"end", last}};
+    problem_list problems;
+    resolve_detail_references(doc, c, problems);
+    require(problems.empty(), "an id of the catalogue not found in it");
+    try {
+        const project p = read_project(doc);
+        outputs_of(assess_project(p));
+    } catch (const input_error& e) {
+        require_well_formed(e, false);
+    }
+    // The ids go into a CSV cell: quoted, with quotes doubled.
+    const auto cell = [](const std::string& id) {
+        std::string q = "\"";
+        for (char ch : id) q += ch == '"' ? std::string("\"\"") : std::string(1, ch);
+        return q + "\"";
+    };
+    schedule_input("id,span,section,g,q,start,end\nB1,6 m,IPE 300,10 kN/m,5 kN/m," + cell(first) + "," + cell(last) + "\n",
+                   c, 1);
+}
+
+// Stiffness distribution objects: the text is put in a project file as the
+// start joint's "stiffness_distribution", then read and assessed as a project.
+inline void distribution_input(std::string_view text, const std::string& details_file)
+{
+    const std::string head = R"({"format": "pinproof-project/1", "title": "fuzz", "standard": "EN1993-1-8",
+        "frame": "braced", "beams": [{"id": "B1", "span": "6 m", "section": "IPE 300",
+        "loads": [{"case": "G", "kind": "udl", "w": "10 kN/m"}],
+        "combinations": [{"name": "ULS", "use": "strength", "factors": {"G": 1.35}},
+                         {"name": "SLS", "use": "service", "factors": {"G": 1.0}}],
+        "joints": {"start": {"stiffness": {"min": "500 kN*m/rad", "max": "2000 kN*m/rad"},
+                             "stiffness_distribution": )";
+    const std::string tail = R"(}, "end": {"stiffness": "1000 kN*m/rad"}}}]})";
+    project_input(head + std::string(text) + tail, details_file);
+}
+
 }  // namespace pinproof::fuzz

@@ -80,6 +80,32 @@ TEST_CASE("fuzz regressions: schedule inputs are read or refused at a line and c
            [](const std::string& t) { pinproof::fuzz::schedule_input(t, catalogue()); });
 }
 
+TEST_CASE("fuzz regressions: detail catalogues are read or refused with a place")
+{
+    replay(files_in(source_dir / "tests/fuzz/regressions/fuzz_catalogue"),
+           [](const std::string& t) { pinproof::fuzz::catalogue_input(t); });
+}
+
+TEST_CASE("fuzz regressions: stiffness distribution objects are read or refused with a place")
+{
+    replay(files_in(source_dir / "tests/fuzz/regressions/fuzz_distribution"),
+           [](const std::string& t) { pinproof::fuzz::distribution_input(t, details_file); });
+}
+
+TEST_CASE("fuzz seeds: example and bad-input catalogues pass the catalogue entry point")
+{
+    const auto bad = files_in(source_dir / "tests/bad-input/catalogue", ".json");
+    CHECK(bad.size() >= 10);
+    replay(bad, [](const std::string& t) { pinproof::fuzz::catalogue_input(t); });
+    replay(files_in(source_dir / "catalog-examples", ".json"), [](const std::string& t) {
+        pinproof::fuzz::catalogue_input(t);
+    });
+    for (const char* t : {R"({"kind": "lognormal", "median": "0.5 EI/L", "cov": 1e300})",
+                          R"({"kind": "lognormal", "p05": "1e-300 N*m/rad", "p95": 1e39})",
+                          R"({"kind": "normal", "mean": "1 MN*m/rad", "sd": "1e39 N*m/rad"})", "[[[[", "1e400", "{}"})
+        CHECK_NOTHROW(pinproof::fuzz::distribution_input(t, details_file));
+}
+
 TEST_CASE("fuzz seeds: the examples and the bad-input corpus pass the fuzz entry points")
 {
     const auto bad = files_in(source_dir / "tests/bad-input", ".json");

@@ -5,8 +5,8 @@
 #
 #   bash tests/fuzz/run-fuzz.sh SECONDS [TARGET ...]
 #
-# TARGET is fuzz_project, fuzz_units or fuzz_schedule (default: all three, one
-# after the other). Seed corpora come from catalog-examples/, tests/bad-input/,
+# TARGET is fuzz_project, fuzz_units, fuzz_schedule, fuzz_catalogue or
+# fuzz_distribution (default: all five, one after the other). Seed corpora come from catalog-examples/, tests/bad-input/,
 # a list of unit texts and the regression inputs. An input that crashes, leaks,
 # hangs or exhausts memory is copied to tests/fuzz/regressions/TARGET/ (where
 # tests/fuzz/fuzz_regression_test.cpp replays it) and the script exits with 1.
@@ -18,16 +18,16 @@ cd "$(dirname "$0")/../.."
 root=$PWD
 
 if [ $# -lt 1 ] || ! [[ $1 =~ ^[0-9]+$ ]]; then
-  echo "usage: bash tests/fuzz/run-fuzz.sh SECONDS [fuzz_project|fuzz_units|fuzz_schedule ...]" >&2
+  echo "usage: bash tests/fuzz/run-fuzz.sh SECONDS [fuzz_project|fuzz_units|fuzz_schedule|fuzz_catalogue|fuzz_distribution ...]" >&2
   exit 2
 fi
 seconds=$1
 shift
 targets=("$@")
-[ ${#targets[@]} -gt 0 ] || targets=(fuzz_project fuzz_units fuzz_schedule)
+[ ${#targets[@]} -gt 0 ] || targets=(fuzz_project fuzz_units fuzz_schedule fuzz_catalogue fuzz_distribution)
 for t in "${targets[@]}"; do
   case "$t" in
-    fuzz_project|fuzz_units|fuzz_schedule) ;;
+    fuzz_project|fuzz_units|fuzz_schedule|fuzz_catalogue|fuzz_distribution) ;;
     *) echo "run-fuzz: unknown target $t" >&2; exit 2 ;;
   esac
 done
@@ -65,6 +65,21 @@ seed_schedule() {
     head -n 12 "$f" >"$1/head-$(basename "$f")"
   done
 }
+seed_catalogue() {
+  cp catalog-examples/details-*.json tests/bad-input/catalogue/*.json "$1"/
+}
+seed_distribution() {
+  local i=0 s
+  for s in '{"kind": "lognormal", "median": "1000 kN*m/rad", "cov": 0.4}' \
+           '{"kind": "lognormal", "p05": "300 kN*m/rad", "p95": "3000 kN*m/rad"}' \
+           '{"kind": "uniform-log", "min": "0.1 EI/L", "max": "8 EI/L"}' \
+           '{"kind": "normal", "mean": "1 MN*m/rad", "sd": "200 kN*m/rad"}' \
+           '{"kind": "lognormal", "median": "0.5 EI/L", "cov": 1e300}' \
+           '{"kind": "lognormal", "p05": "1e-300 N*m/rad", "p95": 1e39}'; do
+    printf '%s' "$s" >"$1/distribution-$i"
+    i=$((i + 1))
+  done
+}
 seed_units() {
   local i=0 s
   for s in "12.5 kN/m" "8356 cm4" "2500 kN*m/rad" "-2.5E-3 m" "20kN/m" "25 kN.m" "1 N/mm^2" "300 mm4" \
@@ -91,6 +106,8 @@ for t in "${targets[@]}"; do
     project) max_len=16384 ;;
     schedule) max_len=8192 ;;
     units) max_len=256 ;;
+    catalogue) max_len=16384 ;;
+    distribution) max_len=512 ;;
   esac
 
   echo "run-fuzz: $t for $seconds s (log: $build/$t.log)" >&2

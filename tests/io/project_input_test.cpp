@@ -155,6 +155,86 @@ TEST_CASE("bad-input corpus: exit 2 with every problem named and no output file 
     }
 }
 
+namespace {
+
+// tests/bad-input/commands.tsv: cases that need a command other than check, a
+// catalogue or a schedule. Columns (one tab between them): case name, the
+// command's arguments separated by spaces, the expected exit code, the place
+// ("error: PLACE: ..."), a substring of its message, and the output files
+// (space-separated, in the run's temporary folder) that must not exist after
+// the run. In arguments and places, {bad} stands for tests/bad-input and {out}
+// for the run's temporary folder.
+struct command_case {
+    std::string name;
+    std::vector<std::string> args;
+    int exit_code = 0;
+    std::string where, message;
+    std::vector<std::string> absent;
+};
+
+std::string substituted(std::string s, const fs::path& out)
+{
+    for (const auto& [key, value] : {std::pair<std::string, std::string>{"{bad}", corpus_dir.string()},
+                                     std::pair<std::string, std::string>{"{out}", out.string()}})
+        for (auto at = s.find(key); at != std::string::npos; at = s.find(key, at + value.size()))
+            s.replace(at, key.size(), value);
+    return s;
+}
+
+std::vector<std::string> words(const std::string& s)
+{
+    std::istringstream in(s);
+    std::vector<std::string> out;
+    for (std::string w; in >> w;) out.push_back(w);
+    return out;
+}
+
+std::vector<command_case> read_command_cases(const fs::path& out)
+{
+    std::vector<command_case> cases;
+    std::ifstream in(corpus_dir / "commands.tsv");
+    REQUIRE(in);
+    std::string line;
+    while (std::getline(in, line)) {
+        if (line.empty() || line[0] == '#') continue;
+        std::vector<std::string> cols;
+        std::size_t start = 0;
+        for (std::size_t tab; (tab = line.find('\t', start)) != std::string::npos; start = tab + 1)
+            cols.push_back(line.substr(start, tab - start));
+        cols.push_back(line.substr(start));
+        REQUIRE_MESSAGE((cols.size() == 5 || cols.size() == 6), "malformed commands.tsv line: " << line);
+        command_case c;
+        c.name = cols[0];
+        c.args = words(substituted(cols[1], out));
+        c.exit_code = std::stoi(cols[2]);
+        c.where = substituted(cols[3], out);
+        c.message = cols[4];
+        if (cols.size() == 6) c.absent = words(cols[5]);
+        cases.push_back(std::move(c));
+    }
+    return cases;
+}
+
+}  // namespace
+
+TEST_CASE("bad-input corpus: catalogues and schedules and other commands - exit code and place and no output [CORPUS commands.tsv]")
+{
+    temp_dir tmp;
+    const auto cases = read_command_cases(tmp.path);
+    CHECK(cases.size() >= 40);
+    for (const auto& c : cases) {
+        CAPTURE(c.name);
+        const auto r = run_cli(c.args);
+        CHECK(r.code == c.exit_code);
+        CHECK(r.err.find("internal error") == std::string::npos);
+        CHECK_MESSAGE(reports(r.err, c.where, c.message),
+                      "expected \"error: " << c.where << ": ..." << c.message << "...\" in:\n" << r.err.substr(0, 2000));
+        for (const auto& f : c.absent) CHECK_MESSAGE(!fs::exists(tmp.path / f), f << " exists after the run");
+        CHECK_FALSE(has_stray_temporary(tmp.path));
+        for (const auto& e : fs::directory_iterator(tmp.path)) fs::remove(e.path());
+    }
+}
+
 TEST_CASE("several mistakes in one file are all reported in one run [CORPUS several-mistakes-*]")
 {
     // parse_project itself carries every problem, in file order.

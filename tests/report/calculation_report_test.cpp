@@ -220,3 +220,25 @@ TEST_CASE("beam line of a uniformly loaded beam with the far end pinned [ROARK] 
     const double S = 5e6, th = bl.fixed_moment * bl.pinned_rotation / (S * bl.pinned_rotation + bl.fixed_moment);
     CHECK(close_rel(bl.upper.rotation, th, 1e-12));
 }
+
+TEST_CASE("html escape [XML 1.0 2.2]: C0 controls other than tab and line breaks become U+FFFD - exact")
+{
+    // W3C, Extensible Markup Language 1.0 (5th ed.), 2.2 Characters: Char
+    // excludes U+0000..U+0008, U+000B, U+000C, U+000E..U+001F.
+    CHECK(pinproof::html_escape("B1\x1b[8m<x>") == "B1\xEF\xBF\xBD[8m&lt;x&gt;");
+    CHECK(pinproof::html_escape(std::string("a\0b\tc\n", 6)) == "a\xEF\xBF\xBD" "b\tc\n");
+}
+
+TEST_CASE("text report [ECMA48 5.4]: an escape sequence in an id or title cannot reach the terminal - exact")
+{
+    // The readers refuse control characters; a project built in code is not
+    // read, so the report escapes what it prints (core/printable_text.hpp).
+    project p = load_project_file(example);
+    p.title = "Mezzanine\x1b]0;owned\x07";
+    p.beams.front().id = "B1\x1b[8m";
+    const std::string text = text_report(assess_project(p), "test");
+    CHECK(text.find('\x1b') == std::string::npos);
+    CHECK(text.find('\x07') == std::string::npos);
+    CHECK(text.find("B1<U+001B>[8m") != std::string::npos);
+    CHECK(text.find("Mezzanine<U+001B>]0;owned<U+0007>") != std::string::npos);
+}

@@ -60,6 +60,8 @@ struct detail_catalogue {
     const catalogue_detail* find(std::string_view id) const;
     // "FP-3-M20", "WC-2-M20", ... for messages, at most `limit` ids.
     std::string id_list(std::size_t limit = 12) const;
+    // Every id, in catalogue order (for "did you mean").
+    std::vector<std::string> ids() const;
     // Rebuilds the id index after `details` was changed (the readers do this).
     void rebuild_index();
 
