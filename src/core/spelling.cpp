@@ -1,26 +1,11 @@
 #include "pinproof/core/spelling.hpp"
 
+#include "pinproof/core/edit_distance.hpp"
+
 #include <algorithm>
 #include <cctype>
 
 namespace pinproof {
-
-std::size_t edit_distance_ignoring_case(std::string_view a, std::string_view b)
-{
-    const auto lower = [](char c) { return static_cast<char>(std::tolower(static_cast<unsigned char>(c))); };
-    std::vector<std::size_t> row(b.size() + 1);
-    for (std::size_t j = 0; j <= b.size(); ++j) row[j] = j;
-    for (std::size_t i = 1; i <= a.size(); ++i) {
-        std::size_t diagonal = row[0];
-        row[0] = i;
-        for (std::size_t j = 1; j <= b.size(); ++j) {
-            const std::size_t above = row[j];
-            row[j] = std::min({row[j] + 1, row[j - 1] + 1, diagonal + (lower(a[i - 1]) == lower(b[j - 1]) ? 0 : 1)});
-            diagonal = above;
-        }
-    }
-    return row[b.size()];
-}
 
 std::vector<std::string> similar_names(std::string_view name, const std::vector<std::string>& known, std::size_t most)
 {

@@ -7,6 +7,7 @@
 // Every case is exact.
 #include <doctest/doctest.h>
 
+#include "pinproof/core/edit_distance.hpp"
 #include "pinproof/core/spelling.hpp"
 
 using namespace pinproof;

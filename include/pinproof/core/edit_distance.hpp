@@ -6,9 +6,12 @@
 
 #include <cstddef>
 #include <string>
+#include <string_view>
 
 namespace pinproof {
 
-std::size_t edit_distance(const std::string& a, const std::string& b);
+std::size_t edit_distance(std::string_view a, std::string_view b);
+// The same with upper and lower case counted as one letter (ASCII).
+std::size_t edit_distance_ignoring_case(std::string_view a, std::string_view b);
 
 }  // namespace pinproof

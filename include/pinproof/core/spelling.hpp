@@ -15,7 +15,6 @@
 
 namespace pinproof {
 
-std::size_t edit_distance_ignoring_case(std::string_view a, std::string_view b);
 
 // The nearest known names, at most `most`, in the order of `known`.
 std::vector<std::string> similar_names(std::string_view name, const std::vector<std::string>& known,
