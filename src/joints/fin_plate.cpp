@@ -83,6 +83,24 @@ double bearing_in_web(const geometry& g, double tw, double fub, double fu)
                     en_bolt_bearing_resistance(horizontal, g.d, fub, fu, tw, gamma_M2));
 }
 
+// The joint's shear resistance is its weakest component's; its moment
+// resistance is the bolt group's with its weakest bolt (shear, bearing on the
+// plate or on the web), with no shear.
+void governing_components(fin_plate_joint& out, const bolt_group& group, double shear, double bearing_plate,
+                          double bearing_web)
+{
+    out.shear_resistance = 1e300;
+    for (const joint_component& k : out.components)
+        if (k.resistance && *k.resistance < out.shear_resistance) {
+            out.shear_resistance = *k.resistance;
+            out.governing = k.id;
+        }
+    const double F_min = std::min({shear, bearing_plate, bearing_web});
+    out.moment_resistance = group.moment_resistance(F_min);
+    out.moment_governing =
+        F_min == shear ? "bolt-shear" : (F_min == bearing_plate ? "bolt-bearing-plate" : "bolt-bearing-web");
+}
+
 double web_shear_area(const section& beam, const connection_detail& d)
 {
     const double tw = *beam.web_thickness;
@@ -172,16 +190,7 @@ fin_plate_joint derive_fin_plate(const connection_detail& d, const section& beam
     c.push_back({"web-shear", web_shear_area(beam, d) * fy_w / (sqrt3 * gamma_M0), std::nullopt, std::nullopt,
                  "EN 1993-1-1 6.2.6"});
 
-    out.shear_resistance = 1e300;
-    for (const joint_component& k : c)
-        if (k.resistance && *k.resistance < out.shear_resistance) {
-            out.shear_resistance = *k.resistance;
-            out.governing = k.id;
-        }
-
-    const double F_min = std::min({Fv, Fb_p, Fb_w});
-    out.moment_resistance = group.moment_resistance(F_min);
-    out.moment_governing = F_min == Fv ? "bolt-shear" : (F_min == Fb_p ? "bolt-bearing-plate" : "bolt-bearing-web");
+    governing_components(out, group, Fv, Fb_p, Fb_w);
     out.initial_stiffness = group.rotational_stiffness(k_bolt);
     out.free_rotation = group.free_rotation(g.d0 - g.d);
     return out;
@@ -263,15 +272,7 @@ single_plate_joint derive_single_plate(const connection_detail& d, const section
     c.push_back({"web-shear", 1.00 * 0.6 * Fy_w * beam.depth * tw, std::nullopt, std::nullopt,
                  "AISC 360-16 G2.1, C_v1 = 1"});
 
-    out.shear_resistance = 1e300;
-    for (const joint_component& k : c)
-        if (k.resistance && *k.resistance < out.shear_resistance) {
-            out.shear_resistance = *k.resistance;
-            out.governing = k.id;
-        }
-    const double F_min = std::min({rv, rb_p, rb_w});
-    out.moment_resistance = group.moment_resistance(F_min);
-    out.moment_governing = F_min == rv ? "bolt-shear" : (F_min == rb_p ? "bolt-bearing-plate" : "bolt-bearing-web");
+    governing_components(out, group, rv, rb_p, rb_w);
     out.free_rotation = group.free_rotation(g.d0 - g.d);
     // No published component stiffness is used for US joints: the initial
     // stiffness stays the user's (0 here means not derived).
