@@ -223,6 +223,16 @@ nonlinear_solution solve_nonlinear(const beam_model& model, const nonlinear_end&
     return out;
 }
 
+double beam_line_rotation(const beam_model& model, int end, double m, const nonlinear_end& far, double load_factor)
+{
+    const auto F = model.flexibility();
+    const auto rot0 = model.pinned_rotations();
+    const int j = end == 0 ? 0 : 1, k = 1 - j;
+    const end_equation far_end{far, F[k][k]};
+    const double m_far = far_end.solve(load_factor * rot0[k] - F[k][j] * m);
+    return load_factor * rot0[j] - F[j][j] * m - F[j][k] * m_far;
+}
+
 std::optional<collapse_point> beam_collapse(const beam_model& model, const nonlinear_end& start,
                                             const nonlinear_end& end, double plastic_moment)
 {

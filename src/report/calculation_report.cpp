@@ -6,7 +6,9 @@
 #include <sstream>
 #include <utility>
 
+#include "pinproof/checks/assessment.hpp"
 #include "pinproof/joints/classification.hpp"
+#include "pinproof/joints/nonlinear_analysis.hpp"
 #include "pinproof/report/detail_drawing.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/checks/gap_geometry.hpp"
@@ -186,6 +188,7 @@ private:
     void sweep_chart(const beam& b);
     void beam_lines(const beam& b);
     void beam_line_chart(const beam& b, const combination& c, beam_end e);
+    void law_beam_line_chart(const beam& b, const combination& c, beam_end e);
     void gap_drawings(const beam& b, const beam_assessment& ba);
     void checks(const beam_assessment& ba);
     void verdict(const beam_assessment& ba);
@@ -431,10 +434,10 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
             return moment ? model.moment_at(x, s.moment_start, s.moment_end)
                           : model.deflection_at(x, s.moment_start, s.moment_end);
         };
-        chart_series pinned{"pinned ends", {}, "#1f77b4", true};
-        chart_series fixed{"fixed ends", {}, "#7f7f7f", true};
-        chart_series lo{"range envelope, min", {}, "#d62728", false};
-        chart_series hi{"range envelope, max", {}, "#2ca02c", false};
+        chart_series pinned{"pinned ends", {}, chart_colour::pinned, true};
+        chart_series fixed{"fixed ends", {}, chart_colour::fixed, true};
+        chart_series lo{"range envelope, min", {}, chart_colour::range_lower, false};
+        chart_series hi{"range envelope, max", {}, chart_colour::range_upper, false};
         for (double x : xs) {
             const double px = u_.pos_in(x);
             pinned.points.emplace_back(px, u_.in(value(x, r.pinned), d));
@@ -500,8 +503,80 @@ void report_writer::beam_lines(const beam& b)
     }
 }
 
+// The beam line of a joint with a moment-rotation law: the curve M(theta) of
+// the law at both bounds of its range, the beam line with the far joint at its
+// lower bound (following its own law, so a curve where that joint has one), and
+// the analysed states where they meet.
+void report_writer::law_beam_line_chart(const beam& b, const combination& c, beam_end e)
+{
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c));
+    const bool start = e == beam_end::start;
+    const int j = start ? 0 : 1;
+    const joint& here = b.at(e);
+    const joint& far_joint = b.at(start ? beam_end::end : beam_end::start);
+    const nonlinear_end far = end_for(far_joint, far_joint.range.min);
+    const dimension md = dims::moment;
+    const nonlinear_solution rigid = start ? solve_nonlinear(model, nonlinear_end::rigid(), far)
+                                           : solve_nonlinear(model, far, nonlinear_end::rigid());
+    const double mf = start ? rigid.state.moment_start : rigid.state.moment_end;
+    const double th_s = beam_line_rotation(model, j, 0.0, far);
+    const std::string end = to_string(e);
+    if (!(mf > 0) || !(th_s > 0)) {
+        o_ << "<p>Beam line, " << end << " end: the combination bends no hogging moment into this joint, so there "
+           << "is no beam line to draw.</p>\n";
+        return;
+    }
+    line_chart ch;
+    ch.title = "Beam " + b.id + ", " + c.name + ": beam line at the " + end + " joint (" +
+               to_string(here.behaviour->law) + " law)";
+    ch.x.label = "end rotation (mrad)";
+    ch.y.label = "end moment (" + u_.sym(md) + "), hogging +";
+    ch.width = 760;
+    ch.height = 400;
+    chart_series line{"beam line", {}, chart_colour::beam_line, false};
+    for (int i = 0; i <= 60; ++i) {
+        const double m = mf * i / 60.0;
+        line.points.emplace_back(beam_line_rotation(model, j, m, far) * 1e3, u_.in(m, md));
+    }
+    std::sort(line.points.begin(), line.points.end());
+    ch.series.push_back(line);
+    const auto curve = [&](stiffness s, const std::string& name, const char* colour) {
+        const nonlinear_end n = end_for(here, s);
+        chart_series cs{name + " (" + u_.stiff(s) + ")", {}, colour, true};
+        for (int i = 0; i <= 80; ++i) {
+            const double th = th_s * i / 80.0;
+            cs.points.emplace_back(th * 1e3, u_.in(n.law ? n.law->moment(th) : 0.0, md));
+        }
+        ch.series.push_back(cs);
+        const nonlinear_solution at = start ? solve_nonlinear(model, n, far) : solve_nonlinear(model, far, n);
+        const double x = (start ? at.state.rotation_start : at.state.rotation_end) * 1e3;
+        const double m = start ? at.state.moment_start : at.state.moment_end;
+        chart_series pt{name + " on the beam line: " + format_number(x, 4) + " mrad, " + u_.q(m, md),
+                        {{x, u_.in(m, md)}},
+                        colour,
+                        false};
+        pt.marks_only = true;
+        ch.series.push_back(pt);
+    };
+    curve(here.range.min, "law at S min", chart_colour::range_lower);
+    curve(here.range.max, "law at S max", chart_colour::range_upper);
+    figure("beam-line", to_svg(ch),
+           "Beam line at the " + end + " joint, combination " + c.name + ": the end moment against the end rotation "
+               "with the far joint at its lower bound " + u_.stiff(far_joint.range.min) +
+               (far_joint.behaviour ? " following its own law (so the line is curved)" : "") + ", from M_F = " +
+               u_.q(mf, md) + " (this joint rigid) to theta_s = " + format_number(th_s * 1e3, 4) +
+               " mrad (this joint pinned); the joint's " + to_string(here.behaviour->law) +
+               " law at the bounds of its stiffness range" +
+               (here.moment_resistance ? ", capped at its moment resistance " + u_.q(*here.moment_resistance, md) : "") +
+               "; the marked points are the analysed states.");
+}
+
 void report_writer::beam_line_chart(const beam& b, const combination& c, beam_end e)
 {
+    if (b.at(e).behaviour) {
+        law_beam_line_chart(b, c, e);
+        return;
+    }
     const beam_line l = beam_line_of(b, c, e);
     const std::string end = to_string(e);
     if (l.fixed_moment == 0.0 || l.pinned_rotation == 0.0) {
@@ -518,7 +593,7 @@ void report_writer::beam_line_chart(const beam& b, const combination& c, beam_en
     ch.y.label = "end moment (" + u_.sym(md) + "), hogging +";
     ch.width = 760;
     ch.height = 400;
-    ch.series.push_back({"beam line", {{0.0, mf}, {th_s, 0.0}}, "#1f77b4", false});
+    ch.series.push_back({"beam line", {{0.0, mf}, {th_s, 0.0}}, chart_colour::beam_line, false});
     auto joint_line = [&](const beam_line_point& pt, const std::string& name, const std::string& colour) {
         chart_series s{name + " = " + u_.stiff(pt.joint), {}, colour, true};
         if (pt.joint.is_rigid()) {
@@ -531,15 +606,15 @@ void report_writer::beam_line_chart(const beam& b, const combination& c, beam_en
         }
         ch.series.push_back(s);
     };
-    joint_line(l.lower, "S min", "#2ca02c");
-    joint_line(l.upper, "S max", "#d62728");
+    joint_line(l.lower, "S min", chart_colour::range_lower);
+    joint_line(l.upper, "S max", chart_colour::range_upper);
     // The intersections, each marked by a diamond in its joint line's colour.
     for (const auto* pt : {&l.lower, &l.upper}) {
         const double x = pt->rotation * 1e3, y = u_.in(pt->moment, md);
         chart_series s{(pt == &l.lower ? std::string("S min") : std::string("S max")) + " on the beam line: " +
                            format_number(x, 4) + " mrad, " + u_.q(pt->moment, md),
                        {{x, y}},
-                       pt == &l.lower ? "#2ca02c" : "#d62728",
+                       pt == &l.lower ? chart_colour::range_lower : chart_colour::range_upper,
                        false};
         s.marks_only = true;
         ch.series.push_back(s);

@@ -14,8 +14,10 @@ namespace pinproof {
 
 namespace {
 
-const char* const palette[] = {"#1f77b4", "#d62728", "#2ca02c", "#9467bd", "#ff7f0e",
-                               "#8c564b", "#e377c2", "#17becf", "#7f7f7f", "#bcbd22"};
+// Series without a colour of their own take these in turn: the project's
+// own sequence of distinct hues (no red: red marks failures).
+const char* const palette[] = {"#1d4e89", "#6a3d9a", "#2e7d6b", "#b15928", "#4a4a8a",
+                               "#8c6d1f", "#7a3b5e", "#3d6e8c", "#5b6b2f", "#2b2f33"};
 
 constexpr double font = 12;          // px, tick and legend text
 constexpr double char_width = 6.6;   // px, a generous estimate of one character at `font`

@@ -103,24 +103,24 @@ std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
     // Room above the curves that reach their reference value 1.
     ch.y.min = 0.0;
     ch.y.max = std::ceil(y_top * 1.08 * 10) / 10;
-    const std::string en = "#6a3d9a", aisc = "#b15928";
+    const std::string en = chart_colour::en, aisc = chart_colour::aisc;
     ch.markers.push_back({en_pinned_limit, "EN pinned 0.5", en, true});
     ch.markers.push_back({en_rigid_limit(frame_bracing::braced), "EN rigid 8 (braced)", en, true});
     ch.markers.push_back({en_rigid_limit(frame_bracing::unbraced), "EN rigid 25 (unbraced)", en, true});
     ch.markers.push_back({aisc_simple_limit, "AISC simple 2", aisc, true});
     ch.markers.push_back({aisc_fully_restrained_limit, "AISC FR 20", aisc, true});
     for (const auto& t : s.thresholds)
-        ch.markers.push_back({t.ratio, t.check + " " + format_number(t.ratio, 3), "#c0392b", false});
+        ch.markers.push_back({t.ratio, t.check + " " + format_number(t.ratio, 3), chart_colour::failure, false});
     const auto band = [&](const joint& j, const std::string& label, const std::string& colour) {
         const double lo = j.range.min.is_rigid() ? 1000.0 : std::max(0.01, j.range.min.ratio(s.EI, s.span));
         const double hi = j.range.max.is_rigid() ? 1000.0 : std::max(0.01, j.range.max.ratio(s.EI, s.span));
         ch.bands.push_back({lo, hi, label, colour, 0.15});
     };
     const bool same = b.start.range.min == b.end.range.min && b.start.range.max == b.end.range.max;
-    if (same) band(b.start, "stiffness range (both joints)", "#4a90d9");
+    if (same) band(b.start, "stiffness range (both joints)", chart_colour::range_band);
     else {
-        band(b.start, "stiffness range, start joint", "#4a90d9");
-        band(b.end, "stiffness range, end joint", "#50b060");
+        band(b.start, "stiffness range, start joint", chart_colour::range_band);
+        band(b.end, "stiffness range, end joint", chart_colour::other_band);
     }
     return to_svg(ch);
 }

@@ -65,6 +65,12 @@ public:
 nonlinear_solution solve_nonlinear(const beam_model& model, const nonlinear_end& start, const nonlinear_end& end,
                                    double load_factor = 1.0);
 
+// The beam line of one end (0 start, 1 end) when the far end follows its law:
+// the rotation of this end when it carries the hogging moment m, at the load
+// factor. For a linear far joint it is the straight line M = M_F (1 - theta/theta_s).
+double beam_line_rotation(const beam_model& model, int end, double m, const nonlinear_end& far,
+                          double load_factor = 1.0);
+
 struct collapse_point {
     double load_factor = 0;     // times the model's loads
     double rotation_start = 0;  // rad, the joints' rotation demand for ductility

@@ -12,6 +12,22 @@
 
 namespace pinproof {
 
+// The project's colours, chosen by meaning: ideal bounds in neutral tones,
+// the stiffness range as one blue hue (darker for the upper bound), the two
+// standards' boundaries in two colours of their own, red only for a failure.
+namespace chart_colour {
+inline constexpr const char* pinned = "#6b7178";      // neutral slate, dashed
+inline constexpr const char* fixed = "#a3a8ad";       // lighter neutral, dashed
+inline constexpr const char* range_lower = "#6c9bd2"; // the stiffness range, lower bound
+inline constexpr const char* range_upper = "#1d4e89"; // the stiffness range, upper bound
+inline constexpr const char* range_band = "#6c9bd2";  // the range as a band
+inline constexpr const char* other_band = "#8fb996";  // a second joint's range
+inline constexpr const char* beam_line = "#2b2f33";   // the beam line
+inline constexpr const char* en = "#6a3d9a";          // EN 1993-1-8 boundaries
+inline constexpr const char* aisc = "#b15928";        // AISC 360 boundaries
+inline constexpr const char* failure = "#c0392b";     // a failure, nothing else
+}  // namespace chart_colour
+
 struct chart_series {
     std::string label;
     std::vector<std::pair<double, double>> points;  // (x, y); x ascending
