@@ -219,12 +219,12 @@ TEST_CASE("no load gives the zero state - and uplift has no sagging collapse [pr
     CHECK(close(up.state.moment_start, -solve_nonlinear(udl_model(), e, e).state.moment_start, 1e-12));
 }
 
-TEST_CASE("beam line with a pinned far end [Roark]: theta = theta_s - m L/(3EI) - a rigid far end at wL^2/8 turns none - tol 1e-12")
+TEST_CASE("beam line with a pinned far end [Roark]: theta = theta_s - m L/(3EI) - a rigid far end at wL^2/12 turns none - tol 1e-12")
 {
     const beam_model model = udl_model();
     const nonlinear_end pin = nonlinear_end::following(joint_law::linear(0));
     for (double m : {0.0, 20e3, 60e3})
         CHECK(std::abs(beam_line_rotation(model, 0, m, pin) - (theta_s - m * L / (3 * EI))) <= 1e-12 * theta_s);
-    // Far end rigid: M_F of the propped cantilever wL^2/8 gives zero rotation (pack 6, propped cantilever).
-    CHECK(std::abs(beam_line_rotation(model, 0, w * L * L / 8, nonlinear_end::rigid())) <= 1e-12 * theta_s);
+    // Far end rigid: the fixed-fixed end moment wL^2/12 leaves this end unturned (pack 6, fixed-fixed UDL).
+    CHECK(std::abs(beam_line_rotation(model, 0, w * L * L / 12, nonlinear_end::rigid())) <= 1e-12 * theta_s);
 }
