@@ -130,6 +130,7 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
     check->footer(exit_codes_text);
 
     auto* sections = app.add_subcommand("sections", "List the built-in section catalogue");
+    sections->footer("Exit codes: 0 listed.");
 
     detail_options detail_opts;
     auto* detail = app.add_subcommand("detail", "Check the end gap of one joint and draw its elevation (SVG)");

@@ -53,7 +53,8 @@ void add_sweep_options(CLI::App& sub, sweep_options& o)
         ->check(count_range(0, max_monte_carlo_samples))
         ->type_name("N");
     sub.footer("At most one output on standard output ('-'); no output may be an input. The outputs are written "
-               "together, only when all succeed.");
+               "together, only when all succeed.\nExit codes: 0 the sweep was written (whatever the checks say along "
+               "it), 2 bad input or an error; 129, 130, 143 ended by SIGHUP, SIGINT, SIGTERM (nothing written).");
 }
 
 namespace {
