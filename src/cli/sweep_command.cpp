@@ -90,10 +90,15 @@ std::string stiffness_text(stiffness s, unit_system u)
 
 }  // namespace
 
-int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err*/)
+namespace {
+
+using boundary_curves = std::vector<std::pair<std::string, std::vector<boundary_point>>>;
+
+// The outputs are refused before any work: two on standard output, one naming
+// an input, or a grid too large to hold. Returns the option writing to
+// standard output, if any.
+const char* refuse_outputs(const sweep_options& o)
 {
-    // The outputs are refused before any work: two on standard output, one
-    // naming an input, or a grid too large to hold.
     const std::pair<const char*, const std::string*> targets[] = {
         {"--csv", &o.csv_out}, {"--svg", &o.svg_out}, {"--json", &o.json_out}};
     const char* on_stdout = nullptr;
@@ -117,12 +122,11 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
                                           std::to_string((max_grid_points + 2) * (max_grid_points + 2)) +
                                           " stiffness pairs, each held in memory with its results), found " +
                                           std::to_string(o.points));
+    return on_stdout;
+}
 
-    const project p = load_project_file(o.file, o.details);
-    if (p.beams.empty()) throw input_error("/beams", "expected at least one beam to sweep, found none");
-    const beam* b = o.beam_id.empty() ? &p.beams.front() : &beam_by_id(p, o.beam_id, o.file);
-    const stiffness_uncertainty uncertainty{b->start.distribution, b->end.distribution, b->stiffness_correlation};
-
+sweep_settings settings_for(const sweep_options& o, const beam* b)
+{
     sweep_settings settings;
     settings.points = o.points;
     settings.combination = o.combination;
@@ -136,65 +140,59 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
     } else if (!o.hold.empty()) {
         throw input_error("--hold", "expected --end start|end with --hold (both ends move otherwise)");
     }
+    return settings;
+}
 
-    // Everything is computed before anything is written.
-    const sweep_result s = sweep_beam(p, *b, settings);
-    const auto probabilities = failure_probabilities(p, *b, uncertainty);
-    const auto mc = o.monte_carlo ? monte_carlo_probabilities(p, *b, uncertainty, o.monte_carlo)
-                                  : std::vector<monte_carlo_estimate>{};
-    std::vector<std::pair<std::string, std::vector<boundary_point>>> curves;
-    if (o.grid)
-        for (const auto& c : s.rows.front().checks)
-            if (c.status != check_status::not_applicable) curves.emplace_back(c.id, boundary_curve(p, *b, c.id));
+nlohmann::json sweep_document(const sweep_options& o, const sweep_result& s, const sweep_settings& settings,
+                              const boundary_curves& curves, const std::vector<failure_probability>& probabilities,
+                              const std::vector<monte_carlo_estimate>& mc)
+{
+    nlohmann::json j;
+    j["format"] = "pinproof-sweep/1";
+    j["beam"] = s.beam_id;
+    j["combination"] = s.combination;
+    j["moving"] = o.grid ? "grid" : to_string(settings.path.moving);
+    if (!o.grid && settings.path.moving != moving_end::both)
+        j["held"] = settings.path.held.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(settings.path.held.value());
+    j["EI_over_L"] = s.EI / s.span;
+    nlohmann::json rows = nlohmann::json::array();
+    for (const auto& r : s.rows) {
+        nlohmann::json row = to_json(r.state);
+        row["fixity_start"] = r.fixity_start;
+        row["fixity_end"] = r.fixity_end;
+        for (const auto& c : r.checks) row["status"][c.id] = to_string(c.status);
+        rows.push_back(row);
+    }
+    j["rows"] = rows;
+    j["thresholds"] = thresholds_json(s.thresholds, to_string(settings.path.moving));
+    nlohmann::json bc = nlohmann::json::object();
+    for (const auto& [id, pts] : curves) {
+        nlohmann::json a = nlohmann::json::array();
+        for (const auto& pt : pts)
+            a.push_back({{"stiffness_start", pt.start.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(pt.start.value())},
+                         {"stiffness_end", pt.end.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(pt.end.value())},
+                         {"fixity_start", pt.fixity_start},
+                         {"fixity_end", pt.fixity_end}});
+        bc[id] = a;
+    }
+    if (o.grid) j["boundary_curves"] = bc;
+    j["probability"] = probabilities_json(probabilities);
+    nlohmann::json m = nlohmann::json::array();
+    for (const auto& e : mc)
+        m.push_back({{"check", e.check},
+                     {"p_fail", e.p_fail},
+                     {"standard_error", e.standard_error},
+                     {"samples", e.samples},
+                     {"seed", e.seed}});
+    j["monte_carlo"] = m;
+    return j;
+}
 
-    std::string csv, svg, json_text;
-    if (!o.csv_out.empty()) csv = sweep_csv(s);
-    if (!o.svg_out.empty()) {
-        if (o.grid) throw input_error("--svg", "the chart is drawn for a path sweep; leave out --grid for --svg");
-        svg = sweep_svg(p, *b, s);
-    }
-    if (!o.json_out.empty()) {
-        nlohmann::json j;
-        j["format"] = "pinproof-sweep/1";
-        j["beam"] = s.beam_id;
-        j["combination"] = s.combination;
-        j["moving"] = o.grid ? "grid" : to_string(settings.path.moving);
-        if (!o.grid && settings.path.moving != moving_end::both)
-            j["held"] = settings.path.held.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(settings.path.held.value());
-        j["EI_over_L"] = s.EI / s.span;
-        nlohmann::json rows = nlohmann::json::array();
-        for (const auto& r : s.rows) {
-            nlohmann::json row = to_json(r.state);
-            row["fixity_start"] = r.fixity_start;
-            row["fixity_end"] = r.fixity_end;
-            for (const auto& c : r.checks) row["status"][c.id] = to_string(c.status);
-            rows.push_back(row);
-        }
-        j["rows"] = rows;
-        j["thresholds"] = thresholds_json(s.thresholds, to_string(settings.path.moving));
-        nlohmann::json bc = nlohmann::json::object();
-        for (const auto& [id, pts] : curves) {
-            nlohmann::json a = nlohmann::json::array();
-            for (const auto& pt : pts)
-                a.push_back({{"stiffness_start", pt.start.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(pt.start.value())},
-                             {"stiffness_end", pt.end.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(pt.end.value())},
-                             {"fixity_start", pt.fixity_start},
-                             {"fixity_end", pt.fixity_end}});
-            bc[id] = a;
-        }
-        if (o.grid) j["boundary_curves"] = bc;
-        j["probability"] = probabilities_json(probabilities);
-        nlohmann::json m = nlohmann::json::array();
-        for (const auto& e : mc)
-            m.push_back({{"check", e.check},
-                         {"p_fail", e.p_fail},
-                         {"standard_error", e.standard_error},
-                         {"samples", e.samples},
-                         {"seed", e.seed}});
-        j["monte_carlo"] = m;
-        json_text = j.dump(2) + "\n";
-    }
-    // Every file output is written, or none; then standard output.
+// Every file output is written, or none; then standard output.
+void write_outputs(const sweep_options& o, std::string csv, std::string svg, std::string json_text, std::ostream& out)
+{
+    const std::pair<const char*, const std::string*> targets[] = {
+        {"--csv", &o.csv_out}, {"--svg", &o.svg_out}, {"--json", &o.json_out}};
     output_set files;
     files.add_input(o.file);
     files.add_input(o.details);
@@ -205,9 +203,13 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
     if (!files.empty()) files.commit();
     for (std::size_t i = 0; i < 3; ++i)
         if (*targets[i].second == "-") out << *texts[i];
-    if (on_stdout) return 0;
+}
 
-    // The summary.
+void summary(std::ostream& out, const project& p, const sweep_options& o, const sweep_result& s,
+             const sweep_settings& settings, const boundary_curves& curves,
+             const std::vector<failure_probability>& probabilities, const std::vector<monte_carlo_estimate>& mc,
+             const stiffness_uncertainty& uncertainty)
+{
     const unit_system u = p.units;
     out << "Stiffness sweep of beam " << s.beam_id << ", combination " << s.combination << ": " << s.rows.size()
         << (o.grid ? " stiffness pairs" : " points") << " from a true pin to rigid";
@@ -238,6 +240,39 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
             out << "  Monte Carlo " << e.check << ": " << format_number(e.p_fail, 4) << " +- "
                 << format_number(e.standard_error, 2) << " (" << e.samples << " samples, seed " << e.seed << ")\n";
     }
+}
+
+}  // namespace
+
+int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err*/)
+{
+    const char* on_stdout = refuse_outputs(o);
+    const project p = load_project_file(o.file, o.details);
+    if (p.beams.empty()) throw input_error("/beams", "expected at least one beam to sweep, found none");
+    const beam* b = o.beam_id.empty() ? &p.beams.front() : &beam_by_id(p, o.beam_id, o.file);
+    const stiffness_uncertainty uncertainty{b->start.distribution, b->end.distribution, b->stiffness_correlation};
+    const sweep_settings settings = settings_for(o, b);
+
+    // Everything is computed before anything is written.
+    const sweep_result s = sweep_beam(p, *b, settings);
+    const auto probabilities = failure_probabilities(p, *b, uncertainty);
+    const auto mc = o.monte_carlo ? monte_carlo_probabilities(p, *b, uncertainty, o.monte_carlo)
+                                  : std::vector<monte_carlo_estimate>{};
+    boundary_curves curves;
+    if (o.grid)
+        for (const auto& c : s.rows.front().checks)
+            if (c.status != check_status::not_applicable) curves.emplace_back(c.id, boundary_curve(p, *b, c.id));
+
+    std::string csv, svg, json_text;
+    if (!o.csv_out.empty()) csv = sweep_csv(s);
+    if (!o.svg_out.empty()) {
+        if (o.grid) throw input_error("--svg", "the chart is drawn for a path sweep; leave out --grid for --svg");
+        svg = sweep_svg(p, *b, s);
+    }
+    if (!o.json_out.empty()) json_text = sweep_document(o, s, settings, curves, probabilities, mc).dump(2) + "\n";
+    write_outputs(o, std::move(csv), std::move(svg), std::move(json_text), out);
+    if (on_stdout) return 0;
+    summary(out, p, o, s, settings, curves, probabilities, mc, uncertainty);
     return 0;
 }
 

@@ -80,7 +80,8 @@ struct units_view {
 
 std::string ratio_text(const std::optional<double>& r) { return r ? format_number(*r, 3) : std::string("rigid"); }
 
-void beam_block(std::ostringstream& o, const project& p, const beam_assessment& a)
+// The beam, its section and stiffness boundaries, its steel and the notes.
+void beam_heading(std::ostringstream& o, const project& p, const beam_assessment& a)
 {
     const beam& b = *a.input;
     const units_view u{p.units};
@@ -101,7 +102,13 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
         o << "  steel " << b.steel->name() << ", plastic moment " << u.num(*a.plastic_moment, dims::moment) << " "
           << u.unit(dims::moment) << "\n";
     for (const auto& n : a.notes) o << "  Note: " << wrap(n, 92, "        ") << "\n";
+}
 
+// Each joint: its range, class, resistance and law.
+void joint_table(std::ostringstream& o, const project& p, const beam_assessment& a)
+{
+    const beam& b = *a.input;
+    const units_view u{p.units};
     o << "\n  Joints (stiffness in " << u.unit(dims::rotational_stiffness) << ")\n";
     o << "    " << pad("end", 7) << pad("S min .. S max", 22) << pad("S*L/EI", 18) << pad("fixity r", 18) << "class (lower .. upper bound)\n";
     for (const auto* j : {&a.start, &a.end}) {
@@ -129,7 +136,13 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
         if (const auto& rc = b.at(j->end).rotation_capacity)
             o << "    " << pad("", 7) << "rotation capacity " << u.num(*rc, dims::angle) << " " << u.unit(dims::angle) << "\n";
     }
+}
 
+// The end gap of each joint with a detail, and the state after closure.
+void end_gaps(std::ostringstream& o, const project& p, const beam_assessment& a)
+{
+    const beam& b = *a.input;
+    const units_view u{p.units};
     for (const auto* j : {&a.start, &a.end}) {
         if (!j->detail) continue;
         const auto& d = *j->detail;
@@ -172,7 +185,12 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
             o << "      " << wrap(c.assumptions, 88, "      ") << "\n";
         }
     }
+}
 
+// Each combination: every result pinned, over the range and fixed.
+void combination_tables(std::ostringstream& o, const project& p, const beam_assessment& a)
+{
+    const units_view u{p.units};
     for (const auto& r : a.combinations) {
         o << "\n  Combination " << r.comb.name << " (" << to_string(r.comb.use) << "): " << combination_text(r.comb)
           << "\n";
@@ -192,7 +210,12 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
               << u.num(r.collapse->rotation_start, dims::angle) << " and " << u.num(r.collapse->rotation_end, dims::angle)
               << " " << u.unit(dims::angle) << "\n";
     }
+}
 
+// Every check with its value, limit and message.
+void check_list(std::ostringstream& o, const project& p, const beam_assessment& a)
+{
+    const units_view u{p.units};
     o << "\n  Checks\n";
     int hidden = 0;
     for (const auto& c : a.checks) {
@@ -213,6 +236,12 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
     if (hidden > 0)
         o << "    (" << hidden << " detailing rule" << (hidden == 1 ? " does" : "s do")
           << " not apply to these details and " << (hidden == 1 ? "is" : "are") << " not listed)\n";
+}
+
+// The thresholds and the failure probabilities of the checks.
+void sensitivity(std::ostringstream& o, const project& p, const beam_assessment& a)
+{
+    const beam& b = *a.input;
     const auto thresholds = threshold_report_lines(p, b);
     if (!thresholds.empty()) {
         o << "\n  Thresholds (the stiffness, both joints together, at which a check changes its answer)\n";
@@ -236,6 +265,12 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
                          [](const failure_probability& f) { return f.p_fail > 0.0; }))
             o << "    no check fails anywhere in the distribution\n";
     }
+}
+
+// The verdict and the checks that fail.
+void verdict_line(std::ostringstream& o, const beam_assessment& a)
+{
+    const beam& b = *a.input;
     const auto failed = std::count_if(a.checks.begin(), a.checks.end(),
                                       [](const check& c) { return c.status == check_status::fail; });
     o << "\n  Verdict for beam " << b.id << ": ";
@@ -248,6 +283,17 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
         o << "the simple-support (pinned) assumption DOES NOT HOLD.\n    " << failed << " check"
           << (failed == 1 ? " fails" : "s fail") << ": " << wrap(ids, 90, "    ") << "\n";
     }
+}
+
+void beam_block(std::ostringstream& o, const project& p, const beam_assessment& a)
+{
+    beam_heading(o, p, a);
+    joint_table(o, p, a);
+    end_gaps(o, p, a);
+    combination_tables(o, p, a);
+    check_list(o, p, a);
+    sensitivity(o, p, a);
+    verdict_line(o, a);
 }
 
 }  // namespace
