@@ -103,24 +103,55 @@ int sections_command(std::ostream& out)
 
 }  // namespace
 
-int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& err)
-{
+namespace {
+
+// The program's commands and their options, defined once; `dispatch` runs the
+// one that was parsed.
+struct command_line {
     CLI::App app{"pinproof: checks whether steel beam-end joints may be idealised as pins.\n"
                  "Analyses each beam with semi-rigid end springs over the given stiffness range, compares with\n"
                  "ideal pinned and fixed ends, classifies the joints (EN 1993-1-8, AISC 360) and gives a verdict.\n"
                  "Results support, and do not replace, the judgement of a qualified engineer.",
                  "pinproof"};
+    std::string file, json_out, details;
+    bool quiet = false;
+    detail_options detail_opts;
+    sweep_options sweep_opts;
+    batch_command_options batch_options;
+    std::string report_file, report_out, report_details;
+    new_options new_opts;
+    fit_options fit_opts;
+    CLI::App *check = nullptr, *sections = nullptr, *detail = nullptr, *sweep = nullptr, *batch = nullptr,
+             *report = nullptr, *starter = nullptr, *fit = nullptr;
+
+    command_line();
+    void define_check_and_detail(const char* details_help);
+    void define_report(const char* details_help);
+    int dispatch(std::ostream& out, std::ostream& err);
+};
+
+command_line::command_line()
+{
     app.set_version_flag("--version", std::string("pinproof ") + version);
     // At most one command; a missing one is reported after parsing, so that an
     // unknown option or word is named rather than hidden behind "a command is required".
     app.require_subcommand(0, 1);
     app.footer(exit_codes_text);
-
-    std::string file, json_out, details;
-    bool quiet = false;
     const char* details_help = "Detail catalogue (format pinproof-details/1) for joints given as detail ids; "
                                "overrides the project's \"details\" key";
-    auto* check = app.add_subcommand("check", "Check every beam of a project file and print the report");
+    define_check_and_detail(details_help);
+    sweep = app.add_subcommand("sweep", "Sweep a beam's joint stiffness from a true pin to rigid: results, "
+                                        "thresholds and failure probabilities");
+    add_sweep_options(*sweep, sweep_opts);
+    batch = add_batch_subcommand(app, batch_options);
+    define_report(details_help);
+    starter = add_new_subcommand(app, new_opts);
+    fit = add_fit_subcommand(app, fit_opts);
+}
+
+void command_line::define_check_and_detail(const char* details_help)
+{
+    check = app.add_subcommand("check", "Check every beam of a project file and print the report");
     check->add_option("FILE", file, "Project file (format pinproof-project/1)")->required();
     check->add_option("--json", json_out, "Also write the machine-readable result to FILE ('-' for stdout); "
                                           "refused if FILE is an input")
@@ -129,11 +160,10 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
     check->add_option("--details", details, details_help)->type_name("FILE");
     check->footer(exit_codes_text);
 
-    auto* sections = app.add_subcommand("sections", "List the built-in section catalogue");
+    sections = app.add_subcommand("sections", "List the built-in section catalogue");
     sections->footer("Exit codes: 0 listed.");
 
-    detail_options detail_opts;
-    auto* detail = app.add_subcommand("detail", "Check the end gap of one joint and draw its elevation (SVG)");
+    detail = app.add_subcommand("detail", "Check the end gap of one joint and draw its elevation (SVG)");
     detail->add_option("FILE", detail_opts.file, "Project file (format pinproof-project/1)")->required();
     detail->add_option("--beam", detail_opts.beam, "Beam id")->required();
     detail->add_option("--end", detail_opts.end, "Which joint: start or end")
@@ -141,43 +171,18 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
         ->capture_default_str();
     detail->add_option("--svg", detail_opts.svg, "Drawing to write ('-' for stdout)")->required()->type_name("FILE");
     detail->add_option("--details", detail_opts.details, details_help)->type_name("FILE");
+}
 
-    sweep_options sweep_opts;
-    auto* sweep = app.add_subcommand("sweep", "Sweep a beam's joint stiffness from a true pin to rigid: results, "
-                                              "thresholds and failure probabilities");
-    add_sweep_options(*sweep, sweep_opts);
-
-    batch_command_options batch_options;
-    auto* batch = add_batch_subcommand(app, batch_options);
-
-    std::string report_file, report_out;
-    auto* report = app.add_subcommand("report", "Write the calculation report of a project file as one HTML file");
+void command_line::define_report(const char* details_help)
+{
+    report = app.add_subcommand("report", "Write the calculation report of a project file as one HTML file");
     report->add_option("FILE", report_file, "Project file (format pinproof-project/1)")->required();
     report->add_option("-o,--output", report_out, "HTML file to write")->required()->type_name("FILE");
-    std::string report_details;
     report->add_option("--details", report_details, details_help)->type_name("FILE");
+}
 
-    new_options new_opts;
-    auto* starter = add_new_subcommand(app, new_opts);
-
-    fit_options fit_opts;
-    auto* fit = add_fit_subcommand(app, fit_opts);
-
-    std::vector<std::string> reversed(args.rbegin(), args.rend());
-    try {
-        app.parse(reversed);
-    } catch (const CLI::ParseError& e) {
-        if (e.get_exit_code() == 0) {
-            // --help or --version: data on stdout.
-            app.exit(e, out, err);
-            return 0;
-        }
-        app.exit(e, out, err);
-        return exit_error;
-    }
-
-    if (refuse_empty_values({check, detail, sweep, batch, report}, err)) return exit_error;
-
+int command_line::dispatch(std::ostream& out, std::ostream& err)
+{
     // SIGINT, SIGTERM and SIGHUP remove the temporaries and end the run with
     // 128 + the signal number (interruption.hpp).
     interruption_guard interruption;
@@ -211,7 +216,24 @@ int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& e
             << (what.find("already in place") == std::string::npos ? "; nothing was written.\n" : "\n");
         return exit_error;
     }
-    return exit_error;
+}
+
+}  // namespace
+
+int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& err)
+{
+    command_line cl;
+    std::vector<std::string> reversed(args.rbegin(), args.rend());
+    try {
+        cl.app.parse(reversed);
+    } catch (const CLI::ParseError& e) {
+        // --help or --version (exit code 0): data on stdout.
+        cl.app.exit(e, out, err);
+        return e.get_exit_code() == 0 ? 0 : exit_error;
+    }
+    if (refuse_empty_values({cl.check, cl.detail, cl.sweep, cl.batch, cl.report, cl.starter, cl.fit}, err))
+        return exit_error;
+    return cl.dispatch(out, err);
 }
 
 }  // namespace pinproof::cli
