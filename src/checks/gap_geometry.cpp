@@ -54,37 +54,18 @@ struct candidate {
     contact_point contact;
 };
 
-}  // namespace
+// Keeps a contact found at `angle`.
+// `where` is the contact point and `normal` the unit normal of the touching
+// surfaces there, both in the position at contact; the arm of the bearing
+// force about the centre is the perpendicular distance to its line of
+// action (frictionless contact).
+struct candidate_keeper {
+    point2 c;
+    std::vector<candidate>& found;
 
-rotation_demand rotation_demand::from_end_rotation(double signed_rotation)
-{
-    rotation_demand d;
-    if (signed_rotation >= 0)
-        d.sagging = signed_rotation;
-    else
-        d.hogging = -signed_rotation;
-    return d;
-}
-
-// ---------------------------------------------------------------------------
-// Closure.
-
-closure find_closure(const beam_end_geometry& g, rotation_sense sense)
-{
-    closure result;
-    result.sense = sense;
-    const double s = sense_sign(sense);
-    const point2 c = g.centre(sense);
-    const beam_outline& o = g.outline;
-    const std::size_t n = o.points.size();
-
-    std::vector<candidate> found;
-    // `where` is the contact point and `normal` the unit normal of the touching
-    // surfaces there, both in the position at contact; the arm of the bearing
-    // force about the centre is the perpendicular distance to its line of
-    // action (frictionless contact).
-    auto keep = [&](double angle, std::string outline_part, std::string support_part, point2 at, point2 where,
-                    point2 normal) {
+    void operator()(double angle, std::string outline_part, std::string support_part, point2 at, point2 where,
+                    point2 normal) const
+    {
         candidate k;
         k.angle = angle;
         k.contact.outline_part = std::move(outline_part);
@@ -95,9 +76,14 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
         k.contact.lever_arm = std::abs(cross(where - c, normal));
         k.contact.distance = norm(at - c);
         found.push_back(std::move(k));
-    };
+    }
+};
 
-    // Outline vertices against support segments and arcs.
+// Outline vertices against support segments and arcs.
+void vertex_contacts(const beam_end_geometry& g, double s, point2 c, const candidate_keeper& keep)
+{
+    const beam_outline& o = g.outline;
+    const std::size_t n = o.points.size();
     for (std::size_t i = 0; i < n; ++i) {
         if (!vertex_is_real(o, i)) continue;
         const point2 p = o.points[i];
@@ -123,8 +109,14 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
             }
         }
     }
-    // Support corners against outline edges, solved in the beam's frame where
-    // the corner turns by -s t about the centre.
+}
+
+// Support corners against outline edges, solved in the beam's frame where
+// the corner turns by -s t about the centre.
+void corner_contacts(const beam_end_geometry& g, double s, point2 c, const candidate_keeper& keep)
+{
+    const beam_outline& o = g.outline;
+    const std::size_t n = o.points.size();
     for (const auto& corner : g.support.corners) {
         const point2 q = corner.at - c;
         if (norm(q) < 1e-12) continue;
@@ -143,26 +135,35 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
             }
         }
     }
+}
 
-    // Touching or overlapping at rest: closure is zero if the first movement presses in.
+// Touching or overlapping at rest: closure is zero if the first movement presses in.
+// Returns whether that is so, with the result set.
+bool closed_at_rest(const beam_end_geometry& g, rotation_sense sense, closure& result)
+{
     const double rest = clearance(g, sense, 0.0);
     if (rest < 0 || (rest < 1e-12 && clearance(g, sense, 1e-7) < 0)) {
         result.rotation = 0.0;
         result.contact = overlap(g, sense, rest < 0 ? 0.0 : 1e-7);
         if (!result.contact) throw internal_error("gap closure: overlap at rest not located");
-        return result;
+        return true;
     }
+    return false;
+}
 
-    const candidate* first = nullptr;
-    for (const auto& k : found)
-        if (!first || k.angle < first->angle) first = &k;
-
-    // The engine's own check: nothing overlaps before the contact found, and
-    // the outline touches at it. Tolerance: the chord sagitta of the fillets.
+// Tolerance of the engine's own check: the chord sagitta of the fillets.
+double check_tolerance(const beam_end_geometry& g)
+{
     double sagitta = 0;
     for (const auto& arc : g.support.arcs)
         sagitta = std::max(sagitta, arc.radius * (1.0 - std::cos(pi / 2.0 / chords_per_arc)));
     const double tol = 1e-7 + 2.0 * sagitta;
+    return tol;
+}
+
+// The engine's own check: nothing overlaps before the contact found.
+void check_no_overlap_before(const beam_end_geometry& g, rotation_sense sense, const candidate* first, double tol)
+{
     const double end = first ? first->angle : max_searched_rotation;
     for (int k = 1; k <= 8; ++k) {
         const double t = end * (k / 8.0) * (1.0 - 1e-6);
@@ -173,6 +174,46 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
             throw internal_error(m.str());
         }
     }
+}
+
+}  // namespace
+
+rotation_demand rotation_demand::from_end_rotation(double signed_rotation)
+{
+    rotation_demand d;
+    if (signed_rotation >= 0)
+        d.sagging = signed_rotation;
+    else
+        d.hogging = -signed_rotation;
+    return d;
+}
+
+// ---------------------------------------------------------------------------
+// Closure.
+
+closure find_closure(const beam_end_geometry& g, rotation_sense sense)
+{
+    closure result;
+    result.sense = sense;
+    const double s = sense_sign(sense);
+    const point2 c = g.centre(sense);
+
+    std::vector<candidate> found;
+    const candidate_keeper keep{c, found};
+
+    vertex_contacts(g, s, c, keep);
+    corner_contacts(g, s, c, keep);
+
+    if (closed_at_rest(g, sense, result)) return result;
+
+    const candidate* first = nullptr;
+    for (const auto& k : found)
+        if (!first || k.angle < first->angle) first = &k;
+
+    // The engine's own check: nothing overlaps before the contact found, and
+    // the outline touches at it.
+    const double tol = check_tolerance(g);
+    check_no_overlap_before(g, sense, first, tol);
     if (first) {
         const double at_contact = clearance(g, sense, first->angle);
         if (std::abs(at_contact) > tol) {

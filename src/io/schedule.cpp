@@ -94,35 +94,66 @@ static std::string replace_invalid_utf8(const std::string& s)
     return out;
 }
 
-std::vector<csv_record> read_csv(std::string_view text)
-{
-    std::vector<csv_record> out;
+namespace {
+
+// Reads the records of a CSV text one by one: line endings, blank and comment
+// lines, quoted and unquoted cells.
+class csv_reader {
+public:
+    explicit csv_reader(std::string_view text_) : text(text_), n(text_.size())
+    {
+        if (n >= 3 && text.substr(0, 3) == "\xEF\xBB\xBF") pos = 3;
+    }
+
+    std::vector<csv_record> read()
+    {
+        std::vector<csv_record> out;
+        while (pos < n) {
+            if (skip_blank_or_comment()) continue;
+            out.push_back(record());
+        }
+        return out;
+    }
+
+private:
+    std::string_view text;
+    const std::size_t n;
     std::size_t pos = 0, line = 1;
-    const std::size_t n = text.size();
-    if (n >= 3 && text.substr(0, 3) == "\xEF\xBB\xBF") pos = 3;
-    const auto at_line_end = [&](std::size_t p) {
+
+    bool at_line_end(std::size_t p) const
+    {
         return p >= n || text[p] == '\n' || (text[p] == '\r' && p + 1 < n && text[p + 1] == '\n') ||
                (text[p] == '\r' && p + 1 == n);
-    };
-    const auto skip_line_end = [&](std::size_t& p) {
+    }
+
+    void skip_line_end(std::size_t& p)
+    {
         if (p < n && text[p] == '\r') ++p;
         if (p < n && text[p] == '\n') ++p;
         ++line;
-    };
-    while (pos < n) {
-        // Blank lines and comment lines between records.
+    }
+
+    // Blank lines and comment lines between records; returns whether one was skipped.
+    bool skip_blank_or_comment()
+    {
         std::size_t probe = pos;
         while (probe < n && (text[probe] == ' ' || text[probe] == '\t')) ++probe;
         if (at_line_end(probe)) {
             pos = probe;
             skip_line_end(pos);
-            continue;
+            return true;
         }
         if (text[pos] == '#') {
             while (!at_line_end(pos)) ++pos;
             skip_line_end(pos);
-            continue;
+            return true;
         }
+        return false;
+    }
+
+    // One record, from pos to the end of its line (a quoted cell may span lines).
+    csv_record record()
+    {
         csv_record rec;
         rec.line = line;
         bool bad_record = false;
@@ -131,51 +162,9 @@ std::vector<csv_record> read_csv(std::string_view text)
             std::size_t p = pos;
             while (p < n && (text[p] == ' ' || text[p] == '\t')) ++p;
             if (p < n && text[p] == '"') {
-                const std::size_t open_line = line, open_col = rec.cells.size() + 1;
-                ++p;
-                for (;;) {
-                    if (p >= n)
-                        throw input_error("line " + std::to_string(open_line) + ", column " + std::to_string(open_col),
-                                          "expected a closing double quote for the quoted cell that starts here, "
-                                          "found the end of the file");
-                    const char c = text[p];
-                    if (c == '"') {
-                        if (p + 1 < n && text[p + 1] == '"') {
-                            cell += '"';
-                            p += 2;
-                            continue;
-                        }
-                        ++p;
-                        break;
-                    }
-                    if (c == '\n') ++line;
-                    cell += c;
-                    ++p;
-                }
-                while (p < n && (text[p] == ' ' || text[p] == '\t')) ++p;
-                if (!(p >= n || text[p] == ',' || at_line_end(p))) {
-                    if (!bad_record) {
-                        rec.bad_column = rec.cells.size() + 1;
-                        rec.bad_reason = "expected a comma or the end of the line after the closing quote of a "
-                                         "cell, found more text";
-                    }
-                    bad_record = true;
-                    while (p < n && text[p] != ',' && !at_line_end(p)) ++p;
-                }
+                cell = quoted_cell(p, rec, bad_record);
             } else {
-                const std::size_t start = p;
-                bool stray_quote = false;
-                while (p < n && text[p] != ',' && !at_line_end(p)) {
-                    if (text[p] == '"') stray_quote = true;
-                    ++p;
-                }
-                cell = trimmed(text.substr(start, p - start));
-                if (stray_quote && !bad_record) {
-                    rec.bad_column = rec.cells.size() + 1;
-                    rec.bad_reason = "expected a cell either fully enclosed in double quotes or without any, found "
-                                     "a double quote inside an unquoted cell";
-                    bad_record = true;
-                }
+                cell = unquoted_cell(p, rec, bad_record);
             }
             if (!valid_utf8(cell)) {
                 if (!bad_record) {
@@ -194,10 +183,71 @@ std::vector<csv_record> read_csv(std::string_view text)
             skip_line_end(pos);
             break;
         }
-        out.push_back(std::move(rec));
+        return rec;
     }
-    return out;
-}
+
+    // A cell in double quotes, from its opening quote at p; a doubled quote is one quote.
+    std::string quoted_cell(std::size_t& p, csv_record& rec, bool& bad_record)
+    {
+        std::string cell;
+        const std::size_t open_line = line, open_col = rec.cells.size() + 1;
+        ++p;
+        for (;;) {
+            if (p >= n)
+                throw input_error("line " + std::to_string(open_line) + ", column " + std::to_string(open_col),
+                                  "expected a closing double quote for the quoted cell that starts here, "
+                                  "found the end of the file");
+            const char c = text[p];
+            if (c == '"') {
+                if (p + 1 < n && text[p + 1] == '"') {
+                    cell += '"';
+                    p += 2;
+                    continue;
+                }
+                ++p;
+                break;
+            }
+            if (c == '\n') ++line;
+            cell += c;
+            ++p;
+        }
+        while (p < n && (text[p] == ' ' || text[p] == '\t')) ++p;
+        if (!(p >= n || text[p] == ',' || at_line_end(p))) {
+            if (!bad_record) {
+                rec.bad_column = rec.cells.size() + 1;
+                rec.bad_reason = "expected a comma or the end of the line after the closing quote of a "
+                                 "cell, found more text";
+            }
+            bad_record = true;
+            while (p < n && text[p] != ',' && !at_line_end(p)) ++p;
+        }
+        return cell;
+    }
+
+    // A cell without quotes, trimmed; a quote inside it marks the record bad.
+    std::string unquoted_cell(std::size_t& p, csv_record& rec, bool& bad_record)
+    {
+        std::string cell;
+        const std::size_t start = p;
+        bool stray_quote = false;
+        while (p < n && text[p] != ',' && !at_line_end(p)) {
+            if (text[p] == '"') stray_quote = true;
+            ++p;
+        }
+        cell = trimmed(text.substr(start, p - start));
+        if (stray_quote && !bad_record) {
+            rec.bad_column = rec.cells.size() + 1;
+            rec.bad_reason = "expected a cell either fully enclosed in double quotes or without any, found "
+                             "a double quote inside an unquoted cell";
+            bad_record = true;
+        }
+        return cell;
+    }
+};
+
+}  // namespace
+
+std::vector<csv_record> read_csv(std::string_view text) { return csv_reader(text).read(); }
 
 std::string to_string(combination_set c) { return c == combination_set::en1990 ? "EN1990" : "ASCE7"; }
 

@@ -133,72 +133,58 @@ support_geometry beam_web_support(const supporting_beam& sb)
 
 point2 frame_point(const detail_point& p, double shift) { return {-(p.from_support - shift), -p.below_top}; }
 
-}  // namespace
-
-std::string to_string(rotation_sense s) { return s == rotation_sense::sagging ? "sagging" : "hogging"; }
-
-std::string contact_point::description() const { return outline_part + " against " + support_part; }
-
-beam_end_geometry build_geometry(const connection_detail& detail, const section& beam)
+// Reach of the drawn beam: far enough behind the end that no real contact
+// can lie on the drawing's cut.
+double drawing_reach(const connection_detail& d, double h)
 {
-    return build_geometry(detail, beam, detail.worst_case_gap());
-}
-
-beam_end_geometry build_geometry(const connection_detail& d, const section& beam, double gap_in_place)
-{
-    if (!(beam.depth > 0) || !std::isfinite(gap_in_place) || !(gap_in_place > 0))
-        throw internal_error("build_geometry: beam depth and gap must be positive (validated at input)");
-    beam_end_geometry g;
-    const double h = beam.depth;
-    g.depth = h;
-    g.flange_thickness = beam.flange_thickness.value_or(0.0);
-    g.gap = gap_in_place;
-    const double shift = d.gap - gap_in_place;  // how far the beam has moved towards the support
-
-    // Reach of the drawn beam: far enough behind the end that no real contact
-    // can lie on the drawing's cut.
     double reach = 2.0 * h;
     for (const auto& c : {d.cope_top, d.cope_bottom})
         if (c) reach = std::max(reach, c->length + h);
     if (d.support_beam) reach = std::max(reach, d.support_beam->flange_outstand() + h);
     reach = std::max(reach, d.bolts.bolt_line + d.gap + h);
+    return reach;
+}
 
-    beam_outline& o = g.outline;
-    if (d.type == detail_type::custom) {
-        std::vector<point2> pts;
-        for (const auto& p : d.outline) pts.push_back(frame_point(p, shift));
-        std::vector<std::size_t> order(pts.size());
-        for (std::size_t i = 0; i < pts.size(); ++i) order[i] = i;
-        if (signed_area(pts) < 0) std::reverse(order.begin(), order.end());
-        for (std::size_t k = 0; k < order.size(); ++k) {
-            const std::size_t i = order[k], j = order[(k + 1) % order.size()];
-            add_point(o, pts[i], "outline point " + std::to_string(i + 1),
-                      "outline edge " + std::to_string(std::min(i, j) + 1) + "-" + std::to_string(std::max(i, j) + 1));
-        }
-    } else {
-        const double xe = -gap_in_place;
-        const double xf = xe - reach;
-        add_point(o, {xf, -h}, "beam bottom at the drawing cut", "bottom flange");
-        if (d.cope_bottom) {
-            const auto& c = *d.cope_bottom;
-            add_point(o, {xe - c.length, -h}, "bottom flange end at the bottom cope", "bottom cope end");
-            add_point(o, {xe - c.length, -h + c.depth}, "bottom cope re-entrant corner", "bottom cope edge");
-            add_point(o, {xe, -h + c.depth}, "bottom cope corner", "beam end");
-        } else {
-            add_point(o, {xe, -h}, "bottom flange corner", "beam end");
-        }
-        if (d.cope_top) {
-            const auto& c = *d.cope_top;
-            add_point(o, {xe, -c.depth}, "top cope corner", "top cope edge");
-            add_point(o, {xe - c.length, -c.depth}, "top cope re-entrant corner", "top cope end");
-            add_point(o, {xe - c.length, 0}, "top flange end at the top cope", "top flange");
-        } else {
-            add_point(o, {xe, 0}, "top flange corner", "top flange");
-        }
-        add_point(o, {xf, 0}, "beam top at the drawing cut", "drawing cut", true);
+void add_custom_outline(beam_outline& o, const connection_detail& d, double shift)
+{
+    std::vector<point2> pts;
+    for (const auto& p : d.outline) pts.push_back(frame_point(p, shift));
+    std::vector<std::size_t> order(pts.size());
+    for (std::size_t i = 0; i < pts.size(); ++i) order[i] = i;
+    if (signed_area(pts) < 0) std::reverse(order.begin(), order.end());
+    for (std::size_t k = 0; k < order.size(); ++k) {
+        const std::size_t i = order[k], j = order[(k + 1) % order.size()];
+        add_point(o, pts[i], "outline point " + std::to_string(i + 1),
+                  "outline edge " + std::to_string(std::min(i, j) + 1) + "-" + std::to_string(std::max(i, j) + 1));
     }
+}
 
-    // Support.
+void add_rolled_outline(beam_outline& o, const connection_detail& d, double h, double gap_in_place, double reach)
+{
+    const double xe = -gap_in_place;
+    const double xf = xe - reach;
+    add_point(o, {xf, -h}, "beam bottom at the drawing cut", "bottom flange");
+    if (d.cope_bottom) {
+        const auto& c = *d.cope_bottom;
+        add_point(o, {xe - c.length, -h}, "bottom flange end at the bottom cope", "bottom cope end");
+        add_point(o, {xe - c.length, -h + c.depth}, "bottom cope re-entrant corner", "bottom cope edge");
+        add_point(o, {xe, -h + c.depth}, "bottom cope corner", "beam end");
+    } else {
+        add_point(o, {xe, -h}, "bottom flange corner", "beam end");
+    }
+    if (d.cope_top) {
+        const auto& c = *d.cope_top;
+        add_point(o, {xe, -c.depth}, "top cope corner", "top cope edge");
+        add_point(o, {xe - c.length, -c.depth}, "top cope re-entrant corner", "top cope end");
+        add_point(o, {xe - c.length, 0}, "top flange end at the top cope", "top flange");
+    } else {
+        add_point(o, {xe, 0}, "top flange corner", "top flange");
+    }
+    add_point(o, {xf, 0}, "beam top at the drawing cut", "drawing cut", true);
+}
+
+void place_support(beam_end_geometry& g, const connection_detail& d, const beam_outline& o, double h)
+{
     double support_reach = 0;
     for (const auto& p : o.points) support_reach = std::max({support_reach, std::abs(p.x), std::abs(p.y)});
     support_reach = 2.0 * support_reach + h;
@@ -210,8 +196,11 @@ beam_end_geometry build_geometry(const connection_detail& d, const section& beam
         g.support = beam_web_support(*d.support_beam);
         break;
     }
+}
 
-    // Fittings, bolts and the centre of rotation.
+// Fittings, bolts and the centre of rotation.
+void place_fittings(beam_end_geometry& g, const connection_detail& d, double gap_in_place, double shift)
+{
     const double pt = d.plate_top, hp = d.plate_depth;
     const auto bolt_level = [&](int i) { return -(pt + d.bolts.first_bolt + i * d.bolts.pitch); };
     bool centre_moves_with_beam = true;
@@ -259,6 +248,43 @@ beam_end_geometry build_geometry(const connection_detail& d, const section& beam
     } else if (d.type == detail_type::custom) {
         throw internal_error("build_geometry: a custom detail needs its centre of rotation (validated at input)");
     }
+}
+
+}  // namespace
+
+std::string to_string(rotation_sense s) { return s == rotation_sense::sagging ? "sagging" : "hogging"; }
+
+std::string contact_point::description() const { return outline_part + " against " + support_part; }
+
+beam_end_geometry build_geometry(const connection_detail& detail, const section& beam)
+{
+    return build_geometry(detail, beam, detail.worst_case_gap());
+}
+
+beam_end_geometry build_geometry(const connection_detail& d, const section& beam, double gap_in_place)
+{
+    if (!(beam.depth > 0) || !std::isfinite(gap_in_place) || !(gap_in_place > 0))
+        throw internal_error("build_geometry: beam depth and gap must be positive (validated at input)");
+    beam_end_geometry g;
+    const double h = beam.depth;
+    g.depth = h;
+    g.flange_thickness = beam.flange_thickness.value_or(0.0);
+    g.gap = gap_in_place;
+    const double shift = d.gap - gap_in_place;  // how far the beam has moved towards the support
+
+    const double reach = drawing_reach(d, h);
+
+    beam_outline& o = g.outline;
+    if (d.type == detail_type::custom) {
+        add_custom_outline(o, d, shift);
+    } else {
+        add_rolled_outline(o, d, h, gap_in_place, reach);
+    }
+
+    // Support.
+    place_support(g, d, o, h);
+
+    place_fittings(g, d, gap_in_place, shift);
 
     if (signed_area(o.points) <= 0) throw internal_error("build_geometry: beam outline is not counterclockwise");
     return g;
