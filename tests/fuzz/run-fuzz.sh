@@ -50,7 +50,7 @@ for t in "${targets[@]}"; do
   "$cxx" -std=c++17 -g -O1 -fno-omit-frame-pointer \
     -fsanitize=fuzzer,address,undefined -fno-sanitize-recover=all \
     -I include -I tests/fuzz -DPINPROOF_SOURCE_DIR="\"$root\"" \
-    "tests/fuzz/$t.cpp" "$build/lib/libpinproof_core.a" -pthread -o "$build/$t"
+    "tests/fuzz/$t.cpp" "$build/lib/libpinproof.a" -pthread -o "$build/$t"
 done
 
 # Seed corpora, rebuilt on every run; the corpus the fuzzer grows is kept in
