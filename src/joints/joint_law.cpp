@@ -81,8 +81,9 @@ joint_law joint_law::richard_abbott(double initial_stiffness, double reference_m
 {
     require(positive(initial_stiffness), "the initial stiffness must be finite and > 0");
     require(positive(reference_moment), "the reference moment must be finite and > 0");
-    require(non_negative(plastic_stiffness) && plastic_stiffness < initial_stiffness,
-            "the plastic stiffness must be >= 0 and less than the initial stiffness");
+    // k_p = S_j,ini leaves the linear law M = S_j,ini theta (the curved term vanishes).
+    require(non_negative(plastic_stiffness) && plastic_stiffness <= initial_stiffness,
+            "the plastic stiffness must be >= 0 and at most the initial stiffness");
     require(positive(shape) && shape <= 50, "the shape parameter n must be > 0 and at most 50");
     require_cap(moment_resistance);
     joint_law j;
@@ -287,7 +288,13 @@ joint_law joint_law::from(const joint_behaviour& b, double initial_stiffness, st
     case joint_law_kind::ec3_eta: return ec3_eta(initial_stiffness, b.eta, moment_resistance);
     case joint_law_kind::power: return power(initial_stiffness, b.ultimate_moment, b.shape, moment_resistance);
     case joint_law_kind::richard_abbott:
-        return richard_abbott(initial_stiffness, b.reference_moment, b.plastic_stiffness, b.shape, moment_resistance);
+        // The project's range is checked to lie above k_p (project_input); a
+        // sweep, a threshold search or a sampled stiffness can go below it.
+        // There the plastic branch cannot be stiffer than the joint, so the
+        // law is taken as linear at S_j,ini: the curve's own limit as k_p
+        // reaches S_j,ini, and the stiffer (more moment-attracting) reading.
+        return richard_abbott(initial_stiffness, b.reference_moment, std::min(b.plastic_stiffness, initial_stiffness),
+                              b.shape, moment_resistance);
     case joint_law_kind::multilinear: {
         std::vector<law_point> pts;
         for (const auto& [theta, m] : b.points) pts.push_back({theta, m});

@@ -165,10 +165,33 @@ TEST_CASE("parameters outside their domain are refused [project rules]")
     CHECK_THROWS_AS(joint_law::ec3_curve(S, 0, 2.7), std::invalid_argument);
     CHECK_THROWS_AS(joint_law::ec3_eta(S, 0.5), std::invalid_argument);
     CHECK_THROWS_AS(joint_law::power(S, -1, 1.5), std::invalid_argument);
-    CHECK_THROWS_AS(joint_law::richard_abbott(S, 40e3, S, 2.0), std::invalid_argument);
+    CHECK_THROWS_AS(joint_law::richard_abbott(S, 40e3, 1.01 * S, 2.0), std::invalid_argument);
     CHECK_THROWS_AS(joint_law::multilinear({{2e-3, 10e3}, {1e-3, 20e3}}), std::invalid_argument);
     CHECK_THROWS_AS(joint_law::multilinear({{2e-3, 10e3}, {3e-3, 5e3}}), std::invalid_argument);
     CHECK_THROWS_AS(joint_law::linear(std::nan("")), std::invalid_argument);
+}
+
+TEST_CASE("Richard-Abbott [RA1975]: k_p = S_j.ini leaves the line M = S_j.ini theta - tol 1e-15")
+{
+    const joint_law ra = joint_law::richard_abbott(S, 40e3, S, 2.0);
+    for (double theta : {1e-4, 1e-2, 0.3}) {
+        CHECK(close(ra.moment(theta), S * theta, 1e-15));
+        CHECK(close(ra.tangent(theta), S, 1e-15));
+    }
+}
+
+TEST_CASE("a law from a joint at a stiffness below its plastic stiffness is the line at that stiffness [project rules]")
+{
+    // A sweep or threshold search below k_p: the plastic branch is capped at
+    // the initial stiffness (joint_law::from), never refused mid-analysis.
+    joint_behaviour b;
+    b.law = joint_law_kind::richard_abbott;
+    b.reference_moment = 40e3;
+    b.plastic_stiffness = 5e5;
+    b.shape = 2;
+    const joint_law j = joint_law::from(b, 1e5, 45e3);
+    CHECK(close(j.moment(0.1), 1e5 * 0.1, 1e-15));
+    CHECK(close(j.moment(1.0), 45e3, 1e-15));
 }
 
 TEST_CASE("law names: one spelling for reader - report and result [project rules]")
