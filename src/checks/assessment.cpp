@@ -282,8 +282,13 @@ check joint_moment_check(const project& p, const beam& b, const std::vector<comb
     } else {
         c.status = check_status::fail;
         c.message = attracted + ", more than its declared moment resistance " + fmt(*mrd, dims::moment) +
-                    ": the joint would have to yield to behave as a pin. Design it for the moment, or use a more "
-                    "flexible detail.";
+                    ": the joint would have to yield to behave as a pin. As a linear spring it never yields, which "
+                    "overstates the moment: give the joint its moment-rotation law (a \"behaviour\", e.g. " +
+                    std::string(p.standard == design_standard::en1993_1_8
+                                    ? "the EN 1993-1-8 6.3.1(6) curve"
+                                    : "a power or multilinear curve from tests") +
+                    "; docs/method/joint-laws.md) to see whether it yields and is ductile enough. Otherwise design it "
+                    "for the moment, or use a more flexible detail.";
     }
     return c;
 }
@@ -465,13 +470,16 @@ struct rotation_extremes {
     std::string sagging_combination, hogging_combination;
 };
 
-rotation_extremes end_rotation_extremes(const std::vector<combination_result>& combos, beam_end e, bool strength_only)
+// The extremes of the end rotation over the combinations: over the range
+// envelope where the lower-bound stiffness is credited, else of the pinned beam.
+rotation_extremes end_rotation_extremes(const std::vector<combination_result>& combos, beam_end e, bool strength_only,
+                                        bool over_range)
 {
     double beam_state::*member = e == beam_end::start ? &beam_state::rotation_start : &beam_state::rotation_end;
     rotation_extremes r;
     for (const auto& c : combos) {
         if (strength_only && c.comb.use != limit_state::strength) continue;
-        const auto& range = c.envelope.of(member);
+        const auto range = over_range ? c.envelope.of(member) : value_range{c.pinned.*member, c.pinned.*member};
         if (range.max > r.sagging) {
             r.sagging = range.max;
             r.sagging_combination = c.comb.name;
@@ -497,8 +505,9 @@ std::string closed_state_text(const project& p, const std::string& combination, 
 {
     const formatter fmt{p.units};
     std::string text = "State after closure under " + combination +
-                       ": the beam solved with bilinear joints, each at its lower-bound stiffness until its gap "
-                       "closes; contact frictionless, the bearing force normal to the touching surfaces.";
+                       ": the beam solved with bilinear joints, each at the stiffness its gap check credits (its "
+                       "lower bound where declared dependable, else none) until its gap closes; contact "
+                       "frictionless, the bearing force normal to the touching surfaces.";
     for (beam_end k : {beam_end::start, beam_end::end}) {
         const closing_joint& c = cj[k == beam_end::start ? 0 : 1];
         const joint_phase ph = k == beam_end::start ? r.start : r.end;
@@ -530,18 +539,24 @@ void assess_details(const project& p, const beam& b, beam_assessment& a, bool fi
         const joint& j = b.at(e);
         if (!j.detail) continue;
         detail_assessment d;
-        const auto all = end_rotation_extremes(a.combinations, e, false);
-        const auto strength = end_rotation_extremes(a.combinations, e, true);
+        // Bolt slip in clearance holes can leave a joint turning as a pin before
+        // it stiffens: the lower-bound stiffness is credited only where it is
+        // declared dependable (docs/method/checks.md, gap-closure).
+        d.credits_lower_bound = j.dependable_lower_bound;
+        d.free_slip = j.behaviour && j.behaviour->law == joint_law_kind::multilinear ? j.behaviour->slip : 0.0;
+        const auto all = end_rotation_extremes(a.combinations, e, false, d.credits_lower_bound);
+        const auto strength = end_rotation_extremes(a.combinations, e, true, d.credits_lower_bound);
         // The demand on the gap is the relative rotation of beam end and support.
         // The support's own rotation closes one side of the gap whatever the
         // beam does, and its sense is not given (a magnitude): it is added to
         // the demand of both senses, even where the beam itself turns only one
-        // way (docs/method/checks.md).
-        d.demand_sagging = all.sagging + j.support_rotation;
-        d.demand_hogging = all.hogging + j.support_rotation;
+        // way (docs/method/checks.md). The free slip likewise.
+        const double extra = j.support_rotation + d.free_slip;
+        d.demand_sagging = all.sagging + extra;
+        d.demand_hogging = all.hogging + extra;
         d.demand_combination = all.sagging >= all.hogging ? all.sagging_combination : all.hogging_combination;
-        d.strength_demand_sagging = strength.sagging + j.support_rotation;
-        d.strength_demand_hogging = strength.hogging + j.support_rotation;
+        d.strength_demand_sagging = strength.sagging + extra;
+        d.strength_demand_hogging = strength.hogging + extra;
         d.strength_combination =
             strength.sagging >= strength.hogging ? strength.sagging_combination : strength.hogging_combination;
         d.gap = check_gap(*j.detail, b.sec, rotation_demand{d.demand_sagging, d.demand_hogging}, find_min_gap);
@@ -574,11 +589,14 @@ void assess_details(const project& p, const beam& b, beam_assessment& a, bool fi
             const joint& j = b.at(k);
             const auto& jk = k == beam_end::start ? a.start : a.end;
             closing_joint& c = cj[k == beam_end::start ? 0 : 1];
-            c.before = j.range.min;
+            // Before closure each joint has the stiffness its gap check credits:
+            // its lower bound where declared dependable, else none (a pin).
+            c.before = j.dependable_lower_bound ? j.range.min : stiffness::pinned();
             c.contact = j.contact_stiffness;
             if (jk.detail) {
-                c.closure_sagging = beam_closure(jk.detail->gap.sagging.closing, j.support_rotation);
-                c.closure_hogging = beam_closure(jk.detail->gap.hogging.closing, j.support_rotation);
+                const double used = j.support_rotation + jk.detail->free_slip;
+                c.closure_sagging = beam_closure(jk.detail->gap.sagging.closing, used);
+                c.closure_hogging = beam_closure(jk.detail->gap.hogging.closing, used);
             }
         }
         closure_consequence cc;
@@ -628,11 +646,19 @@ check gap_closure_check(const project& p, const beam& b, const joint_assessment&
     const std::string gaps = "worst-case gap " + fmt(d.gap.worst_case_gap, dims::length) + " (" +
                              fmt(d.gap.gap, dims::length) + " as detailed less " +
                              fmt(d.gap.gap_tolerance, dims::length) + " tolerance)";
-    const bool support_alone = j.support_rotation > 0 && !(*c.value > j.support_rotation);
+    const double extra = j.support_rotation + d.free_slip;
+    const bool support_alone = extra > 0 && !(*c.value > extra);
+    std::string included;
+    if (j.support_rotation > 0) included += "support rotation " + fmt(j.support_rotation, dims::angle);
+    if (d.free_slip > 0) included += (included.empty() ? "" : ", ") + std::string("free slip ") + fmt(d.free_slip, dims::angle);
+    const std::string basis = d.credits_lower_bound
+                                  ? "the beam's rotation at the joints' lower-bound stiffness (declared dependable)"
+                                  : "the pinned beam's rotation (no joint stiffness credited: bolt slip may leave the "
+                                    "joint free to turn; declare dependable_lower_bound to credit the lower bound)";
     const std::string demand =
         std::string(sag ? "sagging" : "hogging") + " rotation demand " + fmt(*c.value, dims::angle) +
-        (support_alone ? " (the support's own rotation alone: the beam end does not turn this way)"
-                       : (j.support_rotation > 0 ? " (incl. support rotation " + fmt(j.support_rotation, dims::angle) + ")" : "") +
+        (support_alone ? " (the support's own rotation and free slip alone: the beam end does not turn this way)"
+                       : " (" + basis + (included.empty() ? "" : ", plus " + included) + ")" +
                              ", combination " + d.demand_combination);
     const std::string closure = "closure rotation " + closure_text(sc.closing.rotation, fmt) + " (" + where + ")";
     const std::string min_gap = d.gap.min_gap_required
@@ -659,8 +685,8 @@ check gap_closure_check(const project& p, const beam& b, const joint_assessment&
                                  : "turning beyond its closure rotation " + fmt(cc.closure_rotation, dims::angle) +
                                        " against the contact stiffness " +
                                        fmt(j.contact_stiffness.value(), dims::rotational_stiffness);
-    const std::string effect = "Once closed, the beam end bears on the support, " + held + "; solved with both joints at "
-                               "their lower-bound stiffness, the joint takes " + fmt(M, dims::moment) + " under " +
+    const std::string effect = "Once closed, the beam end bears on the support, " + held + "; solved with each joint "
+                               "at the stiffness its gap check credits, the joint takes " + fmt(M, dims::moment) + " under " +
                                cc.combination + ", a bearing force of about " + fmt(cc.contact_force, dims::force) +
                                " (frictionless, normal to the contact, arm " + fmt(cc.lever_arm, dims::length) +
                                " about the centre of rotation), and the same moment goes into the support.";

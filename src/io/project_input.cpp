@@ -193,7 +193,8 @@ struct reader {
         if (!expect_object(j, ptr, problems)) return std::nullopt;
         reject_unknown_keys(j, ptr, {"stiffness", "stiffness_distribution", "moment_resistance", "description", "detail",
                                      "support_rotation",
-                                     "contact_stiffness", "designed_for_closure", "behaviour", "rotation_capacity"},
+                                     "contact_stiffness", "designed_for_closure", "dependable_lower_bound", "behaviour",
+                                     "rotation_capacity"},
                             problems);
         joint out;
         const std::string sp = child(ptr, "stiffness");
@@ -272,6 +273,7 @@ struct reader {
             if (cs) out.contact_stiffness = *cs;
         }
         out.designed_for_closure = bool_field(j, ptr, "designed_for_closure", false, problems).value_or(false);
+        out.dependable_lower_bound = bool_field(j, ptr, "dependable_lower_bound", false, problems).value_or(false);
         if (auto rc = q(j, ptr, "rotation_capacity", dims::angle, false)) {
             if (!(*rc > 0) || *rc > 0.5)
                 problems.add(child(ptr, "rotation_capacity"), "expected a rotation capacity above 0 and at most 0.5 rad, "

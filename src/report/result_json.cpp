@@ -43,6 +43,8 @@ json detail_json(const detail_assessment& d, const joint& j)
     out["rotation_demand_sagging"] = number(d.demand_sagging);
     out["rotation_demand_hogging"] = number(d.demand_hogging);
     out["support_rotation"] = number(j.support_rotation);
+    out["credits_lower_bound"] = d.credits_lower_bound;
+    out["free_slip"] = number(d.free_slip);
     out["governing_sense"] = to_string(d.gap.governing);
     out["critical_point"] = d.gap.critical_point();
     const auto& sc = d.gap.of(d.gap.governing);

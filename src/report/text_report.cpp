@@ -162,6 +162,13 @@ void end_gaps(std::ostringstream& o, const project& p, const beam_assessment& a)
               << pad(demand > 0 ? u.num(sc->clearance_at_demand, dims::length) : std::string("-"), 17)
               << (sc->closing.contact ? sc->closing.contact->description() : std::string("-")) << "\n";
         }
+        o << "    demand basis: " << (d.credits_lower_bound
+                                         ? "rotation at the joints' lower-bound stiffness (declared dependable)"
+                                         : "pinned beam's rotation (no joint stiffness credited at the gap)")
+          << "\n";
+        if (d.free_slip > 0)
+            o << "    demand includes the joint law's free slip " << u.num(d.free_slip, dims::angle) << " "
+              << u.unit(dims::angle) << "\n";
         if (jt.support_rotation > 0)
             o << "    demand includes the support's own rotation " << u.num(jt.support_rotation, dims::angle) << " "
               << u.unit(dims::angle) << " in each sense (its sense is not given)\n";

@@ -143,16 +143,19 @@ TEST_CASE("moment-reversal: gravity alone keeps the moment hogging and passes [R
 namespace {
 // An 8 m IPE 240 on a 1 mm end plate at the start (plate 40 mm below the top,
 // 150 mm deep): the gap closes in sagging under the strength combination.
-std::string project_closing()
+std::string project_closing(bool dependable = false)
 {
-    return R"({"format": "pinproof-project/1", "title": "closure", "standard": "EN1993-1-8", "frame": "braced",
+    std::string text = R"({"format": "pinproof-project/1", "title": "closure", "standard": "EN1993-1-8", "frame": "braced",
       "beams": [{"id": "B", "span": "8 m", "section": "IPE 240",
         "loads": [{"case": "G", "kind": "udl", "w": "12 kN/m"}, {"case": "Q", "kind": "udl", "w": "10 kN/m"}],
         "combinations": [{"name": "ULS", "use": "strength", "factors": {"G": 1.35, "Q": 1.5}}],
         "joints": {"start": {"stiffness": {"min": "100 kN*m/rad", "max": "0.2 EI/L"},
                              "detail": {"type": "end-plate", "plate_thickness": "1 mm", "plate_top": "40 mm",
-                                        "plate_depth": "150 mm", "bolt_rows": 2}},
+                                        "plate_depth": "150 mm", "bolt_rows": 2}DEPENDABLE},
                    "end": {"stiffness": 0}}}]})";
+    const std::string key = "DEPENDABLE";
+    text.replace(text.find(key), key.size(), dependable ? R"(, "dependable_lower_bound": true)" : "");
+    return text;
 }
 }  // namespace
 
@@ -164,25 +167,51 @@ TEST_CASE("state after closure: labelled with each joint's phase - bearing force
     // column face, horizontal (frictionless contact), at the arm |P'.y - C.y|
     // of the turned bottom flange corner P'. End plate: C on the face at the
     // plate's bottom edge, (0, -190) mm; P = (-1, -240) mm at rest.
-    const project p = parse_project(project_closing());
-    const auto a = assess_beam(p, p.beams[0]);
-    REQUIRE(a.start.detail);
-    REQUIRE(a.start.detail->consequence);
-    const auto& cc = *a.start.detail->consequence;
-    CHECK(cc.result.start == joint_phase::closed_sagging);
-    CHECK(cc.result.end == joint_phase::open);
-    CHECK(cc.assumptions.find("held at its closure rotation") != std::string::npos);
-    CHECK(cc.assumptions.find("End joint: open") != std::string::npos);
-    const double t = cc.closure_rotation;
-    const double Cx = 0.0, Cy = -0.190, Px = -0.001, Py = -0.240;
-    const double x = Cx + std::cos(t) * (Px - Cx) - std::sin(t) * (Py - Cy);
-    const double y = Cy + std::sin(t) * (Px - Cx) + std::cos(t) * (Py - Cy);
-    CHECK(x == doctest::Approx(0.0).epsilon(1e-12));  // the corner is on the face
-    const double arm = std::abs(y - Cy);
-    CHECK(cc.lever_arm == doctest::Approx(arm).epsilon(1e-12));
-    const double own = 100e3 * t;
-    CHECK(cc.contact_force * arm == doctest::Approx(std::abs(cc.result.state.moment_start) - own).epsilon(1e-12));
-    // The check's message labels the state.
-    for (const auto& c : a.checks)
-        if (c.id == "gap-closure-start") CHECK(c.message.find("held at its closure rotation") != std::string::npos);
+    for (bool dependable : {false, true}) {
+        CAPTURE(dependable);
+        const project p = parse_project(project_closing(dependable));
+        const auto a = assess_beam(p, p.beams[0]);
+        REQUIRE(a.start.detail);
+        REQUIRE(a.start.detail->consequence);
+        const auto& cc = *a.start.detail->consequence;
+        CHECK(cc.result.start == joint_phase::closed_sagging);
+        CHECK(cc.result.end == joint_phase::open);
+        CHECK(cc.assumptions.find("held at its closure rotation") != std::string::npos);
+        CHECK(cc.assumptions.find("End joint: open") != std::string::npos);
+        const double t = cc.closure_rotation;
+        const double Cx = 0.0, Cy = -0.190, Px = -0.001, Py = -0.240;
+        const double x = Cx + std::cos(t) * (Px - Cx) - std::sin(t) * (Py - Cy);
+        const double y = Cy + std::sin(t) * (Px - Cx) + std::cos(t) * (Py - Cy);
+        CHECK(x == doctest::Approx(0.0).epsilon(1e-12));  // the corner is on the face
+        const double arm = std::abs(y - Cy);
+        CHECK(cc.lever_arm == doctest::Approx(arm).epsilon(1e-12));
+        // The joint's own share: its lower bound only where declared dependable.
+        const double own = dependable ? 100e3 * t : 0.0;
+        CHECK(cc.contact_force * arm == doctest::Approx(std::abs(cc.result.state.moment_start) - own).epsilon(1e-12));
+        // The check's message labels the state.
+        for (const auto& c : a.checks)
+            if (c.id == "gap-closure-start") CHECK(c.message.find("held at its closure rotation") != std::string::npos);
+    }
+}
+
+TEST_CASE("gap demand basis [issue rule]: the pinned rotation unless the lower bound is declared dependable - tol 1e-12")
+{
+    // Pinned 8 m UDL beam: theta = wL^3/(24EI) (handbook closed form);
+    // w = 1.35*12 + 1.5*10 = 31.2 kN/m; EI of the beam as read (IPE 240 from its dimensions).
+    const double w = 31.2e3, L = 8.0;
+    for (bool dependable : {false, true}) {
+        CAPTURE(dependable);
+        const project p = parse_project(project_closing(dependable));
+        const auto a = assess_beam(p, p.beams[0]);
+        const double EI = p.beams[0].EI();
+        REQUIRE(a.start.detail);
+        const auto& d = *a.start.detail;
+        CHECK(d.credits_lower_bound == dependable);
+        const double pinned = w * L * L * L / (24 * EI);
+        if (!dependable) CHECK(d.strength_demand_sagging == doctest::Approx(pinned).epsilon(1e-12));
+        else CHECK(d.strength_demand_sagging < pinned);
+        for (const auto& c : a.checks)
+            if (c.id == "gap-closure-start")
+                CHECK(c.message.find(dependable ? "declared dependable" : "pinned beam's rotation") != std::string::npos);
+    }
 }

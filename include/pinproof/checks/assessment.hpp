@@ -80,7 +80,12 @@ struct closure_consequence {
 
 struct detail_assessment {
     gap_check gap;                        // at the demand below, worst-case gap
-    double demand_sagging = 0;            // rad, all combinations, incl. the support rotation
+    // The demand's basis: the pinned beam's end rotation (the default), or the
+    // rotation at the joints' lower-bound stiffness where this joint declares
+    // that bound dependable (joint::dependable_lower_bound).
+    bool credits_lower_bound = false;
+    double free_slip = 0;                 // rad, the law's free slip, in the demand
+    double demand_sagging = 0;            // rad, all combinations, incl. the support rotation and slip
     double demand_hogging = 0;
     std::string demand_combination;
     double strength_demand_sagging = 0;   // rad, strength combinations only

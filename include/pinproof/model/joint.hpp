@@ -33,6 +33,12 @@ struct joint {
     stiffness contact_stiffness = stiffness::rigid();
     // The joint is declared designed for the moment that develops after closure.
     bool designed_for_closure = false;
+    // The lower bound of the stiffness range is declared dependable at the
+    // gap: only then does the end-gap check credit it. Otherwise bolt slip in
+    // clearance holes may leave the joint free to turn as a pin before it
+    // stiffens, and the gap demand is the pinned beam's rotation (plus the
+    // support's rotation and the law's free slip).
+    bool dependable_lower_bound = false;
     // Its moment-rotation law where given (joints/joint_law.hpp); without it the
     // joint is an uncapped linear spring.
     std::optional<joint_behaviour> behaviour;
