@@ -9,6 +9,7 @@
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/joints/classification.hpp"
 #include "pinproof/joints/nonlinear_analysis.hpp"
+#include "pinproof/report/beam_line_chart.hpp"
 #include "pinproof/report/detail_drawing.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/checks/gap_geometry.hpp"
@@ -188,7 +189,7 @@ private:
     void sweep_chart(const beam& b);
     void beam_lines(const beam& b);
     void beam_line_chart(const beam& b, const combination& c, beam_end e);
-    void law_beam_line_chart(const beam& b, const combination& c, beam_end e);
+    void law_beam_line_chart(const beam& b, beam_end e);
     void gap_drawings(const beam& b, const beam_assessment& ba);
     void checks(const beam_assessment& ba);
     void verdict(const beam_assessment& ba);
@@ -490,7 +491,8 @@ void report_writer::sweep_chart(const beam& b)
                ", AISC 360 boundaries 2 and 20.");
 }
 
-// The beam lines for the first strength combination (else the first).
+// The beam lines: of the first strength combination (else the first) for a
+// linear joint, of every strength combination for a joint with a law.
 void report_writer::beam_lines(const beam& b)
 {
     const combination* c = nullptr;
@@ -498,85 +500,29 @@ void report_writer::beam_lines(const beam& b)
         if (!c && x.use == limit_state::strength) c = &x;
     if (!c && !b.combinations.empty()) c = &b.combinations.front();
     if (c) {
-        o_ << "<h3>Beam lines, combination " << esc(c->name) << "</h3>\n";
-        for (beam_end e : {beam_end::start, beam_end::end}) beam_line_chart(b, *c, e);
+        o_ << "<h3>Beam lines</h3>\n";
+        for (beam_end e : {beam_end::start, beam_end::end}) {
+            if (b.at(e).behaviour) law_beam_line_chart(b, e);
+            else beam_line_chart(b, *c, e);
+        }
     }
 }
 
-// The beam line of a joint with a moment-rotation law: the curve M(theta) of
-// the law at both bounds of its range, the beam line with the far joint at its
-// lower bound (following its own law, so a curve where that joint has one), and
-// the analysed states where they meet.
-void report_writer::law_beam_line_chart(const beam& b, const combination& c, beam_end e)
+// The beam lines of a joint with a moment-rotation law, every strength
+// combination in one chart (report/beam_line_chart.hpp).
+void report_writer::law_beam_line_chart(const beam& b, beam_end e)
 {
-    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c));
-    const bool start = e == beam_end::start;
-    const int j = start ? 0 : 1;
-    const joint& here = b.at(e);
-    const joint& far_joint = b.at(start ? beam_end::end : beam_end::start);
-    const nonlinear_end far = end_for(far_joint, far_joint.range.min);
-    const dimension md = dims::moment;
-    const nonlinear_solution rigid = start ? solve_nonlinear(model, nonlinear_end::rigid(), far)
-                                           : solve_nonlinear(model, far, nonlinear_end::rigid());
-    const double mf = start ? rigid.state.moment_start : rigid.state.moment_end;
-    const double th_s = beam_line_rotation(model, j, 0.0, far);
-    const std::string end = to_string(e);
-    if (!(mf > 0) || !(th_s > 0)) {
-        o_ << "<p>Beam line, " << end << " end: the combination bends no hogging moment into this joint, so there "
-           << "is no beam line to draw.</p>\n";
+    const auto chart = joint_law_beam_lines(p_, b, e);
+    if (!chart) {
+        o_ << "<p>Beam line, " << to_string(e) << " end: no strength combination bends hogging moment into this "
+           << "joint, so there is no beam line to draw.</p>\n";
         return;
     }
-    line_chart ch;
-    ch.title = "Beam " + b.id + ", " + c.name + ": beam line at the " + end + " joint (" +
-               to_string(here.behaviour->law) + " law)";
-    ch.x.label = "end rotation (mrad)";
-    ch.y.label = "end moment (" + u_.sym(md) + "), hogging +";
-    ch.width = 760;
-    ch.height = 400;
-    chart_series line{"beam line", {}, chart_colour::beam_line, false};
-    for (int i = 0; i <= 60; ++i) {
-        const double m = mf * i / 60.0;
-        line.points.emplace_back(beam_line_rotation(model, j, m, far) * 1e3, u_.in(m, md));
-    }
-    std::sort(line.points.begin(), line.points.end());
-    ch.series.push_back(line);
-    const auto curve = [&](stiffness s, const std::string& name, const char* colour) {
-        const nonlinear_end n = end_for(here, s);
-        chart_series cs{name + " (" + u_.stiff(s) + ")", {}, colour, true};
-        for (int i = 0; i <= 80; ++i) {
-            const double th = th_s * i / 80.0;
-            cs.points.emplace_back(th * 1e3, u_.in(n.law ? n.law->moment(th) : 0.0, md));
-        }
-        ch.series.push_back(cs);
-        const nonlinear_solution at = start ? solve_nonlinear(model, n, far) : solve_nonlinear(model, far, n);
-        const double x = (start ? at.state.rotation_start : at.state.rotation_end) * 1e3;
-        const double m = start ? at.state.moment_start : at.state.moment_end;
-        chart_series pt{name + " on the beam line: " + format_number(x, 4) + " mrad, " + u_.q(m, md),
-                        {{x, u_.in(m, md)}},
-                        colour,
-                        false};
-        pt.marks_only = true;
-        ch.series.push_back(pt);
-    };
-    curve(here.range.min, "law at S min", chart_colour::range_lower);
-    curve(here.range.max, "law at S max", chart_colour::range_upper);
-    figure("beam-line", to_svg(ch),
-           "Beam line at the " + end + " joint, combination " + c.name + ": the end moment against the end rotation "
-               "with the far joint at its lower bound " + u_.stiff(far_joint.range.min) +
-               (far_joint.behaviour ? " following its own law (so the line is curved)" : "") + ", from M_F = " +
-               u_.q(mf, md) + " (this joint rigid) to theta_s = " + format_number(th_s * 1e3, 4) +
-               " mrad (this joint pinned); the joint's " + to_string(here.behaviour->law) +
-               " law at the bounds of its stiffness range" +
-               (here.moment_resistance ? ", capped at its moment resistance " + u_.q(*here.moment_resistance, md) : "") +
-               "; the marked points are the analysed states.");
+    figure("beam-line", to_svg(chart->chart), chart->caption);
 }
 
 void report_writer::beam_line_chart(const beam& b, const combination& c, beam_end e)
 {
-    if (b.at(e).behaviour) {
-        law_beam_line_chart(b, c, e);
-        return;
-    }
     const beam_line l = beam_line_of(b, c, e);
     const std::string end = to_string(e);
     if (l.fixed_moment == 0.0 || l.pinned_rotation == 0.0) {

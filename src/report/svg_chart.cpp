@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
+#include <cstdlib>
 #include <sstream>
 #include <string>
 #include <tuple>
@@ -279,7 +280,7 @@ void chart_drawing::open_document()
       << "\" viewBox=\"0 0 " << num(c.width) << " " << num(height) << "\" font-family=\"sans-serif\" font-size=\""
       << font << "\">\n";
     o << "<rect x=\"0\" y=\"0\" width=\"" << num(c.width) << "\" height=\"" << num(height) << "\" fill=\"white\"/>\n";
-    o << "<defs><clipPath id=\"plot-area\"><rect x=\"" << num(left) << "\" y=\"" << num(top) << "\" width=\""
+    o << "<defs><clipPath id=\"" << c.id_prefix << "plot-area\"><rect x=\"" << num(left) << "\" y=\"" << num(top) << "\" width=\""
       << num(plot_w) << "\" height=\"" << num(plot_h) << "\"/></clipPath></defs>\n";
     if (!c.title.empty())
         o << "<text x=\"" << num(c.width / 2) << "\" y=\"22\" text-anchor=\"middle\" font-size=\"15\" font-weight=\"bold\">"
@@ -348,7 +349,7 @@ void chart_drawing::markers()
 // Series, clipped to the plot area.
 void chart_drawing::series()
 {
-    o << "<g clip-path=\"url(#plot-area)\" fill=\"none\" stroke-width=\"2\">\n";
+    o << "<g clip-path=\"url(#" << c.id_prefix << "plot-area)\" fill=\"none\" stroke-width=\"2\">\n";
     std::size_t colour_index = 0;
     for (const auto& s : c.series) {
         const std::string col = s.colour.empty() ? palette[colour_index++ % 10] : s.colour;
@@ -400,5 +401,29 @@ void chart_drawing::legend()
 }  // namespace
 
 std::string to_svg(const line_chart& c) { return chart_drawing(c).write(); }
+
+std::string to_svg(const std::vector<line_chart>& charts)
+{
+    if (charts.empty()) throw internal_error("no chart to draw");
+    // Each chart is drawn whole, then nested as an <svg> element at its offset
+    // (SVG 1.1 7.9: a nested svg establishes its own viewport).
+    const std::string root = "<svg xmlns=\"http://www.w3.org/2000/svg\" ";
+    std::string body;
+    double y = 0, width = 0;
+    for (std::size_t i = 0; i < charts.size(); ++i) {
+        line_chart c = charts[i];
+        c.id_prefix = "c" + std::to_string(i) + "-";
+        std::string one = chart_drawing(c).write();
+        if (one.compare(0, root.size(), root) != 0) throw internal_error("a chart does not start with its svg element");
+        const std::size_t h = one.find(" height=\"");
+        const double height = std::strtod(one.c_str() + h + 9, nullptr);
+        one.replace(0, root.size(), "<svg x=\"0\" y=\"" + num(y) + "\" ");
+        body += one;
+        y += height;
+        width = std::max(width, c.width);
+    }
+    return root + "width=\"" + num(width) + "\" height=\"" + num(y) + "\" viewBox=\"0 0 " + num(width) + " " +
+           num(y) + "\">\n" + body + "</svg>\n";
+}
 
 }  // namespace pinproof

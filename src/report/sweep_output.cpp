@@ -8,6 +8,7 @@
 #include "pinproof/core/csv_cell.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/model/result_fields.hpp"
+#include "pinproof/report/beam_line_chart.hpp"
 #include "pinproof/report/svg_chart.hpp"
 
 namespace pinproof {
@@ -122,7 +123,12 @@ std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
         band(b.start, "stiffness range, start joint", chart_colour::range_band);
         band(b.end, "stiffness range, end joint", chart_colour::other_band);
     }
-    return to_svg(ch);
+    // Joints that follow a law: their curves, the beam lines and the working
+    // points below the sweep chart, as in the report.
+    std::vector<line_chart> charts{ch};
+    for (beam_end e : {beam_end::start, beam_end::end})
+        if (auto law = joint_law_beam_lines(p, b, e)) charts.push_back(std::move(law->chart));
+    return charts.size() == 1 ? to_svg(ch) : to_svg(charts);
 }
 
 nlohmann::json thresholds_json(const std::vector<threshold>& ts, const std::string& path)

@@ -96,3 +96,28 @@ TEST_CASE("marked points (common practice - no source): a diamond of fixed pixel
     CHECK(std::regex_search(s, diamond));
     CHECK_FALSE(std::regex_search(s, std::regex("<line [^>]*stroke=\"#d62728\"")));
 }
+
+TEST_CASE("stacked charts [SVG 1.1 7.9]: nested viewports one below the other - ids unique per chart - exact")
+{
+    line_chart a;
+    a.title = "first";
+    a.x = {"x", false, 0.0, 1.0};
+    a.y = {"y", false, 0.0, 1.0};
+    a.series.push_back({"s", {{0, 0}, {1, 1}}, "#000000", false});
+    a.width = 700;
+    a.height = 400;
+    line_chart b = a;
+    b.title = "second";
+    b.width = 760;
+    const std::string svg = to_svg(std::vector<line_chart>{a, b});
+    // One root, as wide as the widest, as high as both.
+    CHECK(svg.rfind("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"760.00\" height=\"800.00\"", 0) == 0);
+    CHECK(svg.find("<svg x=\"0\" y=\"0.00\" width=\"700.00\"") != std::string::npos);
+    CHECK(svg.find("<svg x=\"0\" y=\"400.00\" width=\"760.00\"") != std::string::npos);
+    // Each chart clips to its own plot area.
+    CHECK(svg.find("id=\"c0-plot-area\"") != std::string::npos);
+    CHECK(svg.find("id=\"c1-plot-area\"") != std::string::npos);
+    CHECK(svg.find("url(#c1-plot-area)") != std::string::npos);
+    CHECK(svg.find("id=\"plot-area\"") == std::string::npos);
+    CHECK_THROWS_AS(to_svg(std::vector<line_chart>{}), internal_error);
+}

@@ -63,6 +63,9 @@ struct line_chart {
     std::vector<chart_marker> markers;
     std::vector<chart_band> bands;
     double width = 960, height = 600;  // px, the whole picture
+    // Prefix of the ids in the drawing, so that charts sharing one document
+    // never share a clip path.
+    std::string id_prefix;
 };
 
 // Tick values covering [lo, hi]: multiples of 1, 2 or 5 times a power of ten
@@ -74,5 +77,8 @@ std::vector<double> nice_ticks(double lo, double hi, bool log);
 std::string tick_label(double v);
 
 std::string to_svg(const line_chart& chart);
+
+// Charts one below the other in one SVG document, as wide as the widest.
+std::string to_svg(const std::vector<line_chart>& charts);
 
 }  // namespace pinproof
