@@ -219,6 +219,13 @@ double joint_law::tangent(double rotation) const
 {
     const double a = std::abs(rotation) - slip_;
     if (a < 0) return 0;
+    if (kind_ == joint_law_kind::ec3_curve && k_ * a > 2.0 / 3.0 * b_) {
+        // One evaluation of the curve serves the cap test and the slope
+        // (uncapped_slope would evaluate it again).
+        const double m = uncapped(a);
+        if (cap_ && m >= *cap_) return 0;
+        return m / ((1.0 + a_) * a);
+    }
     if (cap_ && uncapped(a) >= *cap_) return 0;
     return uncapped_slope(a);
 }

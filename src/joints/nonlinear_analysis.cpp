@@ -33,11 +33,23 @@ struct end_equation {
         const joint_law& law = *end.law;
         const double bound = law.moment(c);
         double lo = std::min(0.0, bound), hi = std::max(0.0, bound);
+        // g(m) = m - M(c - F_jj m) rises strictly (g' = 1 + F_jj M' >= 1):
+        // Newton steps, kept inside the bracket [lo, hi] and replaced by a
+        // bisection wherever they would leave it (a safeguarded Newton
+        // method, e.g. Press et al., Numerical Recipes, 9.4 "rtsafe").
+        double m = 0.5 * (lo + hi);
         for (int i = 0; i < 200 && hi - lo > 1e-15 * std::max(std::abs(lo), std::abs(hi)); ++i) {
-            const double mid = 0.5 * (lo + hi);
-            (mid - law.moment(c - F_jj * mid) < 0 ? lo : hi) = mid;
+            const double theta = c - F_jj * m;
+            const double g = m - law.moment(theta);
+            if (g == 0) return m;
+            (g < 0 ? lo : hi) = m;
+            const double dg = 1.0 + F_jj * law.tangent(theta);
+            const double next = m - g / dg;
+            const bool inside = next > lo && next < hi;
+            if (inside && std::abs(next - m) <= 1e-16 * std::abs(m)) return next;
+            m = inside ? next : 0.5 * (lo + hi);
         }
-        return 0.5 * (lo + hi);
+        return m;
     }
 
     // Residual m_j - solve(c) written for Newton: the law's form
@@ -201,7 +213,10 @@ nonlinear_solution solve_nonlinear(const beam_model& model, const nonlinear_end&
                 const double mid = 0.5 * (lo + hi);
                 moments probe = mm;
                 int ignored = 0;
-                if (!sys.gauss_seidel(mid, probe, tol, ignored)) break;
+                if (!sys.newton(mid, probe, tol, ignored)) {
+                    probe = mm;
+                    if (!sys.gauss_seidel(mid, probe, tol, ignored)) break;
+                }
                 if (at_cap(ends[j], probe[j])) {
                     hi = mid;
                 } else {
