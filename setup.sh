@@ -30,7 +30,13 @@ if [ ${#missing[@]} -gt 0 ]; then
 fi
 
 cmake -S . -B "$build" -DCMAKE_BUILD_TYPE=Release >/dev/null
-cmake --build "$build" -j"$(nproc)"
+if [ "$mode" = run ]; then
+  # The program alone (with its man page and shell completion): the tests
+  # and the benchmark are built by `bash setup.sh test`.
+  cmake --build "$build" --target pinproof -j"$(nproc)"
+else
+  cmake --build "$build" -j"$(nproc)"
+fi
 
 case "$mode" in
   run)

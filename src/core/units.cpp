@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <charconv>
 #include <cmath>
+#include <optional>
 #include <cstdio>
 #include <cstdlib>
 #include <string>
@@ -181,6 +182,7 @@ private:
             }
         }
         std::string_view token = text_.substr(start, pos_ - start);
+        if (const auto f = fraction(token)) return *f;
         std::string_view digits_part = token[0] == '+' ? token.substr(1) : token;
         double value = 0.0;
         const auto [end, ec] =
@@ -190,6 +192,65 @@ private:
         if (ec != std::errc() || end != digits_part.data() + digits_part.size())
             fail(quoted(text_) + " is not a number followed by a unit");
         return value;
+    }
+
+    // A whole number of digits at [from, pos_) as a double; false if none.
+    bool whole_number(std::size_t from, double& value) const
+    {
+        if (from >= pos_) return false;
+        for (std::size_t i = from; i < pos_; ++i)
+            if (!is_digit(text_[i])) return false;
+        const auto r = std::from_chars(text_.data() + from, text_.data() + pos_, value);
+        return r.ec == std::errc() && std::isfinite(value);
+    }
+
+    // US practice writes inches as fractions: "13/16 in", "1-1/2 in" or
+    // "1 1/2 in" (a whole number, a hyphen or a space, then a fraction).
+    // Called after a whole number token; returns its value where a fraction
+    // follows, with the position moved past it.
+    std::optional<double> fraction(std::string_view token)
+    {
+        const bool negative = token[0] == '-';
+        const std::size_t whole_start = pos_ - token.size() + ((token[0] == '+' || token[0] == '-') ? 1 : 0);
+        double whole = 0;
+        if (!whole_number(whole_start, whole)) return std::nullopt;
+        const std::size_t after_whole = pos_;
+        const auto read_fraction = [&](std::size_t from, double& num, double& den) {
+            pos_ = from;
+            const std::size_t n0 = pos_;
+            while (is_digit(peek())) ++pos_;
+            if (!whole_number(n0, num) || peek() != '/' || !is_digit(peek(1))) return false;
+            ++pos_;
+            const std::size_t d0 = pos_;
+            while (is_digit(peek())) ++pos_;
+            if (!whole_number(d0, den)) return false;
+            if (den == 0) fail("in " + quoted(text_) + ": a fraction with denominator 0");
+            if (peek() == '.' || peek() == '/' || is_digit(peek()))
+                fail("in " + quoted(text_) + ": expected a fraction of whole numbers such as 13/16, found " +
+                     quoted(text_.substr(n0)));
+            return true;
+        };
+        double num = 0, den = 1;
+        // "13/16": the whole number is the numerator.
+        if (peek() == '/' && is_digit(peek(1))) {
+            if (read_fraction(whole_start, num, den)) return (negative ? -1.0 : 1.0) * num / den;
+            pos_ = after_whole;
+            return std::nullopt;
+        }
+        // "1-1/2" or "1 1/2": a whole number and a proper fraction.
+        std::size_t next = pos_;
+        if (peek() == '-') ++next;
+        else
+            while (next < text_.size() && (text_[next] == ' ' || text_[next] == '\t')) ++next;
+        if (next == pos_ || next >= text_.size() || !is_digit(text_[next])) return std::nullopt;
+        if (read_fraction(next, num, den)) {
+            if (!(num < den))
+                fail("in " + quoted(text_) + ": expected a proper fraction after the whole number (as in 1-1/2), "
+                     "found " + quoted(text_.substr(next, pos_ - next)));
+            return (negative ? -1.0 : 1.0) * (whole + num / den);
+        }
+        pos_ = after_whole;
+        return std::nullopt;
     }
 
     // expression := term { ('*' | '.' | '·' | '⋅' | '/') term }, left-associative

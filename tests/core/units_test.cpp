@@ -377,3 +377,41 @@ TEST_CASE("format_number: values that agree to 1e-9 print the same - round once 
     }
     CHECK(differ == 0);
 }
+
+TEST_CASE("fractional inches [YP59] [common practice - no source]: 13/16 in - 1-1/2 in - 1 1/2 in (1e-15 relative)")
+{
+    // US drawings write fractions of an inch; in = 0.0254 m exactly [YP59].
+    struct row {
+        const char* text;
+        double inches;
+    };
+    for (const row& r : {row{"13/16 in", 13.0 / 16.0}, row{"1-1/2 in", 1.5}, row{"1 1/2 in", 1.5},
+                         row{"3/4in", 0.75}, row{"-1-1/4 in", -1.25}, row{"2-3/8 in", 2.375}, row{"5/8 in", 0.625}}) {
+        CAPTURE(r.text);
+        const quantity q = parse_quantity(r.text);
+        CHECK(q.dim == dims::length);
+        CHECK(q.value == doctest::Approx(r.inches * 0.0254).epsilon(1e-15));
+        CHECK(q.system == unit_system::us_customary);
+    }
+    // Not fractions: units keep their meaning.
+    CHECK(parse_quantity("20 kN/m").dim == dims::line_load);
+    CHECK(parse_quantity("6 m").value == 6.0);
+}
+
+TEST_CASE("malformed fractions are refused with the reason [project rules]")
+{
+    for (const char* text : {"1/0 in", "1-3/2 in", "1.5/2 in", "1/2/3 in", "1/2.5 in"}) {
+        CAPTURE(text);
+        CHECK_THROWS_AS(parse_quantity(text), std::invalid_argument);
+    }
+    try {
+        parse_quantity("1/0 in");
+    } catch (const std::invalid_argument& e) {
+        CHECK(std::string(e.what()).find("denominator 0") != std::string::npos);
+    }
+    try {
+        parse_quantity("1-3/2 in");
+    } catch (const std::invalid_argument& e) {
+        CHECK(std::string(e.what()).find("proper fraction") != std::string::npos);
+    }
+}
