@@ -83,6 +83,25 @@ void summarise(batch_row& row, const beam_assessment& a)
     row.rotation_end = check_value(a, "rotation-demand-end");
     if (a.start.detail) row.closure_rotation_start = a.start.detail->gap.sagging.closing.rotation;
     if (a.end.detail) row.closure_rotation_end = a.end.detail->gap.sagging.closing.rotation;
+    for (const auto& c : a.combinations) {
+        if (c.comb.use != limit_state::strength) continue;
+        const auto largest = [&](double beam_state::*member, std::optional<double>& out) {
+            const auto& r = c.envelope.of(member);
+            const double v = std::max(std::abs(r.min), std::abs(r.max));
+            if (!out || v > *out) out = v;
+        };
+        largest(&beam_state::reaction_start, row.reaction_start);
+        largest(&beam_state::reaction_end, row.reaction_end);
+    }
+    for (const auto& c : a.checks)
+        if (c.status == check_status::fail) row.failed_checks.push_back(c.id);
+}
+
+std::string joined(const std::vector<std::string>& ids)
+{
+    std::string out;
+    for (const auto& id : ids) out += (out.empty() ? "" : " ") + id;
+    return out;
 }
 
 json row_json(const batch_row& row, const beam_assessment* a)
@@ -105,6 +124,9 @@ json row_json(const batch_row& row, const beam_assessment* a)
     out["rotation_end"] = number_or_null(row.rotation_end);
     out["closure_rotation_start"] = number_or_null(row.closure_rotation_start);
     out["closure_rotation_end"] = number_or_null(row.closure_rotation_end);
+    out["reaction_start"] = number_or_null(row.reaction_start);
+    out["reaction_end"] = number_or_null(row.reaction_end);
+    out["failed_checks"] = row.failed_checks;
     if (a) out["result"] = to_json(*a);
     return out;
 }
@@ -115,6 +137,7 @@ void refuse(batch_row& row, std::vector<input_problem> problems)
     row.problems = std::move(problems);
     row.governing_check.clear();
     row.worst_ratio.reset();
+    row.failed_checks.clear();
     row.message.clear();
     for (const auto& p : row.problems) row.message += (row.message.empty() ? "" : "; ") + p.where + ": " + p.message;
 }
@@ -132,11 +155,30 @@ std::string fixed(const std::optional<double>& v, double scale, int decimals)
     return s;
 }
 
+// The summary CSV's quantities in the schedule's units: factor from SI and
+// the unit's symbol (docs/batch-and-catalogues.md).
+struct csv_units {
+    double force, moment, angle;
+    std::string force_symbol, moment_symbol, angle_symbol;
+    explicit csv_units(unit_system u)
+    {
+        const auto f = display_unit_for(dims::force, u), m = display_unit_for(dims::moment, u),
+                   a = display_unit_for(dims::angle, u);
+        force = 1.0 / f.si_per_unit;
+        moment = 1.0 / m.si_per_unit;
+        angle = 1.0 / a.si_per_unit;
+        force_symbol = f.symbol;
+        moment_symbol = m.symbol;
+        angle_symbol = a.symbol;
+    }
+};
+
 // One row of the summary CSV, with its newline.
-std::string summary_line(const batch_row& row)
+std::string summary_line(const batch_row& row, unit_system units)
 {
+    const csv_units u(units);
     std::string out;
-    out.reserve(256 + row.message.size());
+    out.reserve(320 + row.message.size());
     out += std::to_string(row.line);
     out += ',';
     out += csv_cell(row.id);
@@ -146,18 +188,20 @@ std::string summary_line(const batch_row& row)
     out += row.governing_check;
     out += ',';
     out += fixed(row.worst_ratio, 1.0, 4);
+    for (const auto* v : {&row.reaction_start, &row.reaction_end}) {
+        out += ',';
+        out += fixed(*v, u.force, 4);
+    }
+    for (const auto* v : {&row.moment_start, &row.moment_end}) {
+        out += ',';
+        out += fixed(*v, u.moment, 4);
+    }
+    for (const auto* v : {&row.rotation_start, &row.rotation_end, &row.closure_rotation_start, &row.closure_rotation_end}) {
+        out += ',';
+        out += fixed(*v, u.angle, 4);
+    }
     out += ',';
-    out += fixed(row.moment_start, 1e-3, 4);
-    out += ',';
-    out += fixed(row.moment_end, 1e-3, 4);
-    out += ',';
-    out += fixed(row.rotation_start, 1e3, 4);
-    out += ',';
-    out += fixed(row.rotation_end, 1e3, 4);
-    out += ',';
-    out += fixed(row.closure_rotation_start, 1e3, 4);
-    out += ',';
-    out += fixed(row.closure_rotation_end, 1e3, 4);
+    out += csv_cell(joined(row.failed_checks));
     out += ',';
     out += csv_cell(row.message);
     out += '\n';
@@ -183,6 +227,7 @@ batch_row assess_schedule_row(const schedule& s, std::size_t index, const detail
     row.line = s.rows.at(index).line;
     try {
         schedule_row in = read_schedule_row(s, index, catalogue);
+        row.units = in.settings.units == unit_system::us_customary ? unit_system::us_customary : unit_system::si;
         row.line = in.line;
         row.id = in.id;
         if (!in.input) {
@@ -202,7 +247,7 @@ batch_row assess_schedule_row(const schedule& s, std::size_t index, const detail
                       std::string("internal error (a fault of pinproof, not of the input): ") + e.what()}});
     }
     if (options.json && row.verdict == batch_verdict::refused) row.json = row_json(row, nullptr).dump();
-    row.summary_line = summary_line(row);
+    row.summary_line = summary_line(row, row.units);
     return row;
 }
 
@@ -280,6 +325,16 @@ batch_result run_batch(const schedule& s, const detail_catalogue& catalogue, con
     for (auto& t : pool) t.join();
     if (options.progress) options.progress(done.load(), total);
 
+    bool all_us = false;
+    for (const auto& r : out.rows) {
+        if (r.verdict == batch_verdict::refused) continue;
+        if (r.units != unit_system::us_customary) {
+            all_us = false;
+            break;
+        }
+        all_us = true;
+    }
+    out.units = all_us ? unit_system::us_customary : unit_system::si;
     out.cancelled = stopped.load() || done.load() != total;
     out.summary.rows = total;
     for (const auto& r : out.rows) {
@@ -302,12 +357,18 @@ std::string batch_summary_csv(const batch_result& r)
 {
     std::string out;
     out.reserve(r.rows.size() * 160 + 512);
-    out += "# pinproof batch summary: " + batch_counts_text(r.summary) + "\n";
-    out += std::string("# ") + closure_note + "\n";
-    out += "line,id,verdict,governing_check,worst_ratio,moment_start (kN*m),moment_end (kN*m),"
-           "rotation_start (mrad),rotation_end (mrad),closure_rotation_start (mrad),closure_rotation_end (mrad),"
-           "message\n";
-    for (const auto& row : r.rows) out += row.summary_line.empty() ? summary_line(row) : row.summary_line;
+    // The header first, so that a spreadsheet reads it as the header; the
+    // run's counts go to standard error and the JSON result, the meaning of
+    // each column to docs/batch-and-catalogues.md. Units as in the sweep CSV.
+    const csv_units u(r.units);
+    const auto col = [](const std::string& name, const std::string& unit) { return name + " [" + unit + "]"; };
+    out += "line,id,verdict,governing_check," + col("worst_ratio", "1") + "," + col("reaction_start", u.force_symbol) +
+           "," + col("reaction_end", u.force_symbol) + "," + col("moment_start", u.moment_symbol) + "," +
+           col("moment_end", u.moment_symbol) + "," + col("rotation_start", u.angle_symbol) + "," +
+           col("rotation_end", u.angle_symbol) + "," + col("closure_rotation_start", u.angle_symbol) + "," +
+           col("closure_rotation_end", u.angle_symbol) + ",failed_checks,message\n";
+    for (const auto& row : r.rows)
+        out += row.summary_line.empty() || row.units != r.units ? summary_line(row, r.units) : row.summary_line;
     return out;
 }
 

@@ -264,7 +264,7 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
             if (c.status != check_status::not_applicable) curves.emplace_back(c.id, boundary_curve(p, *b, c.id));
 
     std::string csv, svg, json_text;
-    if (!o.csv_out.empty()) csv = sweep_csv(s);
+    if (!o.csv_out.empty()) csv = sweep_csv(s, p.units);
     if (!o.svg_out.empty()) {
         if (o.grid) throw input_error("--svg", "the chart is drawn for a path sweep; leave out --grid for --svg");
         svg = sweep_svg(p, *b, s);

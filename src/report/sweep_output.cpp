@@ -15,26 +15,34 @@ namespace pinproof {
 
 namespace {
 
-std::string si_unit(dimension d)
+// A column's unit in the project's units ("1" for a ratio), and the factor
+// from SI: the same style as the batch CSV ("name [unit]").
+struct column_unit {
+    std::string symbol;
+    double per_si = 1;
+};
+
+column_unit unit_of(dimension d, unit_system u)
 {
-    if (d == dims::force) return "N";
-    if (d == dims::moment) return "N*m";
-    if (d == dims::length) return "m";
-    if (d == dims::angle) return "rad";
-    if (d == dims::rotational_stiffness) return "N*m/rad";
-    if (d == dims::dimensionless) return "1";
-    return describe(d);
+    if (d == dims::dimensionless) return {"1", 1};
+    const display_unit du = display_unit_for(d, u);
+    return {du.symbol.empty() ? std::string("1") : du.symbol, 1.0 / du.si_per_unit};
 }
 
 }  // namespace
 
-std::string sweep_csv(const sweep_result& s)
+std::string sweep_csv(const sweep_result& s, unit_system units)
 {
     std::ostringstream o;
     o.precision(10);
-    o << "stiffness_start [N*m/rad],ratio_start [1],fixity_start [1],stiffness_end [N*m/rad],ratio_end [1],"
-         "fixity_end [1]";
-    for (const auto& f : result_fields()) o << "," << f.key << " [" << si_unit(f.dim) << "]";
+    const column_unit k_unit = unit_of(dims::rotational_stiffness, units);
+    o << "stiffness_start [" << k_unit.symbol << "],ratio_start [1],fixity_start [1],stiffness_end [" << k_unit.symbol
+      << "],ratio_end [1],fixity_end [1]";
+    std::vector<column_unit> field_units;
+    for (const auto& f : result_fields()) {
+        field_units.push_back(unit_of(f.dim, units));
+        o << "," << f.key << " [" << field_units.back().symbol << "]";
+    }
     if (!s.rows.empty())
         for (const auto& c : s.rows.front().checks) o << "," << csv_cell(c.id);
     o << "\n";
@@ -42,15 +50,16 @@ std::string sweep_csv(const sweep_result& s)
         std::ostringstream t;
         t.precision(10);
         if (k.is_rigid()) t << "rigid,";
-        else t << k.value() << "," << k.ratio(s.EI, s.span);
+        else t << k.value() * k_unit.per_si << "," << k.ratio(s.EI, s.span);
         return t.str();
     };
     for (const auto& r : s.rows) {
         o << stiff(r.at.start) << "," << r.fixity_start << "," << stiff(r.at.end) << "," << r.fixity_end;
+        std::size_t i = 0;
         for (const auto& f : result_fields()) {
-            const double v = r.state.*(f.member);
+            const double v = r.state.*(f.member) * field_units[i++].per_si;
             if (!std::isfinite(v)) throw internal_error("a sweep value is not finite");
-            o << "," << v;
+            o << "," << (std::abs(v) < 1e-300 ? 0.0 : v);
         }
         for (const auto& c : r.checks) o << "," << to_string(c.status);
         o << "\n";

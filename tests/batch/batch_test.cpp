@@ -17,6 +17,8 @@
 // run the same arithmetic.
 #include <doctest/doctest.h>
 
+#include <algorithm>
+
 #include "temp_dir.hpp"
 
 #include <nlohmann/json.hpp>
@@ -114,6 +116,13 @@ TEST_CASE("batch: rigid ends attract M = wL^2/12 at 1.2D+1.6L [R8.1 and ASCE7] -
     CHECK(r.verdict == batch_verdict::does_not_hold);
     CHECK(r.governing_check == "stiffness-class-start");
     CHECK_FALSE(r.worst_ratio.has_value());
+    // Every failed check is named, not only the governing one; the reaction is
+    // wL/2 at each end (symmetric, both ends rigid; handbook closed form).
+    CHECK(std::find(r.failed_checks.begin(), r.failed_checks.end(), "stiffness-class-start") != r.failed_checks.end());
+    CHECK(std::find(r.failed_checks.begin(), r.failed_checks.end(), "stiffness-class-end") != r.failed_checks.end());
+    CHECK(close(*r.reaction_start, 13.6e3 * 8.0 / 2, 1e-9));
+    CHECK(close(*r.reaction_end, 13.6e3 * 8.0 / 2, 1e-9));
+    CHECK(r.summary_line.find(",stiffness-class-start stiffness-class-end") != std::string::npos);
 }
 
 TEST_CASE("batch: a schedule beam gives the same checks as the same beam in a project file [PF] - exact")
@@ -178,9 +187,14 @@ TEST_CASE("batch: a bad row is refused and the others are checked [common practi
     CHECK(batch_counts_text(r.summary) == "4 rows: 2 checked (1 passed, 1 failed), 2 refused");
 
     const std::string csv = batch_summary_csv(r);
-    CHECK(csv.find("# pinproof batch summary: 4 rows") == 0);
-    CHECK(csv.find("Closure rotations are the sagging closure") != std::string::npos);
-    CHECK(csv.find("\n3,B2,refused,,,,,,,,,\"line 3, column 2 (span): expected") != std::string::npos);
+    // The header first (a spreadsheet reads the first line as the header),
+    // units in brackets as in the sweep CSV, no comment lines.
+    CHECK(csv.rfind("line,id,verdict,governing_check,worst_ratio [1],reaction_start [kN],reaction_end [kN],"
+                    "moment_start [kN*m],moment_end [kN*m],rotation_start [mrad],rotation_end [mrad],"
+                    "closure_rotation_start [mrad],closure_rotation_end [mrad],failed_checks,message\n",
+                    0) == 0);
+    CHECK(csv.find('#') == std::string::npos);
+    CHECK(csv.find("\n3,B2,refused,,,,,,,,,,,,\"line 3, column 2 (span): expected") != std::string::npos);
     CHECK(csv.find("nan") == std::string::npos);
     CHECK(csv.find("inf") == std::string::npos);
 }

@@ -126,9 +126,13 @@ TEST_CASE("CSV [issue]: header with units - rigid written as text - no nan or in
     sweep_settings s;
     s.points = 4;
     const sweep_result r = sweep_beam(p, p.beams.front(), s);
-    const std::string csv = sweep_csv(r);
-    CHECK(csv.find("stiffness_start [N*m/rad],ratio_start [1],fixity_start [1]") == 0);
-    CHECK(csv.find("moment_start [N*m]") != std::string::npos);
+    const std::string csv = sweep_csv(r, unit_system::si);
+    CHECK(csv.find("stiffness_start [kN*m/rad],ratio_start [1],fixity_start [1]") == 0);
+    CHECK(csv.find("moment_start [kN*m]") != std::string::npos);
+    CHECK(csv.find("rotation_start [mrad]") != std::string::npos);
+    const std::string us = sweep_csv(r, unit_system::us_customary);
+    CHECK(us.find("moment_start [kip*ft]") != std::string::npos);
+    CHECK(us.find("reaction_start [kip]") != std::string::npos);
     CHECK(csv.find(",deflection,") != std::string::npos);
     CHECK(csv.find(",gap-closure-end\n") != std::string::npos);
     CHECK(csv.find("rigid,") != std::string::npos);

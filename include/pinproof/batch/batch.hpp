@@ -41,10 +41,16 @@ struct batch_row {
     // gap of the catalogue entry's geometry; empty where the entry gives no
     // geometry or nothing closes within 90 degrees.
     std::optional<double> closure_rotation_start, closure_rotation_end;
+    // Largest end reaction (N) under the strength combinations over the
+    // stiffness range: what the support and the joint's shear must carry.
+    std::optional<double> reaction_start, reaction_end;
+    // The id of every failed check, in the order of the checks.
+    std::vector<std::string> failed_checks;
     std::vector<input_problem> problems;  // of a refused row
     // The row's line of the summary CSV (batch_summary_csv), with its newline,
-    // formatted by the worker that assessed it.
+    // formatted by the worker that assessed it in the row's units.
     std::string summary_line;
+    unit_system units = unit_system::si;
     std::string json;                     // the row as JSON text, when batch_options::json
 };
 
@@ -71,6 +77,9 @@ struct batch_options {
 
 struct batch_result {
     std::vector<batch_row> rows;  // in input order
+    // The summary CSV's units: US customary when every assessed row is,
+    // else SI (one unit per column).
+    unit_system units = unit_system::si;
     batch_summary summary;
     bool cancelled = false;       // the run was stopped; rows are incomplete
     unsigned workers_asked = 0;   // worker threads wanted (options.jobs, bounded by the rows)

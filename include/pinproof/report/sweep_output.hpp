@@ -11,12 +11,13 @@
 
 namespace pinproof {
 
-// CSV text, SI units given in the header; a rigid stiffness is written
-// "rigid" (its S*L/EI is unbounded and is left empty). Columns:
-//   stiffness_start [N*m/rad], ratio_start [1], fixity_start [1], the same
-//   for the end, reaction_start [N], ..., rotation_end [rad], then one status
-//   column per check id.
-std::string sweep_csv(const sweep_result& s);
+// CSV text in the display units of `units` (kN, kN*m, mm, mrad, kN*m/rad;
+// kip, kip*ft, in, mrad, kip*ft/rad), each header "name [unit]" as in the
+// batch CSV; a rigid stiffness is written "rigid" (its S*L/EI is unbounded
+// and is left empty). Columns: stiffness_start, ratio_start [1],
+// fixity_start [1], the same for the end, reaction_start, ..., rotation_end,
+// then one status column per check id.
+std::string sweep_csv(const sweep_result& s, unit_system units = unit_system::si);
 
 // The chart of a path sweep (svg_chart.hpp): every result normalised by its
 // pinned (reactions, span moment, deflection, rotations) or fixed (end
