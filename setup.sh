@@ -13,6 +13,8 @@ packages=(g++ cmake make libeigen3-dev libboost-math-dev libcli11-dev nlohmann-j
 if [ "$mode" = test ]; then
   # Independent solvers used by some tests (python3-sympy, python3-scipy).
   packages+=(python3 python3-sympy python3-scipy python3-numpy python3-jsonschema)
+  # The report rendered and printed as a user would (report.render, report.print).
+  packages+=(chromium poppler-utils)
   # The fuzz targets of the robustness checks (.ci/run): clang with libFuzzer.
   packages+=(clang libclang-rt-14-dev)
 fi

@@ -569,16 +569,44 @@ struct reader {
 
 }  // namespace
 
+namespace {
+
+// The job block: short texts, each optional (a calc sheet's header fields).
+std::optional<job_info> read_job(const json& j, problem_list& problems)
+{
+    if (!expect_object(j, "/job", problems)) return std::nullopt;
+    reject_unknown_keys(j, "/job", {"number", "title", "made_by", "checked_by", "revision", "date"}, problems);
+    job_info out;
+    const std::pair<const char*, std::string*> fields[] = {
+        {"number", &out.number},         {"title", &out.title},       {"made_by", &out.made_by},
+        {"checked_by", &out.checked_by}, {"revision", &out.revision}, {"date", &out.date}};
+    for (const auto& [key, target] : fields) {
+        auto v = string_field(j, "/job", key, false, problems);
+        if (!v) continue;
+        // A header line holds a short text; a long one would overrun the page.
+        if (v->size() > 120) {
+            problems.add(child("/job", key), "expected a text of at most 120 characters for the sheet header, found " +
+                                                 std::to_string(v->size()) + " characters");
+            continue;
+        }
+        *target = *v;
+    }
+    return out;
+}
+
+}  // namespace
+
 project read_project(const json& doc)
 {
     problem_list problems;
     reader r{problems};
     project out;
     if (!expect_object(doc, "", problems)) problems.throw_if_any();
-    reject_unknown_keys(doc, "", {"format", "title", "standard", "frame", "units", "beams", "$schema"}, problems);
+    reject_unknown_keys(doc, "", {"format", "title", "job", "standard", "frame", "units", "beams", "$schema"}, problems);
     format_field(doc, project_format, problems);
     out.format = project_format;
     out.title = string_field(doc, "", "title", true, problems).value_or("");
+    if (doc.contains("job")) out.job = read_job(doc.at("job"), problems);
     auto standard = choice_field(doc, "", "standard", {"EN1993-1-8", "AISC360"}, true, problems);
     auto frame = choice_field(doc, "", "frame", {"braced", "unbraced"}, true, problems);
     auto units = choice_field(doc, "", "units", {"SI", "US"}, false, problems);

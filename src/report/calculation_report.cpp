@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <cstdio>
 #include <optional>
 #include <sstream>
 #include <utility>
@@ -105,6 +106,24 @@ struct units_view {
 
 std::string esc(const std::string& s) { return html_escape(s); }
 
+// A CSS string literal of a user's text (CSS Syntax Level 3, 4.3.5): quotes,
+// backslashes, angle brackets and control characters as hexadecimal escapes,
+// so that no text can end the string or the style element.
+std::string css_string(const std::string& text)
+{
+    std::string out = "\"";
+    char buf[16];
+    for (unsigned char c : text) {
+        if (c < 0x20 || c == 0x7f || c == '"' || c == '\\' || c == '<' || c == '>' || c == '&') {
+            std::snprintf(buf, sizeof buf, "\\%x ", static_cast<unsigned>(c < 0x20 || c == 0x7f ? 0x20 : c));
+            out += buf;
+        } else {
+            out += static_cast<char>(c);
+        }
+    }
+    return out + "\"";
+}
+
 std::string status_class(check_status s)
 {
     switch (s) {
@@ -190,6 +209,7 @@ private:
     void beam_lines(const beam& b);
     void beam_line_chart(const beam& b, const combination& c, beam_end e);
     void law_beam_line_chart(const beam& b, beam_end e);
+    std::string page_style() const;
     void gap_drawings(const beam& b, const beam_assessment& ba);
     void checks(const beam_assessment& ba);
     void verdict(const beam_assessment& ba);
@@ -211,16 +231,47 @@ void report_writer::figure(const std::string& kind, const std::string& svg, cons
        << "<figcaption>Figure " << figures_ << ". " << esc(caption) << "</figcaption>\n</figure>\n";
 }
 
+// The printed page: A4 (Letter for a project in US units) with margins that
+// leave a 174 mm column on either, and the calc sheet's running header and
+// footer in the page-margin boxes (CSS Paged Media Level 3, 5.3): the job and
+// the calculation's title at the top; who made and checked it, the revision,
+// the date and "Sheet x of y" at the foot.
+std::string report_writer::page_style() const
+{
+    const job_info job = p_.job.value_or(job_info{});
+    const auto joined = [](std::initializer_list<std::string> parts) {
+        std::string out;
+        for (const auto& t : parts)
+            if (!t.empty()) out += (out.empty() ? "" : "  |  ") + t;
+        return out;
+    };
+    const std::string job_line = joined({job.number.empty() ? std::string() : "Job " + job.number, job.title});
+    const std::string calc_line = p_.title.empty() ? std::string("Calculation report") : p_.title;
+    const std::string people = joined({job.made_by.empty() ? std::string() : "Made by " + job.made_by,
+                                       job.checked_by.empty() ? std::string() : "Checked by " + job.checked_by,
+                                       job.revision.empty() ? std::string() : "Rev " + job.revision, job.date});
+    const std::string box = "font-family: 'DejaVu Sans', Arial, sans-serif; font-size: 8pt; color: #333;";
+    std::string css = std::string("@page { size: ") + (p_.units == unit_system::us_customary ? "letter" : "A4") +
+                      "; margin: 16mm 18mm 16mm 18mm;\n";
+    css += "  @top-left { content: " + css_string(job_line.empty() ? calc_line : job_line) + "; " + box +
+           " vertical-align: bottom; }\n";
+    if (!job_line.empty())
+        css += "  @top-right { content: " + css_string(calc_line) + "; " + box + " vertical-align: bottom; }\n";
+    css += "  @bottom-left { content: " +
+           css_string(people.empty() ? "pinproof " + info_.version + " calculation report" : people) + "; " + box +
+           " vertical-align: top; }\n";
+    css += "  @bottom-right { content: \"Sheet \" counter(page) \" of \" counter(pages); " + box +
+           " vertical-align: top; }\n}\n";
+    return css;
+}
+
 void report_writer::head()
 {
     o_ << "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n"
        << "<meta name=\"generator\" content=\"pinproof " << esc(info_.version) << "\">\n"
        << "<title>" << esc(p_.title.empty() ? std::string("pinproof calculation report") : p_.title)
        << " - calculation report</title>\n"
-       // A4 with margins that leave a column also inside a Letter page
-       // (174 mm wide, 255 mm high at most).
-       << "<style>\n"
-          "@page { size: A4; margin: 14mm 18mm 18mm 18mm; }\n"
+       << "<style>\n" << page_style() <<
           "html { font-family: 'DejaVu Sans', 'Liberation Sans', Arial, sans-serif; font-size: 10pt; color: #111; }\n"
           "body { margin: 0 auto; max-width: 174mm; padding: 4mm 0; line-height: 1.35; }\n"
           "h1 { font-size: 17pt; margin: 0 0 3mm 0; }\n"
@@ -240,6 +291,19 @@ void report_writer::head()
           "figure.chart svg { display: block; width: 100%; height: auto; max-width: 100%; }\n"
           "figcaption { font-size: 9pt; color: #333; margin-top: 1mm; }\n"
           "section.beam { break-before: page; page-break-before: always; }\n"
+          // A printed calc sheet: headings stay with what follows them, no row or
+          // figure is split, table headers repeat on each page.
+          "h1, h2, h3, h4 { break-after: avoid-page; page-break-after: avoid; }\n"
+          "tr, figure, .verdict, .caution { break-inside: avoid; page-break-inside: avoid; }\n"
+          "thead { display: table-header-group; }\n"
+          "table.checks td { font-size: 9pt; }\n"
+          "table.checks tbody.check { break-inside: avoid; page-break-inside: avoid; }\n"
+          "table.checks td.status { width: 12mm; }\n"
+          "table.checks td.check-id { font-family: 'DejaVu Sans Mono', monospace; font-size: 8.5pt; white-space: nowrap; "
+          "border-bottom: none; }\n"
+          "table.checks td.value { text-align: right; width: 45%; border-bottom: none; }\n"
+          "table.checks td.reason { border-top: none; color: #222; }\n"
+          ".nw { white-space: nowrap; }\n"
           ".status { font-weight: bold; white-space: nowrap; }\n"
           ".status.fail { color: #b00000; }\n"
           ".status.pass { color: #1b6e20; }\n"
@@ -251,7 +315,13 @@ void report_writer::head()
           ".verdict.pass { border-color: #1b6e20; color: #1b6e20; }\n"
           ".caution { border: 1px solid #8a5a00; background: #fff8e6; padding: 2mm 3mm; margin: 3mm 0; }\n"
           ".note { font-size: 9pt; color: #333; }\n"
-          "@media print { body { padding: 0; } a { color: inherit; text-decoration: none; } }\n"
+          "@media print { body { padding: 0; } a { color: inherit; text-decoration: none; }\n"
+          // On paper a chart needs less height than on a screen: the drawing
+          // keeps its proportions inside the box (the viewBox scales it).
+          "  figure.chart svg { max-height: 78mm; }\n"
+          "  figure.chart[data-chart=sweep] svg { max-height: 105mm; }\n"
+          "  figure.chart[data-chart=gap-detail] svg { max-height: 115mm; }\n"
+          "  figcaption { font-size: 8pt; }\n}\n"
           "</style>\n</head>\n<body>\n";
 }
 
@@ -260,8 +330,16 @@ void report_writer::title_block()
     o_ << "<header>\n<h1>Calculation report: simple-support assumption of beams on semi-rigid joints</h1>\n";
     std::string ids;
     for (const auto& b : a_.beams) ids += (ids.empty() ? "" : ", ") + b.id;
-    o_ << "<table class=\"kv\" id=\"title-block\">\n"
-       << "<tr><th>Project</th><td>" << esc(p_.title) << "</td></tr>\n"
+    o_ << "<table class=\"kv\" id=\"title-block\">\n";
+    if (p_.job) {
+        const job_info& j = *p_.job;
+        const std::pair<const char*, const std::string*> rows[] = {
+            {"Job number", &j.number}, {"Job", &j.title},          {"Made by", &j.made_by},
+            {"Checked by", &j.checked_by}, {"Revision", &j.revision}, {"Revision date", &j.date}};
+        for (const auto& [label, value] : rows)
+            if (!value->empty()) o_ << "<tr><th>" << label << "</th><td>" << esc(*value) << "</td></tr>\n";
+    }
+    o_ << "<tr><th>Project</th><td>" << esc(p_.title) << "</td></tr>\n"
        << "<tr><th>Beams</th><td>" << esc(ids) << "</td></tr>\n"
        << "<tr><th>Date</th><td>" << esc(info_.date) << "</td></tr>\n"
        << "<tr><th>Software</th><td>pinproof " << esc(info_.version) << "</td></tr>\n"
@@ -280,7 +358,7 @@ void report_writer::title_block()
     else
         o_ << "the simple-support (pinned) assumption DOES NOT HOLD for " << a_.beams.size() - holding << " of "
            << a_.beams.size() << " beams.";
-    o_ << "</div>\n<table>\n<tr><th>Beam</th><th>Verdict</th><th>Failed checks</th></tr>\n";
+    o_ << "</div>\n<table>\n<thead><tr><th>Beam</th><th>Verdict</th><th>Failed checks</th></tr></thead>\n";
     for (const auto& b : a_.beams) {
         std::string failed;
         for (const auto& c : b.checks)
@@ -337,7 +415,7 @@ void report_writer::inputs(const beam& b)
        << (b.deflection ? esc(b.deflection->text) + " = " + u_.q(b.deflection->value(b.span), dims::length)
                         : std::string("none given"))
        << "</td></tr>\n</table>\n";
-    o_ << "<h4>Loads (unfactored)</h4>\n<table>\n<tr><th>Case</th><th>Kind</th><th>Value</th><th>Position</th></tr>\n";
+    o_ << "<h4>Loads (unfactored)</h4>\n<table>\n<thead><tr><th>Case</th><th>Kind</th><th>Value</th><th>Position</th></tr></thead>\n";
     for (const auto& l : b.loads) {
         std::string value, where;
         switch (l.kind) {
@@ -361,7 +439,7 @@ void report_writer::inputs(const beam& b)
         o_ << "<tr><td>" << esc(l.load_case) << "</td><td>" << esc(to_string(l.kind)) << "</td><td>" << esc(value)
            << "</td><td>" << esc(where) << "</td></tr>\n";
     }
-    o_ << "</table>\n<h4>Combinations</h4>\n<table>\n<tr><th>Name</th><th>Use</th><th>Factors</th></tr>\n";
+    o_ << "</table>\n<h4>Combinations</h4>\n<table>\n<thead><tr><th>Name</th><th>Use</th><th>Factors</th></tr></thead>\n";
     for (const auto& c : b.combinations)
         o_ << "<tr><td>" << esc(c.name) << "</td><td>" << esc(to_string(c.use)) << "</td><td>"
            << esc(combination_text(c)) << "</td></tr>\n";
@@ -372,9 +450,9 @@ void report_writer::joints(const beam& b, const beam_assessment& ba)
 {
     const bool en = p_.standard == design_standard::en1993_1_8;
     auto ratio = [](const std::optional<double>& r) { return r ? format_number(*r, 3) : std::string("rigid"); };
-    o_ << "<h4>Joints</h4>\n<table>\n<tr><th>End</th><th>S<sub>min</sub> .. S<sub>max</sub></th>"
+    o_ << "<h4>Joints</h4>\n<table>\n<thead><tr><th>End</th><th>S<sub>min</sub> .. S<sub>max</sub></th>"
           "<th>&kappa; = S L / EI</th><th>Fixity r</th><th>Class (lower .. upper bound)</th>"
-          "<th>Moment resistance</th></tr>\n";
+          "<th>Moment resistance</th></tr></thead>\n";
     for (const auto* j : {&ba.start, &ba.end}) {
         const auto& mr = b.at(j->end).moment_resistance;
         o_ << "<tr><td>" << to_string(j->end) << "</td><td>" << esc(u_.stiff(j->range.min)) << " .. "
@@ -400,8 +478,8 @@ void report_writer::combination_block(const beam& b, const combination_result& r
 // Each result with ideal pins, over the stiffness range, and with fixed ends.
 void report_writer::results_table(const combination_result& r)
 {
-    o_ << "<table>\n<tr><th>Result</th><th>Unit</th><th>Pinned</th><th>Range min</th><th>Range max</th>"
-          "<th>Fixed</th></tr>\n";
+    o_ << "<table>\n<thead><tr><th>Result</th><th>Unit</th><th>Pinned</th><th>Range min</th><th>Range max</th>"
+          "<th>Fixed</th></tr></thead>\n";
     const auto& f = result_fields();
     for (std::size_t i = 0; i < f.size(); ++i) {
         const bool position = f[i].member == &beam_state::max_sagging_at || f[i].member == &beam_state::max_hogging_at ||
@@ -587,18 +665,23 @@ void report_writer::gap_drawings(const beam& b, const beam_assessment& ba)
 
 void report_writer::checks(const beam_assessment& ba)
 {
-    o_ << "<h3>Checks</h3>\n<table class=\"checks\">\n<tr><th>Status</th><th>Check</th><th>Value / limit</th>"
-          "<th>Reason</th></tr>\n";
+    o_ << "<h3>Checks</h3>\n<table class=\"checks\">\n"
+          "<thead><tr><th>Status</th><th>Check (reason below)</th><th>Value / limit</th></tr></thead>\n";
     for (const auto& c : ba.checks) {
         std::string vl;
         if (c.value) {
             const bool ratio = c.dim == dims::dimensionless;
-            vl = ratio ? format_number(*c.value, 3) : u_.q(*c.value, c.dim);
-            if (c.limit) vl += " / " + (ratio ? format_number(*c.limit, 3) : u_.q(*c.limit, c.dim));
+            // Each quantity kept whole; the line may break at the slash.
+            const auto whole = [](const std::string& t) { return "<span class=\"nw\">" + esc(t) + "</span>"; };
+            vl = whole(ratio ? format_number(*c.value, 3) : u_.q(*c.value, c.dim));
+            if (c.limit) vl += " / " + whole(ratio ? format_number(*c.limit, 3) : u_.q(*c.limit, c.dim));
         }
-        o_ << "<tr class=\"" << status_class(c.status) << "\"><td class=\"status " << status_class(c.status) << "\">"
-           << status_label(c.status) << "</td><td>" << esc(c.id) << "</td><td class=\"num\">" << esc(vl) << "</td><td>"
-           << esc(c.message) << "</td></tr>\n";
+        // Two rows per check, kept together on the page: status, id and
+        // numbers, then the reason across the full width of the sheet.
+        o_ << "<tbody class=\"check\"><tr class=\"" << status_class(c.status) << "\"><td class=\"status "
+           << status_class(c.status) << "\" rowspan=\"2\">" << status_label(c.status) << "</td><td class=\"check-id\">"
+           << esc(c.id) << "</td><td class=\"value\">" << vl << "</td></tr>\n<tr><td class=\"reason\" colspan=\"2\">"
+           << esc(c.message) << "</td></tr></tbody>\n";
     }
     o_ << "</table>\n<p class=\"note\">Statuses: pass; FAIL (the assumption does not hold); warn (to pass on or to "
           "look at, does not change the verdict); n/a (not applicable, the reason is given).</p>\n";

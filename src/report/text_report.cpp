@@ -321,6 +321,16 @@ std::string text_report(const project_assessment& a, const std::string& version)
     const project& p = *a.input;
     std::ostringstream o;
     o << "pinproof " << version << ": check of the simple-support assumption for beams on semi-rigid joints\n";
+    if (p.job) {
+        const job_info& j = *p.job;
+        std::string line;
+        const std::pair<const char*, const std::string*> parts[] = {
+            {"job ", &j.number}, {"", &j.title}, {"made by ", &j.made_by}, {"checked by ", &j.checked_by},
+            {"rev ", &j.revision}, {"", &j.date}};
+        for (const auto& [label, value] : parts)
+            if (!value->empty()) line += (line.empty() ? "" : "; ") + std::string(label) + *value;
+        if (!line.empty()) o << "Job:      " << line << "\n";
+    }
     o << "Project:  " << p.title << "\n";
     o << "Standard: " << (p.standard == design_standard::en1993_1_8 ? "EN 1993-1-8" : "AISC 360") << ", "
       << to_string(p.frame) << " frame; units " << (p.units == unit_system::us_customary ? "US customary" : "SI")

@@ -140,7 +140,7 @@ TEST_CASE("a failed check is written FAIL with the fail class and the verdict do
     const project_assessment a = assess_project(p);
     REQUIRE(!a.beams[0].holds());
     const std::string html = calculation_report_html(p, a, test_info(doc.dump()));
-    CHECK(count(html, "<td class=\"status fail\">FAIL</td>") >= 1);
+    CHECK(count(html, "<td class=\"status fail\" rowspan=\"2\">FAIL</td>") >= 1);
     CHECK(count(html, "DOES NOT HOLD") >= 2);
 }
 
@@ -241,4 +241,23 @@ TEST_CASE("text report [ECMA48 5.4]: an escape sequence in an id or title cannot
     CHECK(text.find('\x07') == std::string::npos);
     CHECK(text.find("B1<U+001B>[8m") != std::string::npos);
     CHECK(text.find("Mezzanine<U+001B>]0;owned<U+0007>") != std::string::npos);
+}
+
+TEST_CASE("calc sheet [CSS Paged Media 3 5.3]: the job in the running header and footer - sheet x of y - user text escaped")
+{
+    project p = parse_project(R"({"format": "pinproof-project/1", "title": "Calc \"T\" </style>", "standard": "EN1993-1-8",
+      "frame": "braced", "job": {"number": "J-1", "made_by": "A\\B", "checked_by": "C", "revision": "P1", "date": "2026-12-01"},
+      "beams": [{"id": "B", "span": "6 m", "section": "IPE 300",
+        "loads": [{"case": "G", "kind": "udl", "w": "10 kN/m"}],
+        "combinations": [{"name": "ULS", "use": "strength", "factors": {"G": 1.35}}],
+        "joints": {"start": {"stiffness": 0}, "end": {"stiffness": 0}}}]})");
+    const auto a = assess_project(p);
+    const std::string html = calculation_report_html(p, a, report_info{});
+    CHECK(html.find("@top-left { content: \"Job J-1\";") != std::string::npos);
+    CHECK(html.find("Sheet \" counter(page) \" of \" counter(pages)") != std::string::npos);
+    CHECK(html.find("Made by A\\5c B  |  Checked by C  |  Rev P1  |  2026-12-01") != std::string::npos);
+    // The title cannot end the CSS string or the style element.
+    CHECK(html.find("content: \"Calc \\22 T\\22  \\3c /style\\3e \"") != std::string::npos);
+    CHECK(html.find("<tr><th>Job number</th><td>J-1</td></tr>") != std::string::npos);
+    CHECK(html.find("size: A4") != std::string::npos);
 }

@@ -55,9 +55,17 @@ struct beam {
     const joint& at(beam_end e) const { return e == beam_end::start ? start : end; }
 };
 
+// The job a calculation belongs to, as a consultancy's calc sheets carry it:
+// printed in the running header and footer of the HTML report and at the
+// head of the text report. Every field is optional ("" when not given).
+struct job_info {
+    std::string number, title, made_by, checked_by, revision, date;
+};
+
 struct project {
     std::string format;  // "pinproof-project/1"
     std::string title;
+    std::optional<job_info> job;
     design_standard standard = design_standard::en1993_1_8;
     frame_bracing frame = frame_bracing::braced;
     unit_system units = unit_system::si;  // the system the file used, for reports
