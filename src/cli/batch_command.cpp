@@ -109,7 +109,7 @@ int batch_command(const batch_command_options& o, std::ostream& out, std::ostrea
         options.jobs = o.jobs;
         options.json = !o.out_json.empty();
         options.cancel = &interruption_requested();
-        options.progress = [&bar](std::size_t done, std::size_t total) { bar(done, total); };
+        if (!o.quiet) options.progress = [&bar](std::size_t done, std::size_t total) { bar(done, total); };
         // A signal stops the workers after their current row (interruption.hpp).
         stop_cooperatively(true);
         const batch_result r = run_batch(s, catalogue, options);
@@ -151,7 +151,7 @@ int batch_command(const batch_command_options& o, std::ostream& out, std::ostrea
         if (refused_problems > problems_shown)
             err << "... and " << refused_problems - problems_shown << " more problems (see the summary).\n";
         const bool data_on_stdout = csv_target == "-" || o.out_json == "-";
-        (data_on_stdout ? err : out) << "pinproof batch: " << batch_counts_text(r.summary) << ".\n";
+        if (!o.quiet) (data_on_stdout ? err : out) << "pinproof batch: " << batch_counts_text(r.summary) << ".\n";
         if (r.summary.refused > 0) return exit_error;
         return r.summary.failed > 0 ? exit_does_not_hold : exit_holds;
     } catch (const input_error& e) {

@@ -18,6 +18,7 @@ struct batch_command_options {
     std::string out_csv;   // "" with no out_json: the CSV goes to stdout; "-": stdout
     std::string out_json;  // "": none; "-": stdout
     unsigned jobs = 0;     // 0: one worker per hardware thread
+    bool quiet = false;    // no progress bar and no summary line
 };
 
 // Registers the subcommand on `app`, filling `options` when parsed.

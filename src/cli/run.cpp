@@ -1,6 +1,8 @@
 #include <CLI/CLI.hpp>
 #include <nlohmann/json.hpp>
 
+#include <algorithm>
+#include <chrono>
 #include <new>
 #include <ostream>
 #include <sstream>
@@ -13,7 +15,9 @@
 #include "fit_command.hpp"
 #include "new_command.hpp"
 #include "interruption.hpp"
+#include "verbosity.hpp"
 #include "pinproof/core/printable_text.hpp"
+#include "pinproof/core/spelling.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/core/input_file.hpp"
@@ -114,7 +118,7 @@ struct command_line {
                  "Results support, and do not replace, the judgement of a qualified engineer.",
                  "pinproof"};
     std::string file, json_out, details;
-    bool quiet = false;
+    verbosity verb;  // of the one command parsed
     detail_options detail_opts;
     sweep_options sweep_opts;
     batch_command_options batch_options;
@@ -128,6 +132,9 @@ struct command_line {
     void define_check_and_detail(const char* details_help);
     void define_report(const char* details_help);
     int dispatch(std::ostream& out, std::ostream& err);
+    int run_command(std::ostream& out, std::ostream& err);
+    bool results_on_stdout() const;
+    std::string command_name() const;
 };
 
 command_line::command_line()
@@ -147,6 +154,7 @@ command_line::command_line()
     define_report(details_help);
     starter = add_new_subcommand(app, new_opts);
     fit = add_fit_subcommand(app, fit_opts);
+    for (CLI::App* c : {check, sections, detail, sweep, batch, report, starter, fit}) add_verbosity_flags(*c, verb);
 }
 
 void command_line::define_check_and_detail(const char* details_help)
@@ -156,7 +164,6 @@ void command_line::define_check_and_detail(const char* details_help)
     check->add_option("--json", json_out, "Also write the machine-readable result to FILE ('-' for stdout); "
                                           "refused if FILE is an input")
         ->type_name("FILE");
-    check->add_flag("-q,--quiet", quiet, "Print no text report (the exit code still gives the verdict)");
     check->add_option("--details", details, details_help)->type_name("FILE");
     check->footer(exit_codes_text);
 
@@ -181,14 +188,48 @@ void command_line::define_report(const char* details_help)
     report->add_option("--details", report_details, details_help)->type_name("FILE");
 }
 
+// Whether the parsed command writes the results asked for on standard output
+// (then --quiet leaves standard output alone).
+bool command_line::results_on_stdout() const
+{
+    if (check->parsed()) return json_out == "-";
+    if (sweep->parsed()) return sweep_opts.csv_out == "-" || sweep_opts.svg_out == "-" || sweep_opts.json_out == "-";
+    if (detail->parsed()) return detail_opts.svg == "-";
+    if (report->parsed()) return report_out == "-";
+    if (starter->parsed()) return new_opts.output == "-";
+    return true;  // sections, fit and batch: their output is the result
+}
+
+std::string command_line::command_name() const
+{
+    for (const CLI::App* c : {check, sections, detail, sweep, batch, report, starter, fit})
+        if (c->parsed()) return c->get_name();
+    return "pinproof";
+}
+
 int command_line::dispatch(std::ostream& out, std::ostream& err)
+{
+    const auto started = std::chrono::steady_clock::now();
+    forget_input_files_read();  // the inputs of this run only
+    batch_options.quiet = verb.quiet;
+    const int code = run_command(verb.quiet && !results_on_stdout() ? null_stream() : out, err);
+    if (verb.verbose) {
+        for (const auto& f : input_files_log())
+            err << "pinproof: read the " << f.what << " " << message_text(f.path) << " (" << f.bytes << " bytes)\n";
+        const double seconds = std::chrono::duration<double>(std::chrono::steady_clock::now() - started).count();
+        err << "pinproof: " << command_name() << " took " << format_number(seconds, 3) << " s; exit code " << code
+            << "\n";
+    }
+    return code;
+}
+
+int command_line::run_command(std::ostream& out, std::ostream& err)
 {
     // SIGINT, SIGTERM and SIGHUP remove the temporaries and end the run with
     // 128 + the signal number (interruption.hpp).
     interruption_guard interruption;
-    forget_input_files_read();  // the inputs of this run only
     try {
-        if (check->parsed()) return check_command(file, details, json_out, quiet, out);
+        if (check->parsed()) return check_command(file, details, json_out, verb.quiet, out);
         if (sections->parsed()) return sections_command(out);
         if (sweep->parsed()) return sweep_command(sweep_opts, out, err);
         if (detail->parsed()) return detail_command(detail_opts, out, err);
@@ -220,15 +261,56 @@ int command_line::dispatch(std::ostream& out, std::ostream& err)
 
 }  // namespace
 
+namespace {
+
+// "Did you mean" for a misspelt command, before the parser calls it an
+// unexpected argument.
+bool refuse_unknown_command(const command_line& cl, const std::vector<std::string>& args, std::ostream& err)
+{
+    if (args.empty() || args[0].empty() || args[0][0] == '-') return false;
+    std::vector<std::string> names;
+    for (const CLI::App* c : cl.app.get_subcommands({})) names.push_back(c->get_name());
+    if (std::find(names.begin(), names.end(), args[0]) != names.end()) return false;
+    std::string list;
+    for (std::size_t i = 0; i < names.size(); ++i)
+        list += (i == 0 ? "" : i + 1 == names.size() ? " or " : ", ") + names[i];
+    err << "pinproof: unknown command \"" << message_text(args[0]) << "\"" << did_you_mean(args[0], names)
+        << " (the commands are " << list << ")\nRun with --help for more information.\n";
+    return true;
+}
+
+// "Did you mean" for each unknown option of a command.
+void suggest_options(const command_line& cl, const std::vector<std::string>& args, std::ostream& err)
+{
+    if (args.empty()) return;
+    const CLI::App* cmd = nullptr;
+    for (const CLI::App* c : cl.app.get_subcommands({}))
+        if (c->get_name() == args[0]) cmd = c;
+    if (!cmd) return;
+    std::vector<std::string> names;
+    for (const CLI::Option* o : cmd->get_options({}))
+        for (const auto& l : o->get_lnames()) names.push_back("--" + l);
+    for (std::size_t i = 1; i < args.size(); ++i) {
+        const std::string word = args[i].substr(0, args[i].find('='));
+        if (word.rfind("--", 0) != 0 || std::find(names.begin(), names.end(), word) != names.end()) continue;
+        const std::string hint = did_you_mean(word, names);
+        if (!hint.empty()) err << "pinproof " << cmd->get_name() << ": unknown option " << message_text(word) << hint << "\n";
+    }
+}
+
+}  // namespace
+
 int run(const std::vector<std::string>& args, std::ostream& out, std::ostream& err)
 {
     command_line cl;
+    if (refuse_unknown_command(cl, args, err)) return exit_error;
     std::vector<std::string> reversed(args.rbegin(), args.rend());
     try {
         cl.app.parse(reversed);
     } catch (const CLI::ParseError& e) {
         // --help or --version (exit code 0): data on stdout.
         cl.app.exit(e, out, err);
+        if (e.get_exit_code() != 0) suggest_options(cl, args, err);
         return e.get_exit_code() == 0 ? 0 : exit_error;
     }
     if (refuse_empty_values({cl.check, cl.detail, cl.sweep, cl.batch, cl.report, cl.starter, cl.fit}, err))

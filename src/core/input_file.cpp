@@ -18,6 +18,8 @@ std::mutex registry_mutex;
 struct file_read {
     file_identity id;
     std::string path;
+    std::string what;
+    std::uintmax_t bytes = 0;  // set when the whole file has been read
 };
 std::vector<file_read>& registry()
 {
@@ -30,14 +32,21 @@ file_identity identity_of(const struct stat& st)
     return {static_cast<std::uintmax_t>(st.st_dev), static_cast<std::uintmax_t>(st.st_ino)};
 }
 
-void remember(const struct stat& st, const std::string& path)
+void remember(const struct stat& st, const std::string& path, const std::string& what)
 {
     const file_identity id = identity_of(st);
     std::lock_guard<std::mutex> lock(registry_mutex);
     auto& files = registry();
     for (const auto& f : files)
         if (f.id == id && f.path == path) return;
-    files.push_back({id, path});
+    files.push_back({id, path, what, 0});
+}
+
+void note_bytes(const std::string& path, std::uintmax_t bytes)
+{
+    std::lock_guard<std::mutex> lock(registry_mutex);
+    for (auto& f : registry())
+        if (f.path == path) f.bytes = bytes;
 }
 
 std::string size_text(std::uintmax_t bytes)
@@ -99,7 +108,7 @@ std::string read_input_file(const std::string& path, const std::string& what)
     struct stat opened {};
     if (::fstat(fd.get(), &opened) != 0 || (!S_ISREG(opened.st_mode) && !S_ISFIFO(opened.st_mode)))
         throw input_error(path, std::string("expected the ") + what + " as a file, found " + kind_of(opened.st_mode));
-    remember(opened, path);
+    remember(opened, path, what);
 
     std::string text;
     if (S_ISREG(opened.st_mode)) text.reserve(static_cast<std::size_t>(opened.st_size));
@@ -117,7 +126,16 @@ std::string read_input_file(const std::string& path, const std::string& what)
             throw input_error(path, "expected a " + what + " of at most 512 MiB, found more; " + limit);
         text.append(buf, static_cast<std::size_t>(n));
     }
+    note_bytes(path, text.size());
     return text;
+}
+
+std::vector<input_read> input_files_log()
+{
+    std::lock_guard<std::mutex> lock(registry_mutex);
+    std::vector<input_read> out;
+    for (const auto& f : registry()) out.push_back({f.path, f.what, f.bytes});
+    return out;
 }
 
 std::vector<file_identity> input_files_read()

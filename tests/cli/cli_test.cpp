@@ -172,6 +172,48 @@ TEST_CASE("cli check --quiet prints nothing and keeps the exit code [CLI]")
     CHECK(r.err.empty());
 }
 
+// --quiet and --verbose on every command [CLI]: quiet leaves only the results
+// asked for; verbose adds the files read and the running time on stderr.
+TEST_CASE("cli --quiet and --verbose are accepted by every command and exclude each other [CLI]")
+{
+    temp_dir tmp;
+    const std::string html = (tmp.path / "r.html").string();
+    const auto quiet = run_cli({"report", example, "-o", html, "--quiet"});
+    CHECK(quiet.code == pinproof::cli::exit_holds);
+    CHECK(quiet.out.empty());
+    CHECK(quiet.err.empty());
+    CHECK(fs::exists(html));
+    const auto verbose = run_cli({"report", example, "-o", html, "--verbose"});
+    CHECK(verbose.code == pinproof::cli::exit_holds);
+    CHECK(verbose.out.find("Report written to") != std::string::npos);
+    CHECK(verbose.err.find("read the project file " + example + " (") != std::string::npos);
+    CHECK(verbose.err.find("pinproof: report took ") != std::string::npos);
+    // The results asked for on stdout are not silenced.
+    const auto json_quiet = run_cli({"check", example, "--json", "-", "-q"});
+    CHECK(json_quiet.out.find("\"format\"") != std::string::npos);
+    for (const char* cmd : {"check", "sections", "detail", "sweep", "batch", "report", "new", "fit"}) {
+        CAPTURE(cmd);
+        const auto help = run_cli({cmd, "--help"});
+        CHECK(help.out.find("--quiet") != std::string::npos);
+        CHECK(help.out.find("--verbose") != std::string::npos);
+    }
+    const auto both = run_cli({"check", example, "-q", "-v"});
+    CHECK(both.code == pinproof::cli::exit_error);
+    CHECK(both.err.find("--quiet excludes --verbose") != std::string::npos);
+}
+
+// A misspelt command or option gets the nearest known name [CLI].
+TEST_CASE("cli did you mean: a misspelt command and a misspelt option [CLI]")
+{
+    const auto cmd = run_cli({"chek", example});
+    CHECK(cmd.code == pinproof::cli::exit_error);
+    CHECK(cmd.out.empty());
+    CHECK(cmd.err.find("unknown command \"chek\"; did you mean \"check\"?") != std::string::npos);
+    const auto opt = run_cli({"check", example, "--jsn", "x.json"});
+    CHECK(opt.code == pinproof::cli::exit_error);
+    CHECK(opt.err.find("unknown option --jsn; did you mean \"--json\"?") != std::string::npos);
+}
+
 // --json -: only the JSON result on stdout, with the keys of [FMT].
 TEST_CASE("cli check --json - writes the result JSON on stdout with the required keys [FMT]")
 {

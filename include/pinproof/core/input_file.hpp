@@ -36,6 +36,14 @@ std::string read_input_file(const std::string& path, const std::string& what);
 // were read by.
 std::vector<file_identity> input_files_read();
 
+// The files read in this run, in the order read: name, kind ("project file",
+// ...) and size in bytes (for a --verbose account of the run).
+struct input_read {
+    std::string path, what;
+    std::uintmax_t bytes = 0;
+};
+std::vector<input_read> input_files_log();
+
 // Starts a new run: the files read before are no longer inputs.
 void forget_input_files_read();
 
