@@ -232,6 +232,13 @@ double beam_model::moment_at(double x, double m_start, double m_end) const
     return -EI_ * polynomial::value(w2, x - e.x0);
 }
 
+double beam_model::shear_at(double x, double m_start, double m_end) const
+{
+    const element& e = elements_[element_index(x)];
+    const auto w3 = polynomial::derivative(polynomial::derivative(polynomial::derivative(combined(e, m_start, m_end))));
+    return -EI_ * polynomial::value(w3, x - e.x0);
+}
+
 beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
 {
     if (!finite(m_start) || !finite(m_end)) throw internal_error("end moments are not finite");

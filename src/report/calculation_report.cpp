@@ -508,27 +508,42 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
     std::sort(xs.begin(), xs.end());
     xs.erase(std::unique(xs.begin(), xs.end(), [&](double a, double c) { return std::abs(a - c) < 1e-12 * b.span; }),
              xs.end());
-    auto curves = [&](bool moment, dimension d) {
+    // Shear jumps at point loads: each interior node is also sampled just
+    // before it, so that the diagram draws the jump as a vertical step.
+    std::vector<double> xs_shear = xs;
+    for (double x : model.nodes())
+        if (x > 0 && x < b.span) xs_shear.push_back(x - 1e-9 * b.span);
+    std::sort(xs_shear.begin(), xs_shear.end());
+    enum class diagram { moment, shear, deflection };
+    auto curves = [&](diagram kind) {
+        const dimension d = kind == diagram::moment ? dims::moment : kind == diagram::shear ? dims::force : dims::length;
         auto value = [&](double x, const beam_state& s) {
-            return moment ? model.moment_at(x, s.moment_start, s.moment_end)
-                          : model.deflection_at(x, s.moment_start, s.moment_end);
+            switch (kind) {
+            case diagram::moment: return model.moment_at(x, s.moment_start, s.moment_end);
+            case diagram::shear: return model.shear_at(x, s.moment_start, s.moment_end);
+            case diagram::deflection: break;
+            }
+            return model.deflection_at(x, s.moment_start, s.moment_end);
         };
+        // Deflection is drawn downward, as the beam deflects (sign_conventions.hpp).
+        const double drawn = kind == diagram::deflection ? -1.0 : 1.0;
+        const bool w = kind == diagram::deflection;
         chart_series pinned{"pinned ends", {}, chart_colour::pinned, true};
         chart_series fixed{"fixed ends", {}, chart_colour::fixed, true};
-        chart_series lo{"range envelope, min", {}, chart_colour::range_lower, false};
-        chart_series hi{"range envelope, max", {}, chart_colour::range_upper, false};
-        for (double x : xs) {
+        chart_series lo{w ? "range envelope, least deflection" : "range envelope, min", {}, chart_colour::range_lower, false};
+        chart_series hi{w ? "range envelope, most deflection" : "range envelope, max", {}, chart_colour::range_upper, false};
+        for (double x : kind == diagram::shear ? xs_shear : xs) {
             const double px = u_.pos_in(x);
-            pinned.points.emplace_back(px, u_.in(value(x, r.pinned), d));
-            fixed.points.emplace_back(px, u_.in(value(x, r.fixed), d));
+            pinned.points.emplace_back(px, drawn * u_.in(value(x, r.pinned), d));
+            fixed.points.emplace_back(px, drawn * u_.in(value(x, r.fixed), d));
             double mn = 0, mx = 0;
             for (std::size_t k = 0; k < r.corners.size(); ++k) {
                 const double v = value(x, r.corners[k]);
                 mn = k == 0 ? v : std::min(mn, v);
                 mx = k == 0 ? v : std::max(mx, v);
             }
-            lo.points.emplace_back(px, u_.in(mn, d));
-            hi.points.emplace_back(px, u_.in(mx, d));
+            lo.points.emplace_back(px, drawn * u_.in(mn, d));
+            hi.points.emplace_back(px, drawn * u_.in(mx, d));
         }
         line_chart c;
         c.x.label = "x from the start support (" + u_.pos_unit() + ")";
@@ -539,18 +554,29 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
         c.height = 380;
         return c;
     };
-    line_chart m = curves(true, dims::moment);
-    m.title = "Beam " + b.id + ", " + r.comb.name + ": bending moment";
-    m.y.label = "M (" + u_.sym(dims::moment) + "), sagging +";
-    figure("moment", to_svg(m),
-           "Bending moment along the span, combination " + r.comb.name +
-               ": ideal pinned and fixed ends, and the pointwise envelope over the four corners of the stiffness range.");
-    line_chart w = curves(false, dims::length);
+    const std::string envelope =
+        ": ideal pinned and fixed ends, and the pointwise envelope over the four corners of the stiffness range.";
+    // A strength combination's moments and shears act on the members; a
+    // service combination's deflection is what is checked.
+    if (r.comb.use == limit_state::strength) {
+        line_chart m = curves(diagram::moment);
+        m.title = "Beam " + b.id + ", " + r.comb.name + ": bending moment";
+        m.y.label = "M (" + u_.sym(dims::moment) + "), sagging +";
+        figure("moment", to_svg(m), "Bending moment along the span, combination " + r.comb.name + envelope);
+        line_chart v = curves(diagram::shear);
+        v.title = "Beam " + b.id + ", " + r.comb.name + ": shear force";
+        v.y.label = "V (" + u_.sym(dims::force) + "), V = dM/dx";
+        figure("shear", to_svg(v),
+               "Shear force along the span, combination " + r.comb.name +
+                   " (V = dM/dx: the start reaction at the start, minus the end reaction at the end; a point load is "
+                   "a step)" + envelope);
+        return;
+    }
+    line_chart w = curves(diagram::deflection);
     w.title = "Beam " + b.id + ", " + r.comb.name + ": deflection";
-    w.y.label = "w (" + u_.sym(dims::length) + "), downward +";
+    w.y.label = "-w (" + u_.sym(dims::length) + "): deflection drawn downward";
     figure("deflection", to_svg(w),
-           "Deflection along the span, combination " + r.comb.name +
-               ": ideal pinned and fixed ends, and the pointwise envelope over the four corners of the stiffness range.");
+           "Deflection along the span, combination " + r.comb.name + ", drawn downward as the beam deflects" + envelope);
 }
 
 void report_writer::sweep_chart(const beam& b)

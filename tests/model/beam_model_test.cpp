@@ -538,3 +538,25 @@ TEST_CASE("max hogging span moment - propped cantilever under uplift: sagging wL
     CHECK(s.max_hogging_moment == doctest::Approx(-9 * w * L * L / 128).epsilon(1e-9));
     CHECK(s.max_hogging_at == doctest::Approx(5 * L / 8).epsilon(1e-9));
 }
+
+TEST_CASE("shear force [R8.1] and statics: V = R_start - w x under a UDL with end moments - a jump of P under a point load - tol 1e-9")
+{
+    // Statics of the free body from the start support (common practice, no
+    // source): V(x) = R_start - (load to the left of x), with R_start of the
+    // solved state (it includes the couple of the unequal end moments).
+    const beam_model m(L, EI, {udl(w)});
+    const auto s = m.solve(stiffness::spring(2e6), stiffness::spring(8e6));
+    for (double x : {0.0, 0.2 * L, 0.5 * L, 0.9 * L}) {
+        CAPTURE(x);
+        CHECK(m.shear_at(x, s.moment_start, s.moment_end) == doctest::Approx(s.reaction_start - w * x).epsilon(1e-9));
+    }
+    CHECK(m.shear_at(L, s.moment_start, s.moment_end) == doctest::Approx(-s.reaction_end).epsilon(1e-9));
+    // A point load P at a: V jumps by -P there [R8.1 case of a point load].
+    const double P = 30e3, a = 0.4 * L;
+    const beam_model p(L, EI, {point(P, a)});
+    const auto sp = p.solve(stiffness::pinned(), stiffness::pinned());
+    const double before = p.shear_at(a - 1e-9 * L, 0, 0), after = p.shear_at(a, 0, 0);
+    CHECK(before == doctest::Approx(P * (L - a) / L).epsilon(1e-9));
+    CHECK(after == doctest::Approx(-P * a / L).epsilon(1e-9));
+    CHECK(sp.reaction_start == doctest::Approx(before).epsilon(1e-9));
+}

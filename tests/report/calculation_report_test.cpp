@@ -70,7 +70,11 @@ std::size_t expected_details(const project& p)
 std::size_t expected_charts(const project& p)
 {
     std::size_t n = expected_details(p);
-    for (const auto& b : p.beams) n += 2 * b.combinations.size() + 1 + 2;
+    // Per combination: moment and shear (strength), or deflection; then the
+    // sweep and a beam line per end.
+    for (const auto& b : p.beams)
+        for (const auto& c : b.combinations) n += c.use == limit_state::strength ? 2 : 1;
+    for (const auto& b : p.beams) n += 1 + 2;
     return n;
 }
 
@@ -115,8 +119,9 @@ TEST_CASE("the report is self-contained and carries verdict and caution and ever
     CHECK(count(html, "2026-01-15") >= 1);
 
     CHECK(count(html, "<svg") == expected_charts(p));
-    CHECK(count(html, "data-chart=\"moment\"") == 4);
-    CHECK(count(html, "data-chart=\"deflection\"") == 4);
+    CHECK(count(html, "data-chart=\"moment\"") == 2);
+    CHECK(count(html, "data-chart=\"shear\"") == 2);
+    CHECK(count(html, "data-chart=\"deflection\"") == 2);
     CHECK(count(html, "data-chart=\"sweep\"") == 2);
     CHECK(count(html, "data-chart=\"beam-line\"") == 4);
     CHECK(count(html, "data-chart=\"gap-detail\"") == expected_details(p));

@@ -96,6 +96,10 @@ public:
     // state with the given hogging end moments.
     double deflection_at(double x, double moment_start, double moment_end) const;
     double moment_at(double x, double moment_start, double moment_end) const;
+    // Shear force (N, sign_conventions.hpp) at x. At a point load it jumps:
+    // the value just after x (to its right) is returned; ask for x less a
+    // small step for the value just before it.
+    double shear_at(double x, double moment_start, double moment_end) const;
 
 private:
     // Row j of the condensed system a[j][j] m_j + a[j][k] m_k = b_j for joint

@@ -9,6 +9,9 @@
 //   Slope           theta(x) = dw/dx, positive clockwise.
 //   Bending moment  M(x) positive sagging (tension in the bottom fibre).
 //                   EI w'' = -M.
+//   Shear force     V(x) = dM/dx = -EI w''': positive near the start support
+//                   of a beam under downward load (V(0) = reaction_start,
+//                   V(L) = -reaction_end).
 //   Reactions       positive upwards.
 //   End moments     positive hogging (tension in the top fibre at the joint),
 //                   i.e. the moment a restraining joint takes from the beam
