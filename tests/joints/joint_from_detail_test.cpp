@@ -210,3 +210,19 @@ TEST_CASE("property: the derived stiffness grows with the number of bolt rows - 
         previous = *d.initial_stiffness;
     }
 }
+
+TEST_CASE("a law on a derived joint [project rules]: ec3-curve starts from the derived range and is capped at the derived resistance")
+{
+    const project p = derived(R"({"stiffness": "from-detail", "moment_resistance": "from-detail",
+        "behaviour": {"law": "ec3-curve", "psi": 2.7}, "detail": )" + worked_detail + "}");
+    const joint& j = p.beams[0].start;
+    REQUIRE(j.behaviour);
+    REQUIRE(j.derived);
+    CHECK(j.range.min.value() == doctest::Approx(0.5 * *j.derived->initial_stiffness).epsilon(1e-12));
+    CHECK(*j.moment_resistance == doctest::Approx(j.derived->moment_resistance).epsilon(1e-12));
+    // A Richard-Abbott plastic stiffness above the derived lower bound is refused at its field.
+    const auto r = refusal(R"({"stiffness": "from-detail", "moment_resistance": "from-detail",
+        "behaviour": {"law": "richard-abbott", "reference_moment": "40 kN*m", "plastic_stiffness": "100 MN*m/rad", "shape": 2}, "detail": )" +
+                           worked_detail + "}");
+    CHECK(r.where == "/beams/0/joints/start/behaviour/plastic_stiffness");
+}
