@@ -1,4 +1,3 @@
-#include "pinproof/checks/derived_joint_checks.hpp"
 #include "pinproof/checks/assessment.hpp"
 
 #include <algorithm>
@@ -9,6 +8,7 @@
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/joints/joint_law.hpp"
 #include "pinproof/checks/joint_strength.hpp"
+#include "pinproof/checks/derived_joint_checks.hpp"
 
 namespace pinproof {
 

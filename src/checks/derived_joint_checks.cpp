@@ -76,6 +76,9 @@ check declared_resistance_check(const project& p, const beam& b, beam_end e)
     c.id = "declared-resistance-" + to_string(e);
     c.dim = dims::moment;
     c.varies_with_stiffness = false;
+    // Advice on the inputs, not a criterion of the beam: left out of thresholds,
+    // probabilities and batch verdicts, like moment-reversal.
+    c.informative = true;
     if (!j.derived) {
         c.message = not_derived(j) + ", so its declared values are not compared with derived ones.";
         return c;

@@ -98,8 +98,10 @@ void resolve(joint& j, const derived_joint& dj, const std::string& ptr, problem_
     if (j.moment_resistance_from_detail) j.moment_resistance = dj.moment_resistance;
     if (!j.stiffness_from_detail) return;
     if (!dj.initial_stiffness) {
-        // The reader refuses it for AISC projects; any other way here is a bug.
-        throw internal_error("a \"from-detail\" stiffness at " + ptr + " has no derived initial stiffness");
+        // The project reader refuses this already; a joint built another way is refused here.
+        problems.add(ptr + "/stiffness", "expected a stiffness range: " + dj.basis + " gives no component stiffness, so "
+                                         "\"from-detail\" derives the moment resistance only");
+        return;
     }
     const auto [lo, hi] = j.stiffness_scatter.value_or(std::make_pair(0.5, 2.0));
     j.range = {stiffness::spring(lo * *dj.initial_stiffness), stiffness::spring(hi * *dj.initial_stiffness)};
@@ -140,20 +142,35 @@ std::optional<derived_joint> derive_joint(const beam& b, beam_end end, design_st
     }
 }
 
+namespace {
+
+void derive_beam_joints(beam& b, design_standard standard, problem_list& problems)
+{
+    for (const beam_end end : {beam_end::start, beam_end::end}) {
+        joint& j = end == beam_end::start ? b.start : b.end;
+        try {
+            j.derived = derive_joint(b, end, standard, &j.not_derived_reason);
+        } catch (const input_error& e) {
+            problems.add_all(e);
+            continue;
+        }
+        if (j.derived) resolve(j, *j.derived, joint_pointer(b, end), problems);
+    }
+}
+
+}  // namespace
+
+void derive_beam_joints(beam& b, design_standard standard)
+{
+    problem_list problems;
+    derive_beam_joints(b, standard, problems);
+    problems.throw_if_any();
+}
+
 void derive_joints(project& p)
 {
     problem_list problems;
-    for (beam& b : p.beams)
-        for (const beam_end end : {beam_end::start, beam_end::end}) {
-            joint& j = end == beam_end::start ? b.start : b.end;
-            try {
-                j.derived = derive_joint(b, end, p.standard, &j.not_derived_reason);
-            } catch (const input_error& e) {
-                problems.add_all(e);
-                continue;
-            }
-            if (j.derived) resolve(j, *j.derived, joint_pointer(b, end), problems);
-        }
+    for (beam& b : p.beams) derive_beam_joints(b, p.standard, problems);
     problems.throw_if_any();
 }
 

@@ -32,8 +32,11 @@ namespace pinproof {
 std::optional<derived_joint> derive_joint(const beam& b, beam_end end, design_standard standard,
                                           std::string* why_not = nullptr);
 
-// derive_joint for both ends of every beam, and "from-detail" put into each
+// derive_joint for both ends of beam `b`, and "from-detail" put into each
 // joint's range and moment resistance. Throws input_error with every problem.
+void derive_beam_joints(beam& b, design_standard standard);
+
+// derive_beam_joints for every beam of the project, every problem reported together.
 void derive_joints(project& p);
 
 }  // namespace pinproof
