@@ -607,11 +607,11 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
 }
 
 void check_fin_plate_derivable(const connection_detail& d, const std::string& pointer, design_standard standard,
-                               problem_list& problems)
+                               problem_list& problems, unit_system units)
 {
     const bolt_layout& b = d.bolts;
     const double d0 = b.hole_diameter;
-    const auto show = [](double v) { return format_quantity(v, dims::length, unit_system::neutral); };
+    const auto show = [units](double v) { return format_quantity(v, dims::length, units); };
     const double top = b.first_bolt, bottom = d.plate_depth - b.first_bolt - (b.rows - 1) * b.pitch;
     const std::string rule = minimum_edge_distance_rule(standard);
     const double e_min = minimum_edge_distance(b, standard);

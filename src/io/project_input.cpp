@@ -349,7 +349,7 @@ struct reader {
             problems.add(child(ptr, "stiffness"), "expected a stiffness range in an AISC 360 project: AISC 360 gives no "
                                                   "component stiffness for a single plate, so \"from-detail\" derives "
                                                   "the moment resistance only; found \"from-detail\"");
-        check_fin_plate_derivable(*out.detail, dp, standard, problems);
+        check_fin_plate_derivable(*out.detail, dp, standard, problems, system);
     }
 
     // The law and the rest of the joint must agree: a law that needs the

@@ -13,7 +13,11 @@ namespace {
 
 std::string joint_pointer(const beam& b, beam_end end) { return b.pointer + "/joints/" + to_string(end); }
 
-std::string mm_text(double metres) { return format_quantity(metres, dims::length, unit_system::neutral); }
+// A length in the units of the standard's practice (mm for EN, in for AISC).
+std::string length_text(double metres, bool us)
+{
+    return format_quantity(metres, dims::length, us ? unit_system::us_customary : unit_system::si);
+}
 
 // The fields common to both standards, with their defaults noted.
 struct common_inputs {
@@ -70,7 +74,7 @@ derived_joint derive_en(const connection_detail& d, const beam& b)
     const fin_plate_joint f = derive_fin_plate(d, b.sec, in);
     derived_joint out = from_fin_plate(f, "EN 1993-1-8");
     out.defaults = std::move(c.defaults);
-    if (f.plate_edge_distance_default) out.defaults.push_back("plate edge distance 2 d = " + mm_text(f.plate_edge_distance) + " (default)");
+    if (f.plate_edge_distance_default) out.defaults.push_back("plate edge distance 2 d = " + length_text(f.plate_edge_distance, false) + " (default)");
     return out;
 }
 
@@ -87,7 +91,7 @@ derived_joint derive_us(const connection_detail& d, const beam& b)
     const single_plate_joint f = derive_single_plate(d, b.sec, in);
     derived_joint out = from_fin_plate(f, "AISC 360-16");
     out.defaults = std::move(c.defaults);
-    if (f.plate_edge_distance_default) out.defaults.push_back("plate edge distance 1.5 d = " + mm_text(f.plate_edge_distance) + " (default)");
+    if (f.plate_edge_distance_default) out.defaults.push_back("plate edge distance 1.5 d = " + length_text(f.plate_edge_distance, true) + " (default)");
     out.limits_exceeded = f.limits_exceeded;
     return out;
 }

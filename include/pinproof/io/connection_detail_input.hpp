@@ -7,6 +7,7 @@
 #include <string>
 
 #include "pinproof/core/errors.hpp"
+#include "pinproof/core/units.hpp"
 #include "pinproof/model/connection_detail.hpp"
 
 namespace pinproof {
@@ -26,8 +27,9 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
 // distances above the top bolt and below the bottom bolt, its edge distance and
 // the web's end distance to the beam end no smaller than the code's minimum
 // (EN 1993-1-8 Table 3.3, AISC 360-16 Table J3.4). Problems go to `problems`
-// with the pointer of the field at fault under `pointer` (the detail's).
+// with the pointer of the field at fault under `pointer` (the detail's),
+// lengths shown in `units` (the file's).
 void check_fin_plate_derivable(const connection_detail& d, const std::string& pointer, design_standard standard,
-                               problem_list& problems);
+                               problem_list& problems, unit_system units = unit_system::neutral);
 
 }  // namespace pinproof
