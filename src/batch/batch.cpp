@@ -15,6 +15,7 @@
 #include "pinproof/core/csv_cell.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/report/result_json.hpp"
+#include "pinproof/joints/joint_from_detail.hpp"
 
 namespace pinproof {
 namespace {
@@ -236,6 +237,8 @@ batch_row assess_schedule_row(const schedule& s, std::size_t index, const detail
             // The smallest passing gap is only written to the JSON result.
             assessment_options ao = options.assessment;
             ao.find_min_gap = ao.find_min_gap && options.json;
+            // Each fin plate of the catalogue derived, for the report and the checks.
+            derive_beam_joints(*in.input, in.settings.standard);
             const beam_assessment a = assess_beam(in.settings, *in.input, ao);
             summarise(row, a);
             if (options.json) row.json = row_json(row, &a).dump();

@@ -8,6 +8,7 @@
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/joints/joint_law.hpp"
 #include "pinproof/checks/joint_strength.hpp"
+#include "pinproof/checks/derived_joint_checks.hpp"
 
 namespace pinproof {
 
@@ -734,6 +735,10 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     beam_assessment a;
     a.id = b.id;
     a.input = &b;
+    for (beam_end e : {beam_end::start, beam_end::end})
+        if ((b.at(e).stiffness_from_detail || b.at(e).moment_resistance_from_detail) && !b.at(e).derived)
+            throw internal_error("beam " + b.id + ", " + to_string(e) + " joint: \"from-detail\" is not resolved; "
+                                 "derive_joints (joints/joint_from_detail.hpp) runs before the assessment");
     for (const auto& c : b.combinations) a.combinations.push_back(analyse_combination(b, c, options.search_interior));
     a.start = assess_joint(p, b, beam_end::start);
     a.end = assess_joint(p, b, beam_end::end);
@@ -750,6 +755,8 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(moment_reversal_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(joint_shear_check(p, b, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(declared_resistance_check(p, b, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));
     assess_details(p, b, a, options.find_min_gap);
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(gap_closure_check(p, b, a.joint_at(e)));

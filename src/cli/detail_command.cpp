@@ -4,6 +4,7 @@
 
 #include <ostream>
 
+#include "pinproof/joints/joint_from_detail.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/report/calculation_report.hpp"
 #include "pinproof/core/errors.hpp"
@@ -22,7 +23,8 @@ int detail_command(const detail_options& o, std::ostream& out, std::ostream& err
     if (o.svg != "-") outputs.add("--svg", o.svg, "");
     outputs.check();  // before any work
 
-    const project p = load_project_file(o.file, o.details);
+    project p = load_project_file(o.file, o.details);
+    derive_joints(p);  // "from-detail" joints resolved before any analysis
     const beam* b = &beam_by_id(p, o.beam, o.file);
     const beam_end e = o.end == "start" ? beam_end::start : beam_end::end;
     if (!b->at(e).detail)

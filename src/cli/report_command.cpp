@@ -6,6 +6,7 @@
 #include <ostream>
 #include <sstream>
 
+#include "pinproof/joints/joint_from_detail.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/report/calculation_report.hpp"
 #include "pinproof/core/errors.hpp"
@@ -46,7 +47,8 @@ int report_command(const std::string& file, const std::string& out_path, std::os
     outputs.add("-o", out_path, "");
     outputs.check();  // before any work
 
-    const project p = load_project_file(file, details_file);
+    project p = load_project_file(file, details_file);
+    derive_joints(p);  // "from-detail" joints resolved before any analysis
     // The hash is of the bytes the project was read from.
     const std::string bytes = read_input_file(file, "project file");
     const project_assessment a = assess_project(p);

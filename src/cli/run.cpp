@@ -16,6 +16,7 @@
 #include "new_command.hpp"
 #include "interruption.hpp"
 #include "verbosity.hpp"
+#include "pinproof/joints/joint_from_detail.hpp"
 #include "pinproof/core/printable_text.hpp"
 #include "pinproof/core/spelling.hpp"
 #include "pinproof/checks/assessment.hpp"
@@ -52,7 +53,8 @@ int check_command(const std::string& file, const std::string& details, const std
     if (!json_out.empty() && json_out != "-") outputs.add("--json", json_out, "");
     outputs.check();
 
-    const project p = load_project_file(file, details);
+    project p = load_project_file(file, details);
+    derive_joints(p);  // "from-detail" joints resolved before any analysis
     const project_assessment a = assess_project(p);
     // Everything is computed before anything is written.
     std::string json_text;

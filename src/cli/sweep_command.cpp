@@ -11,6 +11,7 @@
 
 #include "beam_choice.hpp"
 #include "count_option.hpp"
+#include "pinproof/joints/joint_from_detail.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/checks/failure_probability.hpp"
 #include "pinproof/core/output_file.hpp"
@@ -247,7 +248,8 @@ void summary(std::ostream& out, const project& p, const sweep_options& o, const 
 int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err*/)
 {
     const char* on_stdout = refuse_outputs(o);
-    const project p = load_project_file(o.file, o.details);
+    project p = load_project_file(o.file, o.details);
+    derive_joints(p);  // "from-detail" joints resolved before any analysis
     if (p.beams.empty()) throw input_error("/beams", "expected at least one beam to sweep, found none");
     const beam* b = o.beam_id.empty() ? &p.beams.front() : &beam_by_id(p, o.beam_id, o.file);
     const stiffness_uncertainty uncertainty{b->start.distribution, b->end.distribution, b->stiffness_correlation};

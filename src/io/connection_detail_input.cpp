@@ -45,10 +45,12 @@ double default_hole(double d) { return d <= 24 * mm + 1e-9 ? d + 2 * mm : d + 3 
 
 class reader {
 public:
-    reader(const json& obj, const std::string& pointer, problem_list& problems)
-        : obj_(obj), ptr_(pointer), problems_(problems)
+    reader(const json& obj, const std::string& pointer, problem_list& problems,
+           design_standard standard = design_standard::en1993_1_8)
+        : obj_(obj), ptr_(pointer), problems_(problems), standard_(standard)
     {
     }
+    design_standard standard() const { return standard_; }
 
     std::string at(const std::string& key) const { return jf::child(ptr_, key); }
     bool has(const std::string& key) const { return obj_.contains(key); }
@@ -90,6 +92,7 @@ private:
     std::string ptr_;
     problem_list& problems_;
     unit_system system_ = unit_system::neutral;
+    design_standard standard_ = design_standard::en1993_1_8;
 };
 
 std::optional<cope> read_cope(reader& parent, const std::string& key, double h)
@@ -223,13 +226,32 @@ std::vector<std::string> known_detail_fields(detail_type type, const fitting_key
         known.push_back(k.thickness);
         if (!end) known.push_back("gap");
         if (fin || end) known.push_back("plate_grade");
-        if (fin) known.push_back("bolt_line");
+        if (fin)
+            for (const char* key : {"bolt_line", "bolt_grade", "threads_in_shear_plane", "weld", "edge_distance",
+                                    "end_distance"})
+                known.push_back(key);
     }
     return known;
 }
 
 // The fitting of a standard detail (fin plate, cleats, end plate): gap, plate,
 // bolts and their defaults, and whether the fitting fits the beam.
+// EN projects take EN 10025-2 plates, US projects ASTM plates; the default
+// (S275 or A36, common practice, no source) is marked as such.
+void read_plate_grade(reader& r, connection_detail& d)
+{
+    const bool us = r.standard() == design_standard::aisc360;
+    if (us) d.grade = plate_grade::a36;
+    if (d.type != detail_type::fin_plate && d.type != detail_type::end_plate) return;
+    const std::vector<std::string> names = us ? std::vector<std::string>{"A36", "A572-50"}
+                                               : std::vector<std::string>{"S275", "S355"};
+    const auto g = jf::choice_field(r.obj(), r.pointer(), "plate_grade", names, false, r.problems());
+    if (!g) return;
+    d.grade_is_default = false;
+    d.grade = *g == "S355" ? plate_grade::s355 : *g == "A36" ? plate_grade::a36 : *g == "A572-50" ? plate_grade::a572_50
+                                                                                                 : plate_grade::s275;
+}
+
 void read_fitting(reader& r, connection_detail& d, const fitting_keys& k, double h, std::size_t before)
 {
     const json& value = r.obj();
@@ -256,9 +278,7 @@ void read_fitting(reader& r, connection_detail& d, const fitting_keys& k, double
     }
     std::optional<double> depth;
     if (r.has(k.depth)) depth = r.length(k.depth, std::nullopt);
-    if (fin || end)
-        if (auto g = jf::choice_field(value, pointer, "plate_grade", {"S275", "S355"}, false, problems))
-            d.grade = *g == "S355" ? plate_grade::s355 : plate_grade::s275;
+    read_plate_grade(r, d);
 
     if (!(gap && thickness && bolt && hole && pitch && first && top && line && problems.size() == before)) return;
     // Rows and depth from each other, or the fewest rows reaching 0.6 h.
@@ -405,6 +425,80 @@ void read_copes(reader& r, connection_detail& d, const fitting_keys& k, double h
     }
 }
 
+void read_weld(reader& parent, connection_detail& d);
+
+// The fin plate's fields for its derivation (joints/joint_from_detail.hpp):
+// bolt grade, threads, weld and the plate's edge distance, each checked
+// against the rule it must meet where it is given.
+void read_derivation_fields(reader& r, connection_detail& d, std::size_t before)
+{
+    const json& value = r.obj();
+    const std::string& pointer = r.pointer();
+    problem_list& problems = r.problems();
+    const bool us = r.standard() == design_standard::aisc360;
+    derivation_fields& f = d.derivation;
+    if (r.has("bolt_grade")) {
+        const std::vector<std::string> names = us ? std::vector<std::string>{"A325", "A490"}
+                                                   : std::vector<std::string>{"4.6", "8.8", "10.9"};
+        const json& v = value["bolt_grade"];
+        const std::string text = v.is_string() ? v.get<std::string>() : jf::shown(v);
+        if (std::find(names.begin(), names.end(), text) != names.end())
+            f.bolt_grade = text;
+        else
+            r.problem("bolt_grade", std::string("expected a bolt grade of ") +
+                                        (us ? "an AISC 360 project: ASTM \"A325\" or \"A490\" (AISC 360-16 Table J3.2)"
+                                            : "an EN 1993-1-8 project: property class \"4.6\", \"8.8\" or \"10.9\" "
+                                              "(EN 1993-1-8 Table 3.1)") +
+                                        ", found " + jf::shown(v));
+    }
+    f.threads_in_shear_plane = jf::bool_field(value, pointer, "threads_in_shear_plane", false, problems);
+    if (r.has("end_distance"))
+        r.problem("end_distance", "a fin plate's end distances are fixed by first_bolt and plate_depth (and the web's "
+                                  "by bolt_line); give those instead of end_distance");
+    if (r.has("weld")) read_weld(r, d);
+    if (r.has("edge_distance")) {
+        const auto e2 = r.length("edge_distance", std::nullopt);
+        if (e2) f.edge_distance = *e2;
+    }
+    if (problems.size() != before) return;
+    const double d0 = d.bolts.hole_diameter;
+    if (f.edge_distance && *f.edge_distance < 0.5 * d0) {
+        r.problem("edge_distance", "the bolt does not fit the plate: the edge distance " + r.show(*f.edge_distance) +
+                                       " is less than the hole's radius " + r.show(0.5 * d0) +
+                                       ", so the hole runs off the plate's free edge");
+        return;
+    }
+    const double e_min = minimum_edge_distance(d.bolts, r.standard());
+    if (f.edge_distance && *f.edge_distance < e_min - 1e-9)
+        r.problem("edge_distance", "expected an edge distance of at least " + r.show(e_min) + " (" +
+                                       minimum_edge_distance_rule(r.standard()) + "), found " +
+                                       r.show(*f.edge_distance));
+    if (f.weld && f.weld->leg_length() > maximum_fillet_leg(d.plate_thickness, r.standard()) + 1e-9)
+        r.problem("weld", "the weld is larger than the plate allows: a fillet leg of " +
+                              r.show(f.weld->leg_length()) + " on a " + r.show(d.plate_thickness) + " plate, at most " +
+                              r.show(maximum_fillet_leg(d.plate_thickness, r.standard())) + " (" +
+                              maximum_fillet_leg_rule(r.standard()) + ")");
+}
+
+// {"leg": "8 mm"} or {"throat": "5.6 mm"}: one of the two.
+void read_weld(reader& parent, connection_detail& d)
+{
+    const json& v = parent.obj()["weld"];
+    const std::string p = parent.at("weld");
+    problem_list& problems = parent.problems();
+    if (!jf::expect_object(v, p, problems)) return;
+    jf::reject_unknown_keys(v, p, {"leg", "throat"}, problems);
+    const bool leg = v.contains("leg"), throat = v.contains("throat");
+    if (leg == throat) {
+        problems.add(p, "expected the fillet weld's \"leg\" or its \"throat\" (one of the two), found " +
+                            jf::shown(v));
+        return;
+    }
+    reader r(v, p, problems, parent.standard());
+    r.inherit(parent.system());
+    if (const auto size = r.length(leg ? "leg" : "throat", std::nullopt)) d.derivation.weld = fillet_weld{*size, leg};
+}
+
 // The supporting beam of a beam-web support (and only of one).
 void read_support(reader& r, connection_detail& d)
 {
@@ -468,12 +562,12 @@ void check_clear_at_rest(reader& r, const connection_detail& d, const section& b
 }  // namespace
 
 connection_detail read_connection_detail(const nlohmann::json& value, const std::string& pointer, const section& beam,
-                                         problem_list& problems)
+                                         problem_list& problems, design_standard standard)
 {
     connection_detail d;
     const std::size_t before = problems.size();
     if (!jf::expect_object(value, pointer, problems)) return d;
-    reader r(value, pointer, problems);
+    reader r(value, pointer, problems, standard);
 
     const auto type_text = jf::choice_field(value, pointer, "type", detail_type_names(), true, problems);
     if (!type_text) return d;  // which fields apply depends on the type
@@ -505,10 +599,42 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
                                        r.show(d.gap) + "), found " + r.show(d.gap_tolerance));
 
     if (!custom) read_copes(r, d, k, h, before);
+    if (d.type == detail_type::fin_plate) read_derivation_fields(r, d, before);
     read_support(r, d);
     read_centre_of_rotation(r, d, h);
     if (problems.size() == before) check_clear_at_rest(r, d, beam);
     return d;
+}
+
+void check_fin_plate_derivable(const connection_detail& d, const std::string& pointer, design_standard standard,
+                               problem_list& problems, unit_system units)
+{
+    const bolt_layout& b = d.bolts;
+    const double d0 = b.hole_diameter;
+    const auto show = [units](double v) { return format_quantity(v, dims::length, units); };
+    const double top = b.first_bolt, bottom = d.plate_depth - b.first_bolt - (b.rows - 1) * b.pitch;
+    const std::string rule = minimum_edge_distance_rule(standard);
+    const double e_min = minimum_edge_distance(b, standard);
+    const auto at = [&](const std::string& key) { return json_fields::child(pointer, key); };
+    if (top < 0.5 * d0 || bottom < 0.5 * d0) {
+        problems.add(at(top < 0.5 * d0 ? "first_bolt" : "plate_depth"),
+                     "the bolt does not fit the plate: the " + std::string(top < 0.5 * d0 ? "top" : "bottom") +
+                         " bolt's hole (" + show(d0) + ") runs off the plate's " +
+                         (top < 0.5 * d0 ? "top" : "bottom") + " edge");
+        return;
+    }
+    const auto minimum = [&](const std::string& key, const std::string& what, double value) {
+        if (value < e_min - 1e-9)
+            problems.add(at(key), "the joint is derived from the detail (\"from-detail\") only within the code's "
+                                  "rules: expected the " + what + " of at least " + show(e_min) + " (" + rule +
+                                      "), found " + show(value));
+    };
+    minimum("first_bolt", "plate's end distance above the top bolt", top);
+    minimum("plate_depth", "plate's end distance below the bottom bolt", bottom);
+    minimum("bolt_line", "beam web's end distance from the bolt line to the beam end", b.bolt_line);
+    const double e2 = d.derivation.edge_distance.value_or(standard == design_standard::en1993_1_8 ? 2 * b.diameter
+                                                                                                  : 1.5 * b.diameter);
+    if (!d.derivation.edge_distance) minimum("edge_distance", "plate's default edge distance", e2);
 }
 
 }  // namespace pinproof

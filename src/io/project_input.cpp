@@ -192,7 +192,7 @@ struct reader {
         }
         if (!expect_object(j, ptr, problems)) return std::nullopt;
         reject_unknown_keys(j, ptr, {"stiffness", "stiffness_distribution", "moment_resistance", "description", "detail",
-                                     "support_rotation",
+                                     "support_rotation", "stiffness_scatter",
                                      "contact_stiffness", "designed_for_closure", "dependable_lower_bound", "behaviour",
                                      "rotation_capacity"},
                             problems);
@@ -210,7 +210,22 @@ struct reader {
             dist = read_stiffness_distribution(j.at("stiffness_distribution"), child(ptr, "stiffness_distribution"),
                                                EI_over_L.value_or(0.0), problems);
         out.distribution = dist;
-        if (curve_gives_stiffness) {
+        out.stiffness_from_detail = it != j.end() && it->is_string() && *it == "from-detail";
+        out.moment_resistance_from_detail =
+            j.contains("moment_resistance") && j.at("moment_resistance").is_string() && j.at("moment_resistance") == "from-detail";
+        if (out.stiffness_from_detail) {
+            // The range is set once the joint is derived (joints/joint_from_detail.hpp).
+            if (curve_gives_stiffness) {
+                problems.add(sp, "expected no \"stiffness\" with a multilinear law (the curve gives the stiffness), "
+                                 "found \"from-detail\"");
+                ok = false;
+            }
+            if (dist) {
+                problems.add(sp, "expected either \"from-detail\" or a \"stiffness_distribution\", found both: the "
+                                 "derived stiffness and its scatter replace a distribution");
+                ok = false;
+            }
+        } else if (curve_gives_stiffness) {
             // A multilinear curve is the joint's stiffness itself: the slope of its first segment.
             if (it != j.end()) {
                 problems.add(sp, "expected no \"stiffness\" with a multilinear law (the curve gives the stiffness: "
@@ -249,7 +264,8 @@ struct reader {
             ok = s.has_value();
             if (ok) out.range = {*s, *s};
         }
-        auto mr = q(j, ptr, "moment_resistance", dims::moment, false);
+        read_stiffness_scatter(j, ptr, out);
+        auto mr = out.moment_resistance_from_detail ? std::nullopt : q(j, ptr, "moment_resistance", dims::moment, false);
         if (mr && *mr < 0)
             problems.add(child(ptr, "moment_resistance"), "expected a moment resistance of zero or more, found " +
                                                               shown(j.at("moment_resistance")));
@@ -257,8 +273,9 @@ struct reader {
         out.description = string_field(j, ptr, "description", false, problems).value_or("");
         if (j.contains("detail")) {
             // The reader needs the beam's section; a bad section is reported already.
-            if (sec) out.detail = read_connection_detail(j.at("detail"), child(ptr, "detail"), *sec, problems);
+            if (sec) out.detail = read_connection_detail(j.at("detail"), child(ptr, "detail"), *sec, problems, standard);
         }
+        check_derivable(j, ptr, out, standard);
         auto sr = q(j, ptr, "support_rotation", dims::angle, false);
         if (sr && *sr > plausible_support_rotation)
             problems.add(child(ptr, "support_rotation"), "expected a support rotation of at most " +
@@ -285,6 +302,58 @@ struct reader {
         return out;
     }
 
+    // "stiffness_scatter": {"min": 0.5, "max": 2}, the factors on the derived
+    // S_j,ini that bound the joint's range; only with "stiffness": "from-detail".
+    void read_stiffness_scatter(const json& j, const std::string& ptr, joint& out)
+    {
+        if (!j.contains("stiffness_scatter")) return;
+        const std::string p = child(ptr, "stiffness_scatter");
+        if (!out.stiffness_from_detail) {
+            problems.add(p, "applies only to \"stiffness\": \"from-detail\" (it bounds the derived stiffness), found "
+                            "a stiffness given directly");
+            return;
+        }
+        const json& v = j.at("stiffness_scatter");
+        if (!expect_object(v, p, problems)) return;
+        reject_unknown_keys(v, p, {"min", "max"}, problems);
+        const auto lo = number_field(v, p, "min", true, problems);
+        const auto hi = number_field(v, p, "max", true, problems);
+        if (lo && !(*lo > 0 && *lo <= 1))
+            problems.add(child(p, "min"), "expected a factor above 0 and at most 1 on the derived stiffness, found " +
+                                              shown(v.at("min")));
+        else if (hi && !(*hi >= 1 && *hi <= 100))
+            problems.add(child(p, "max"), "expected a factor of at least 1 and at most 100 on the derived stiffness, "
+                                          "found " + shown(v.at("max")));
+        else if (lo && hi)
+            out.stiffness_scatter = std::make_pair(*lo, *hi);
+    }
+
+    // "from-detail" needs a detail the library derives: a fin plate, within the
+    // code's edge-distance rules; an AISC 360 project derives the moment
+    // resistance only (AISC 360 gives no component stiffness).
+    void check_derivable(const json& j, const std::string& ptr, const joint& out, design_standard standard)
+    {
+        if (!out.stiffness_from_detail && !out.moment_resistance_from_detail) return;
+        const std::string field = out.stiffness_from_detail ? "stiffness" : "moment_resistance";
+        if (!j.contains("detail")) {
+            problems.add(child(ptr, field), "\"from-detail\" needs the joint's \"detail\" (a fin plate), found none");
+            return;
+        }
+        if (!out.detail || !j.at("detail").is_object()) return;  // reported already
+        const std::string dp = child(ptr, "detail");
+        if (out.detail->type != detail_type::fin_plate) {
+            problems.add(child(dp, "type"), "\"from-detail\" derives fin plates only (EN 1993-1-8 components; AISC "
+                                            "360 single plates); give the " + field + " of a \"" +
+                                                to_string(out.detail->type) + "\" joint directly");
+            return;
+        }
+        if (out.stiffness_from_detail && standard == design_standard::aisc360)
+            problems.add(child(ptr, "stiffness"), "expected a stiffness range in an AISC 360 project: AISC 360 gives no "
+                                                  "component stiffness for a single plate, so \"from-detail\" derives "
+                                                  "the moment resistance only; found \"from-detail\"");
+        check_fin_plate_derivable(*out.detail, dp, standard, problems, system);
+    }
+
     // The law and the rest of the joint must agree: a law that needs the
     // moment resistance has one, the stiffness range is finite and, where the
     // law needs it, above zero.
@@ -292,9 +361,12 @@ struct reader {
     {
         const joint_behaviour& b = *out.behaviour;
         const std::string bp = child(ptr, "behaviour");
-        if (b.law == joint_law_kind::ec3_curve && !out.moment_resistance)
+        if (b.law == joint_law_kind::ec3_curve && !out.moment_resistance && !out.moment_resistance_from_detail)
             problems.add(child(bp, "law"), "expected a \"moment_resistance\" on the joint with the ec3-curve law (EN "
                                            "1993-1-8 6.3.1(6) defines it up to M_j,Rd), found none");
+        // A derived stiffness is finite and above zero; the plastic stiffness is
+        // checked against it once derived (joints/joint_from_detail.hpp).
+        if (out.stiffness_from_detail) return;
         if (out.range.min.is_rigid() || out.range.max.is_rigid()) {
             problems.add(child(ptr, "stiffness"), "expected a finite stiffness with a behaviour (a law starts from "
                                                   "S_j,ini), found \"rigid\"");

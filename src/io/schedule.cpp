@@ -615,6 +615,8 @@ bool attach_detail_geometry(beam& b, const std::array<const catalogue_detail*, 2
         const double x = v.value_or(-1.0);
         section_key.append(reinterpret_cast<const char*>(&x), sizeof x);
     }
+    // The row's standard decides the detail's grades and edge-distance rules.
+    section_key.push_back(out.settings.standard == design_standard::aisc360 ? 'U' : 'E');
     for (int i = 0; i < 2; ++i) {
         const catalogue_detail& d = *details[i];
         if (!d.geometry.is_object()) continue;
@@ -627,7 +629,7 @@ bool attach_detail_geometry(beam& b, const std::array<const catalogue_detail*, 2
             r.type = d.type;
             r.pointer = d.pointer;
             r.geometry = d.geometry;
-            r.detail = read_connection_detail(g, d.pointer + "/geometry", b.sec, r.problems);
+            r.detail = read_connection_detail(g, d.pointer + "/geometry", b.sec, r.problems, out.settings.standard);
             if (read_details.size() > 4096) read_details.clear();
             cached = read_details.insert_or_assign({&d, section_key}, std::move(r)).first;
         }

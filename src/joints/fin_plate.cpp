@@ -15,7 +15,12 @@ const double sqrt3 = std::sqrt(3.0);
 steel_material plate_steel(plate_grade g)
 {
     steel_material s;
-    s.grade = g == plate_grade::s355 ? steel_grade::s355 : steel_grade::s275;
+    switch (g) {
+    case plate_grade::s275: s.grade = steel_grade::s275; break;
+    case plate_grade::s355: s.grade = steel_grade::s355; break;
+    case plate_grade::a36: s.grade = steel_grade::a36; break;
+    case plate_grade::a572_50: s.grade = steel_grade::a572_50; break;
+    }
     return s;
 }
 
@@ -124,6 +129,8 @@ fin_plate_joint derive_fin_plate(const connection_detail& d, const section& beam
     if (d.type != detail_type::fin_plate) throw std::invalid_argument("the detail is not a fin plate");
     if (is_us_grade(in.bolts))
         throw std::invalid_argument("EN 1993-1-8 fin plate components take EN bolt classes (4.6, 8.8, 10.9)");
+    if (d.grade == plate_grade::a36 || d.grade == plate_grade::a572_50)
+        throw std::invalid_argument("EN 1993-1-8 fin plate components take EN 10025-2 plates (S275, S355)");
     if (!beam.web_thickness) throw std::invalid_argument("the beam's web thickness is needed for bearing on the web");
     const geometry g = geometry_of(d, in);
     const steel_material ps = plate_steel(d.grade);

@@ -202,6 +202,7 @@ private:
     void beam_section(const beam_assessment& ba);
     void inputs(const beam& b);
     void joints(const beam& b, const beam_assessment& ba);
+    void derived_joints(const beam& b);
     void combination_block(const beam& b, const combination_result& r);
     void results_table(const combination_result& r);
     void span_diagrams(const beam& b, const combination_result& r);
@@ -465,6 +466,43 @@ void report_writer::joints(const beam& b, const beam_assessment& ba)
     }
     o_ << "</table>\n";
     for (const auto& n : ba.notes) o_ << "<p class=\"note\">Note: " << esc(n) << "</p>\n";
+}
+
+// Each joint derived from its detail: a table of its components with the
+// governing one marked, then its resistances, stiffness and defaults.
+void report_writer::derived_joints(const beam& b)
+{
+    for (const beam_end e : {beam_end::start, beam_end::end}) {
+        const joint& jt = b.at(e);
+        if (!jt.derived) continue;
+        const derived_joint& d = *jt.derived;
+        o_ << "<h4>Joint at the " << to_string(e) << " from its detail (" << esc(d.basis) << ", "
+           << esc(to_string(jt.detail->type)) << ")</h4>\n<table>\n<tr><th>Component</th><th>Resistance</th>"
+              "<th>Per bolt</th><th>Source</th><th></th></tr>\n";
+        for (const joint_component& c : d.components) {
+            const bool governs = c.id == d.governing;
+            o_ << "<tr" << (governs ? " class=\"governs\"" : "") << "><td>" << (governs ? "<strong>" : "") << esc(c.id)
+               << (governs ? "</strong>" : "") << "</td><td class=\"num\">"
+               << (c.resistance ? u_.q(*c.resistance, dims::force) : std::string("&ndash;")) << "</td><td class=\"num\">"
+               << (c.per_bolt ? u_.q(*c.per_bolt, dims::force) : std::string("&ndash;")) << "</td><td>" << esc(c.source)
+               << "</td><td>" << (governs ? "<strong>governs</strong>" : "") << "</td></tr>\n";
+        }
+        o_ << "</table>\n<p>Shear resistance " << u_.q(d.shear_resistance, dims::force) << " (" << esc(d.governing)
+           << " governs); moment resistance " << u_.q(d.moment_resistance, dims::moment) << " ("
+           << esc(d.moment_governing) << ")" << (jt.moment_resistance_from_detail ? ", used as the joint's" : "") << "; ";
+        if (d.initial_stiffness)
+            o_ << "initial stiffness S<sub>j,ini</sub> " << u_.q(*d.initial_stiffness, dims::rotational_stiffness)
+               << ", range " << format_number(d.scatter_min, 3) << " to " << format_number(d.scatter_max, 3)
+               << " times it" << (d.scatter_default ? " (default)" : "") << " = "
+               << u_.q(*d.stiffness_min, dims::rotational_stiffness) << " .. " << u_.q(*d.stiffness_max, dims::rotational_stiffness) << (jt.stiffness_from_detail ? ", used as the joint's range" : "");
+        else
+            o_ << "initial stiffness not derived (" << esc(d.basis) << " gives no component stiffness)";
+        o_ << "; free rotation before the bolts bear " << u_.q(d.free_rotation, dims::angle)
+           << "; rotation capacity not derived.</p>\n";
+        for (const auto& s : d.defaults) o_ << "<p class=\"note\">Default: " << esc(s) << "</p>\n";
+        for (const auto& s : d.limits_exceeded)
+            o_ << "<p class=\"note\">Beyond the conventional configuration: " << esc(s) << "</p>\n";
+    }
 }
 
 void report_writer::combination_block(const beam& b, const combination_result& r)
@@ -738,6 +776,7 @@ void report_writer::beam_section(const beam_assessment& ba)
     o_ << "<section class=\"beam\" id=\"beam-" << ++beams_ << "\">\n<h2>Beam " << esc(b.id) << "</h2>\n";
     inputs(b);
     joints(b, ba);
+    derived_joints(b);
     for (const auto& r : ba.combinations) combination_block(b, r);
     sweep_chart(b);
     beam_lines(b);

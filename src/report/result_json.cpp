@@ -112,6 +112,34 @@ json behaviour_json(const joint_assessment& j, const joint& jt)
     return out;
 }
 
+// The joint worked out from its detail (model/derived_joint.hpp), in SI.
+json derived_json(const derived_joint& d)
+{
+    json components = json::array();
+    for (const joint_component& c : d.components)
+        components.push_back({{"id", c.id},
+                              {"resistance", optional_number(c.resistance)},
+                              {"per_bolt", optional_number(c.per_bolt)},
+                              {"stiffness", optional_number(c.stiffness)},
+                              {"source", c.source}});
+    json out;
+    out["basis"] = d.basis;
+    out["initial_stiffness"] = optional_number(d.initial_stiffness);
+    out["stiffness_min"] = optional_number(d.stiffness_min);
+    out["stiffness_max"] = optional_number(d.stiffness_max);
+    out["stiffness_scatter"] = {{"min", number(d.scatter_min)}, {"max", number(d.scatter_max)}, {"default", d.scatter_default}};
+    out["free_rotation"] = number(d.free_rotation);
+    out["shear_resistance"] = number(d.shear_resistance);
+    out["moment_resistance"] = number(d.moment_resistance);
+    out["governing"] = d.governing;
+    out["moment_governing"] = d.moment_governing;
+    out["rotation_capacity"] = optional_number(d.rotation_capacity);
+    out["components"] = components;
+    out["defaults"] = d.defaults;
+    out["limits_exceeded"] = d.limits_exceeded;
+    return out;
+}
+
 json joint_json(const joint_assessment& j, const beam& b)
 {
     json out;
@@ -127,6 +155,7 @@ json joint_json(const joint_assessment& j, const beam& b)
     out["detail"] = j.detail ? detail_json(*j.detail, b.at(j.end)) : json(nullptr);
     out["behaviour"] = behaviour_json(j, b.at(j.end));
     out["rotation_capacity"] = optional_number(b.at(j.end).rotation_capacity);
+    out["derived"] = b.at(j.end).derived ? derived_json(*b.at(j.end).derived) : json(nullptr);
     return out;
 }
 

@@ -138,6 +138,47 @@ void joint_table(std::ostringstream& o, const project& p, const beam_assessment&
     }
 }
 
+// Each joint derived from its detail: its components, the governing one
+// marked, the resistances and stiffness, and every default taken.
+void derived_joints(std::ostringstream& o, const project& p, const beam_assessment& a)
+{
+    const beam& b = *a.input;
+    const units_view u{p.units};
+    for (const beam_end e : {beam_end::start, beam_end::end}) {
+        const joint& jt = b.at(e);
+        if (!jt.derived) continue;
+        const derived_joint& d = *jt.derived;
+        o << "\n  Joint at the " << to_string(e) << " from its detail (" << d.basis << ", "
+          << to_string(jt.detail->type) << "; forces in " << u.unit(dims::force) << ")\n";
+        o << "    " << pad("component", 22) << pad("resistance", 13) << pad("per bolt", 11) << "source\n";
+        for (const joint_component& c : d.components) {
+            const bool governs = c.id == d.governing;
+            o << "  " << (governs ? "> " : "  ") << pad(c.id, 22)
+              << pad(c.resistance ? u.num(*c.resistance, dims::force) : std::string("-"), 13)
+              << pad(c.per_bolt ? u.num(*c.per_bolt, dims::force) : std::string("-"), 11)
+              << wrap(c.source, 60, std::string(4 + 22 + 13 + 11, ' ')) << "\n";
+        }
+        o << "    > governs: shear resistance " << u.num(d.shear_resistance, dims::force) << " " << u.unit(dims::force)
+          << " (" << d.governing << ")\n";
+        o << "    moment resistance " << u.num(d.moment_resistance, dims::moment) << " " << u.unit(dims::moment) << " ("
+          << d.moment_governing << ")" << (jt.moment_resistance_from_detail ? ", used as the joint's (from-detail)" : "")
+          << "\n";
+        if (d.initial_stiffness)
+            o << "    initial stiffness S_j,ini " << u.num(*d.initial_stiffness, dims::rotational_stiffness) << " "
+              << u.unit(dims::rotational_stiffness) << "; range " << format_number(d.scatter_min, 3) << " to "
+              << format_number(d.scatter_max, 3) << " times it" << (d.scatter_default ? " (default)" : "") << " = "
+              << u.num(*d.stiffness_min, dims::rotational_stiffness) << " .. "
+              << u.num(*d.stiffness_max, dims::rotational_stiffness) << " " << u.unit(dims::rotational_stiffness)
+              << (jt.stiffness_from_detail ? ", used as the joint's range (from-detail)" : "") << "\n";
+        else
+            o << "    initial stiffness: not derived (" << d.basis << " gives no component stiffness)\n";
+        o << "    free rotation before the bolts bear " << u.num(d.free_rotation, dims::angle) << " " << u.unit(dims::angle)
+          << "; rotation capacity not derived\n";
+        for (const auto& s : d.defaults) o << "    default: " << s << "\n";
+        for (const auto& s : d.limits_exceeded) o << "    beyond the conventional configuration: " << s << "\n";
+    }
+}
+
 // The end gap of each joint with a detail, and the state after closure.
 void end_gaps(std::ostringstream& o, const project& p, const beam_assessment& a)
 {
@@ -296,6 +337,7 @@ void beam_block(std::ostringstream& o, const project& p, const beam_assessment& 
 {
     beam_heading(o, p, a);
     joint_table(o, p, a);
+    derived_joints(o, p, a);
     end_gaps(o, p, a);
     combination_tables(o, p, a);
     check_list(o, p, a);

@@ -231,7 +231,9 @@ TEST_CASE("cli check --json - writes the result JSON on stdout with the required
                                            "rotation-demand-start", "rotation-demand-end", "deflection",
                                            "gap-closure-start",     "gap-closure-end",
                                            "strength-class-start",  "strength-class-end",
-                                           "joint-ductility-start", "joint-ductility-end"};
+                                           "joint-ductility-start", "joint-ductility-end",
+                                           "joint-shear-start",     "joint-shear-end",
+                                           "declared-resistance-start", "declared-resistance-end"};
     for (const auto& b : j["beams"]) {
         CAPTURE(b.value("id", std::string("?")));
         REQUIRE(has_keys(b, {"id", "verdict", "checks", "joints", "combinations"}));

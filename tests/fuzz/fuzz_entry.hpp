@@ -20,6 +20,7 @@
 #include <string>
 #include <string_view>
 
+#include "pinproof/joints/joint_from_detail.hpp"
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/batch/batch.hpp"
 #include "pinproof/io/detail_catalogue.hpp"
@@ -94,6 +95,7 @@ inline void project_input(std::string_view text, const std::string& details_file
         project_sources sources;
         sources.details_file = details_file;
         p = parse_project(text, sources);
+        derive_joints(p);
     } catch (const input_error& e) {
         require_well_formed(e, false);
         return;
@@ -194,7 +196,8 @@ inline void catalogue_input(std::string_view text)
     resolve_detail_references(doc, c, problems);
     require(problems.empty(), "an id of the catalogue not found in it");
     try {
-        const project p = read_project(doc);
+        project p = read_project(doc);
+        derive_joints(p);
         outputs_of(assess_project(p));
     } catch (const input_error& e) {
         require_well_formed(e, false);

@@ -31,6 +31,7 @@
 #include "pinproof/model/project.hpp"
 #include "pinproof/report/text_report.hpp"
 #include "pinproof/io/project_input.hpp"
+#include "pinproof/joints/joint_from_detail.hpp"
 
 using namespace pinproof;
 
@@ -97,7 +98,8 @@ TEST_CASE("the report is self-contained and carries verdict and caution and ever
 {
     const std::string bytes = read_text(example);
     REQUIRE(!bytes.empty());
-    const project p = parse_project(bytes);
+    project p = parse_project(bytes);
+    derive_joints(p);  // the example derives its joints ("from-detail")
     const project_assessment a = assess_project(p);
     const std::string html = calculation_report_html(p, a, test_info(bytes));
 
@@ -141,7 +143,8 @@ TEST_CASE("a failed check is written FAIL with the fail class and the verdict do
     auto doc = nlohmann::json::parse(read_text(example));
     // A stiff joint fails the EN 1993-1-8 nominally pinned boundary.
     doc["beams"][0]["joints"]["start"]["stiffness"]["max"] = "50000 kN*m/rad";
-    const project p = read_project(doc);
+    project p = read_project(doc);
+    derive_joints(p);  // the example derives its joints ("from-detail")
     const project_assessment a = assess_project(p);
     REQUIRE(!a.beams[0].holds());
     const std::string html = calculation_report_html(p, a, test_info(doc.dump()));
@@ -155,7 +158,8 @@ TEST_CASE("user strings are escaped for HTML [SELF]")
     doc["title"] = "Bay <b>1</b> & \"2\"";
     doc["beams"][0]["id"] = "B<1>";
     doc["beams"][0]["description"] = "<script>x</script> & co";
-    const project p = read_project(doc);
+    project p = read_project(doc);
+    derive_joints(p);  // the example derives its joints ("from-detail")
     const project_assessment a = assess_project(p);
     report_info info = test_info(doc.dump());
     info.input_file = "in<put>.json";
@@ -171,7 +175,8 @@ TEST_CASE("user strings are escaped for HTML [SELF]")
 
 TEST_CASE("beam-line intersections equal the analysed corner states [BL] [EX] 1e-9 relative")
 {
-    const project p = load_project_file(example);
+    project p = load_project_file(example);
+    derive_joints(p);  // the example derives its joints ("from-detail")
     const project_assessment a = assess_project(p);
     for (const auto& ba : a.beams) {
         const beam& b = *ba.input;
@@ -239,6 +244,7 @@ TEST_CASE("text report [ECMA48 5.4]: an escape sequence in an id or title cannot
     // The readers refuse control characters; a project built in code is not
     // read, so the report escapes what it prints (core/printable_text.hpp).
     project p = load_project_file(example);
+    derive_joints(p);  // the example derives its joints ("from-detail")
     p.title = "Mezzanine\x1b]0;owned\x07";
     p.beams.front().id = "B1\x1b[8m";
     const std::string text = text_report(assess_project(p), "test");

@@ -39,18 +39,11 @@
 
 #include "pinproof/joints/bolt.hpp"
 #include "pinproof/model/connection_detail.hpp"
+#include "pinproof/model/derived_joint.hpp"
 #include "pinproof/model/section.hpp"
 #include "pinproof/model/steel_grade.hpp"
 
 namespace pinproof {
-
-struct joint_component {
-    std::string id;                   // "bolt-shear", "bolt-bearing-plate", ...
-    std::optional<double> resistance; // N, against the end shear (nullopt: not critical / not derived)
-    std::optional<double> per_bolt;   // N, the resistance of one bolt where it applies
-    std::optional<double> stiffness;  // N/m, translational stiffness of one bolt where it applies
-    std::string source;               // clause or guide, and any note
-};
 
 struct fin_plate_inputs {
     bolt_grade bolts = bolt_grade::g8_8;

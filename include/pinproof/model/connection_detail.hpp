@@ -17,6 +17,7 @@
 #include <vector>
 
 #include "pinproof/core/errors.hpp"
+#include "pinproof/model/design_standard.hpp"
 #include "pinproof/model/section.hpp"
 
 namespace pinproof {
@@ -77,8 +78,27 @@ struct bolt_layout {
     double bolt_line = 0;      // fin plate: from the beam end to the bolt line in the beam web
 };
 
-enum class plate_grade { s275, s355 };
-std::string to_string(plate_grade g);  // "S275", "S355"
+// Plate grades of the fittings: EN 10025-2 for EN projects, ASTM for US projects.
+enum class plate_grade { s275, s355, a36, a572_50 };
+std::string to_string(plate_grade g);  // "S275", "S355", "A36", "A572-50"
+
+// A fillet weld by its leg or its throat (throat = leg / sqrt 2 for equal legs).
+struct fillet_weld {
+    double size = 0;   // m
+    bool leg = true;   // false: `size` is the throat
+    double throat() const;
+    double leg_length() const;
+};
+
+// What the joint's derivation from its detail needs beyond the geometry
+// (joints/joint_from_detail.hpp). Each is nullopt where not given; the
+// derivation then takes its documented default and reports it as a default.
+struct derivation_fields {
+    std::optional<std::string> bolt_grade;  // "4.6", "8.8", "10.9" (EN) or "A325", "A490" (US)
+    std::optional<bool> threads_in_shear_plane;
+    std::optional<fillet_weld> weld;        // the fitting's welds to the support, each side
+    std::optional<double> edge_distance;    // fin plate: bolt line to the plate's free vertical edge
+};
 
 struct connection_detail {
     detail_type type = detail_type::fin_plate;
@@ -97,7 +117,9 @@ struct connection_detail {
     double plate_depth = 0;
     double plate_thickness = 0;  // fin plate or end plate thickness; cleat thickness
     plate_grade grade = plate_grade::s275;
+    bool grade_is_default = true;  // the grade was not given
     bolt_layout bolts;
+    derivation_fields derivation;
 
     std::optional<cope> cope_top;
     std::optional<cope> cope_bottom;
@@ -108,5 +130,21 @@ struct connection_detail {
     // custom: the beam-end outline as a simple polygon, in order (either sense).
     std::vector<detail_point> outline;
 };
+
+// The code's smallest distance from a bolt hole's centre to an edge or end of
+// a ply, in either direction:
+//   EN 1993-1-8:2005 Table 3.3: e_1, e_2 >= 1.2 d_0 (reference pack 7, from memory);
+//   AISC 360-16 Table J3.4 (from memory): 1/2 in bolt 3/4 in, 5/8 7/8, 3/4 1, 7/8 1 1/8,
+//   1 1 1/4, 1 1/8 1 1/2, 1 1/4 1 5/8, above 1 1/4 in 1.25 d; a diameter between two
+//   rows takes the larger row's value.
+double minimum_edge_distance(const bolt_layout& b, design_standard s);
+std::string minimum_edge_distance_rule(design_standard s);  // the rule in words, with its source
+
+// The largest fillet leg a plate of thickness t takes:
+//   AISC 360-16 J2.2b (from memory): t below 1/4 in, else t - 1/16 in;
+//   EN projects: t, the leg no larger than the thinner part joined (EN 1993-1-8
+//   sets no maximum; common practice, no source).
+double maximum_fillet_leg(double plate_thickness, design_standard s);
+std::string maximum_fillet_leg_rule(design_standard s);
 
 }  // namespace pinproof

@@ -4,8 +4,10 @@
 
 #include <optional>
 #include <string>
+#include <utility>
 
 #include "pinproof/model/connection_detail.hpp"
+#include "pinproof/model/derived_joint.hpp"
 #include "pinproof/model/joint_behaviour.hpp"
 #include "pinproof/model/stiffness.hpp"
 #include "pinproof/model/stiffness_distribution.hpp"
@@ -44,6 +46,17 @@ struct joint {
     std::optional<joint_behaviour> behaviour;
     // Rotation (rad) the joint can undergo without fracturing, where known.
     std::optional<double> rotation_capacity;
+    // "from-detail": the stiffness range or the moment resistance is the one
+    // derived from the detail (joints/joint_from_detail.hpp fills them in
+    // before any analysis); the stiffness range is S_j,ini times the scatter
+    // factors, {0.5, 2} unless given.
+    bool stiffness_from_detail = false;
+    bool moment_resistance_from_detail = false;
+    std::optional<std::pair<double, double>> stiffness_scatter;
+    // The joint worked out from its detail, where the detail type is derived.
+    std::optional<derived_joint> derived;
+    // Why a fin plate was not derived (the derivation's refusal), where it was not.
+    std::string not_derived_reason;
 };
 
 enum class beam_end { start, end };
