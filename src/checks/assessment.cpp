@@ -5,6 +5,7 @@
 #include <utility>
 
 #include "pinproof/core/errors.hpp"
+#include "pinproof/model/natural_frequency.hpp"
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/joints/joint_law.hpp"
 #include "pinproof/checks/joint_strength.hpp"
@@ -113,6 +114,38 @@ beam_state solve_state(const beam_model& model, const beam& b, const combination
     return solve_with_laws(model, b, c, s, e).state;
 }
 
+// The first natural frequency of a vibration combination's states. Vibration is
+// of small amplitude: each joint acts with its stiffness of the state (for a
+// joint with a law, the law's initial stiffness at that bound).
+combination_result::frequencies frequencies_of(const beam& b, const combination& c)
+{
+    const std::vector<load> loads = factored_loads(b.loads, c);
+    const auto f = [&](stiffness s, stiffness e) {
+        try {
+            return first_natural_frequency(b.span, b.EI(), loads, s, e);
+        } catch (const std::invalid_argument& x) {
+            // The reader refuses a vibration combination without mass or with an upward load.
+            throw internal_error(std::string("the frequency of combination ") + c.name + " could not be found: " + x.what());
+        }
+    };
+    combination_result::frequencies out;
+    out.pinned = f(stiffness::pinned(), stiffness::pinned());
+    out.fixed = f(stiffness::rigid(), stiffness::rigid());
+    const auto& rs = b.start.range;
+    const auto& re = b.end.range;
+    const std::pair<stiffness, stiffness> at[] = {{rs.min, re.min}, {rs.min, re.max}, {rs.max, re.min}, {rs.max, re.max}};
+    for (std::size_t i = 0; i < 4; ++i) {
+        // A degenerate range (a sweep point) repeats a corner: solve it once.
+        std::optional<double> same;
+        for (std::size_t k = 0; k < i; ++k)
+            if (at[k].first == at[i].first && at[k].second == at[i].second) same = out.corners[k];
+        out.corners.push_back(same ? *same : f(at[i].first, at[i].second));
+    }
+    out.range = {*std::min_element(out.corners.begin(), out.corners.end()),
+                 *std::max_element(out.corners.begin(), out.corners.end())};
+    return out;
+}
+
 combination_result analyse_combination(const beam& b, const combination& c, bool search_interior)
 {
     combination_result out;
@@ -124,6 +157,7 @@ combination_result analyse_combination(const beam& b, const combination& c, bool
     const auto& re = b.end.range;
     const auto solve = [&](stiffness s, stiffness e) { return solve_state(model, b, c, s, e); };
     out.corners = {solve(rs.min, re.min), solve(rs.min, re.max), solve(rs.max, re.min), solve(rs.max, re.max)};
+    if (c.use == limit_state::vibration) out.frequency = frequencies_of(b, c);
     if (c.use == limit_state::strength) {
         if (const auto Mpl = b.plastic_moment()) {
             try {
@@ -460,6 +494,58 @@ check deflection_check(const project& p, const beam& b, const std::vector<combin
     return c;
 }
 
+// The first natural frequency against its least value (limits.frequency), with
+// the pinned-end frequency beside the range and the 18/sqrt(delta) estimate
+// (model/natural_frequency.hpp) as the cross-check engineers know.
+check frequency_check(const project& p, const beam& b, const std::vector<combination_result>& combos)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "frequency";
+    c.dim = dims::frequency;
+    c.limit_is_minimum = true;
+    const combination_result* gov = nullptr;
+    for (const auto& r : combos)
+        if (r.frequency && (!gov || r.frequency->range.min < gov->frequency->range.min)) gov = &r;
+    if (!gov) {
+        c.status = check_status::not_applicable;
+        c.message = "No vibration combination is given (a combination with use \"vibration\", such as G + 0.1 Q), "
+                    "so the first natural frequency is not found or checked.";
+        return c;
+    }
+    const auto& f = *gov->frequency;
+    c.value = f.range.min;
+    // The estimate from the deflection of the state with the lowest frequency.
+    const auto lowest = static_cast<std::size_t>(std::min_element(f.corners.begin(), f.corners.end()) - f.corners.begin());
+    const double delta = gov->corners.at(lowest).max_deflection, delta_pinned = gov->pinned.max_deflection;
+    std::string estimate;
+    if (delta > 0 && delta_pinned > 0)
+        estimate = "; the estimate 18/sqrt(delta) gives " + fmt(frequency_from_deflection(delta), dims::frequency) +
+                   " (delta " + fmt(delta, dims::length) + ") and " +
+                   fmt(frequency_from_deflection(delta_pinned), dims::frequency) + " with pins";
+    const std::string text = "The first natural frequency is at least " + fmt(f.range.min, dims::frequency) +
+                             " over the stiffness range (" + fmt(f.pinned, dims::frequency) + " with ideal pins, " +
+                             fmt(f.fixed, dims::frequency) + " fixed), combination " + gov->comb.name + estimate;
+    if (!b.frequency_limit) {
+        c.status = check_status::not_applicable;
+        c.message = text + ". No frequency limit is given (limits.frequency), so it is not checked.";
+        return c;
+    }
+    c.limit = *b.frequency_limit;
+    const std::string against = text + ". Least frequency (limits.frequency): " + fmt(*c.limit, dims::frequency);
+    if (f.range.min >= *c.limit) {
+        c.status = check_status::pass;
+        c.message = against + ".";
+        if (f.pinned < *c.limit)
+            c.message += " With ideal pins the beam would not reach it: the check relies on the stiffness of the joints.";
+        return c;
+    }
+    c.status = check_status::fail;
+    c.message = against + ": the beam is too lively at its lower-bound joint stiffness. Stiffen the beam, or assess "
+                          "the floor's response to walking.";
+    return c;
+}
+
 struct rotation_extremes {
     double sagging = 0, hogging = 0;
     std::string sagging_combination, hogging_combination;
@@ -725,6 +811,7 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(moment_reversal_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));
+    a.checks.push_back(frequency_check(p, b, a.combinations));
     assess_details(p, b, a, options.find_min_gap);
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(gap_closure_check(p, b, a.joint_at(e)));
     for (beam_end e : {beam_end::start, beam_end::end})

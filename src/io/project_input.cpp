@@ -413,7 +413,7 @@ struct reader {
             reject_unknown_keys(c, p, {"name", "use", "factors"}, problems);
             combination out_c;
             auto name = string_field(c, p, "name", true, problems);
-            auto use = choice_field(c, p, "use", {"strength", "service"}, true, problems);
+            auto use = choice_field(c, p, "use", {"strength", "service", "vibration"}, true, problems);
             if (name && name->empty()) problems.add(child(p, "name"), "expected a combination name, found an empty string");
             if (name && !names.insert(*name).second)
                 problems.add(child(p, "name"), "expected a unique combination name, found \"" + *name +
@@ -456,7 +456,9 @@ struct reader {
             }
             if (!ok) continue;
             out_c.name = *name;
-            out_c.use = *use == "strength" ? limit_state::strength : limit_state::service;
+            out_c.use = *use == "strength"  ? limit_state::strength
+                        : *use == "service" ? limit_state::service
+                                            : limit_state::vibration;
             out.push_back(out_c);
         }
         return out;
@@ -497,6 +499,46 @@ struct reader {
         out.absolute = *v;
         if (out.text.empty()) out.text = format_quantity(*v, dims::length, unit_system::si);
         return out;
+    }
+
+    // A vibration combination gives the mass that vibrates (natural_frequency.hpp):
+    // each of its factored loads must weigh down (a mass is never negative) and
+    // together they must weigh something. A frequency limit needs such a
+    // combination, or it would silently check nothing.
+    void check_vibration(const json& b, const std::string& ptr, const std::vector<combination>& combos,
+                         const std::vector<load>& loads, bool has_limit)
+    {
+        bool any = false;
+        for (std::size_t i = 0; i < combos.size(); ++i) {
+            const combination& c = combos[i];
+            if (c.use != limit_state::vibration) continue;
+            any = true;
+            // The pointer of the combination as written (invalid ones were skipped).
+            std::string cp = child(child(ptr, "combinations"), i);
+            const json& arr = b.at("combinations");
+            for (std::size_t k = 0; k < arr.size(); ++k)
+                if (arr[k].is_object() && arr[k].contains("name") && arr[k]["name"] == c.name)
+                    cp = child(child(ptr, "combinations"), k);
+            double total = 0;
+            std::string upward;
+            for (const load& l : factored_loads(loads, c)) {
+                if (l.kind == load_kind::moment) continue;
+                const bool up = l.value < 0 || (l.kind == load_kind::linear && l.value_end < 0);
+                if (up && upward.empty()) upward = l.load_case;
+                total += total_force(l);
+            }
+            if (!upward.empty())
+                problems.add(child(cp, "factors"),
+                             "expected factors that leave every load of a vibration combination downward (its mass, "
+                             "load / g, cannot be negative), found an upward load of case \"" + upward + "\"");
+            else if (!(total > 0))
+                problems.add(child(cp, "factors"),
+                             "expected a vibration combination that carries some mass (downward load), found none");
+        }
+        if (has_limit && !any)
+            problems.add(child(child(ptr, "limits"), "frequency"),
+                         "expected a combination with \"use\": \"vibration\" (the mass that vibrates, for example "
+                         "{\"G\": 1.0, \"Q\": 0.1}) to check the frequency limit against, found none");
     }
 
     std::optional<beam> read_beam(const json& b, const std::string& ptr, design_standard standard)
@@ -546,9 +588,13 @@ struct reader {
         }
         auto lim = b.find("limits");
         if (lim != b.end() && expect_object(*lim, child(ptr, "limits"), problems)) {
-            reject_unknown_keys(*lim, child(ptr, "limits"), {"deflection"}, problems);
+            reject_unknown_keys(*lim, child(ptr, "limits"), {"deflection", "frequency"}, problems);
             out.deflection = read_deflection_limit(*lim, child(ptr, "limits"));
+            if (lim->contains("frequency"))
+                out.frequency_limit = plausible(*lim, child(ptr, "limits"), "frequency", dims::frequency, true,
+                                                plausible_frequency_limit);
         }
+        check_vibration(b, ptr, combos, loads, out.frequency_limit.has_value());
         out.stiffness_correlation = read_stiffness_correlation(b, ptr, problems).value_or(1);
         if (b.contains("steel")) out.steel = read_steel(b.at("steel"), child(ptr, "steel"), standard, problems, &system);
         if (!id || !span || !E || !sec || !js || !je) return std::nullopt;

@@ -12,6 +12,7 @@
 #include "pinproof/report/detail_drawing.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/checks/gap_geometry.hpp"
+#include "pinproof/model/natural_frequency.hpp"
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/report/svg_chart.hpp"
 #include "pinproof/checks/sweep.hpp"
@@ -184,6 +185,7 @@ private:
     void joints(const beam& b, const beam_assessment& ba);
     void combination_block(const beam& b, const combination_result& r);
     void results_table(const combination_result& r);
+    void frequency_rows(const combination_result& r);
     void span_diagrams(const beam& b, const combination_result& r);
     void sweep_chart(const beam& b);
     void beam_lines(const beam& b);
@@ -415,7 +417,30 @@ void report_writer::results_table(const combination_result& r)
            << cell(r.envelope.ranges[i].min) << "</td><td class=\"num\">" << cell(r.envelope.ranges[i].max)
            << "</td><td class=\"num\">" << cell(r.fixed.*(f[i].member)) << "</td></tr>\n";
     }
+    if (r.frequency) frequency_rows(r);
     o_ << "</table>\n";
+}
+
+// A vibration combination: the first natural frequency of each state, and the
+// 18/sqrt(delta) estimate from its deflection (model/natural_frequency.hpp).
+void report_writer::frequency_rows(const combination_result& r)
+{
+    const auto& fr = *r.frequency;
+    const auto row = [&](const std::string& label, const std::string (&cells)[4]) {
+        o_ << "<tr><td>" << esc(label) << "</td><td>" << esc(u_.sym(dims::frequency)) << "</td>";
+        for (const auto& c : cells) o_ << "<td class=\"num\">" << c << "</td>";
+        o_ << "</tr>\n";
+    };
+    const std::string exact[4] = {u_.num(fr.pinned, dims::frequency), u_.num(fr.range.min, dims::frequency),
+                                  u_.num(fr.range.max, dims::frequency), u_.num(fr.fixed, dims::frequency)};
+    row("first natural frequency", exact);
+    const auto estimate = [](double d) {
+        return d > 0 ? format_number(frequency_from_deflection(d), 4) : std::string("-");
+    };
+    const auto& deflection = r.envelope.of(&beam_state::max_deflection);
+    const std::string est[4] = {estimate(r.pinned.max_deflection), estimate(deflection.max), estimate(deflection.min),
+                                estimate(r.fixed.max_deflection)};
+    row("estimate 18/sqrt(delta mm)", est);
 }
 
 // Diagrams, pointwise over the span, from the same model the assessment used.
@@ -648,7 +673,7 @@ void report_writer::checks(const beam_assessment& ba)
         if (c.value) {
             const bool ratio = c.dim == dims::dimensionless;
             vl = ratio ? format_number(*c.value, 3) : u_.q(*c.value, c.dim);
-            if (c.limit) vl += " / " + (ratio ? format_number(*c.limit, 3) : u_.q(*c.limit, c.dim));
+            if (c.limit) vl += std::string(c.limit_is_minimum ? " / min " : " / ") + (ratio ? format_number(*c.limit, 3) : u_.q(*c.limit, c.dim));
         }
         o_ << "<tr class=\"" << status_class(c.status) << "\"><td class=\"status " << status_class(c.status) << "\">"
            << status_label(c.status) << "</td><td>" << esc(c.id) << "</td><td class=\"num\">" << esc(vl) << "</td><td>"

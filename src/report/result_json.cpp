@@ -135,6 +135,7 @@ std::string unit_of(dimension d)
     if (d == dims::length) return "m";
     if (d == dims::force) return "N";
     if (d == dims::rotational_stiffness) return "N*m/rad";
+    if (d == dims::frequency) return "Hz";
     return "1";
 }
 
@@ -185,6 +186,13 @@ json to_json(const beam_assessment& a)
         const auto& f = result_fields();
         for (std::size_t i = 0; i < f.size(); ++i)
             env[f[i].key] = {{"min", number(r.envelope.ranges[i].min)}, {"max", number(r.envelope.ranges[i].max)}};
+        // A vibration combination: the first natural frequency (Hz) of each state.
+        if (r.frequency) {
+            c["pinned"]["frequency"] = number(r.frequency->pinned);
+            c["fixed"]["frequency"] = number(r.frequency->fixed);
+            for (std::size_t i = 0; i < corners.size(); ++i) corners[i]["frequency"] = number(r.frequency->corners.at(i));
+            env["frequency"] = {{"min", number(r.frequency->range.min)}, {"max", number(r.frequency->range.max)}};
+        }
         c["range"] = {{"corners", corners}, {"envelope", env}, {"interior_points", r.interior_points}};
         c["collapse"] = r.collapse ? json{{"load_factor", number(r.collapse->load_factor)},
                                           {"rotation_start", number(r.collapse->rotation_start)},

@@ -115,8 +115,9 @@ TEST_CASE("the report is self-contained and carries verdict and caution and ever
     CHECK(count(html, "2026-01-15") >= 1);
 
     CHECK(count(html, "<svg") == expected_charts(p));
-    CHECK(count(html, "data-chart=\"moment\"") == 4);
-    CHECK(count(html, "data-chart=\"deflection\"") == 4);
+    // One per combination: three on the first beam (strength, service, vibration), two on the second.
+    CHECK(count(html, "data-chart=\"moment\"") == 5);
+    CHECK(count(html, "data-chart=\"deflection\"") == 5);
     CHECK(count(html, "data-chart=\"sweep\"") == 2);
     CHECK(count(html, "data-chart=\"beam-line\"") == 4);
     CHECK(count(html, "data-chart=\"gap-detail\"") == expected_details(p));

@@ -36,6 +36,9 @@ struct check {
     // False for checks of the detail's geometry alone (detailing rules), which
     // no joint stiffness changes: sensitivity studies leave them out too.
     bool varies_with_stiffness = true;
+    // The limit is a least value (the floor frequency): the check passes where
+    // value >= limit. Otherwise it is a largest value (value <= limit).
+    bool limit_is_minimum = false;
 };
 
 struct value_range {
@@ -57,6 +60,17 @@ struct combination_result {
     state_envelope envelope;
     // Whether the envelope needed more than the corners (docs/method/range-envelope.md).
     int interior_points = 0;
+    // A vibration combination: the first natural frequency of each state
+    // (model/natural_frequency.hpp), Hz.
+    struct frequencies {
+        double pinned = 0, fixed = 0;
+        std::vector<double> corners;  // in the order of `corners`
+        // Over the range box. Adding end stiffness never lowers an eigenvalue
+        // (the Rayleigh quotient of K + dK with dK >= 0), so the frequency grows
+        // with each joint's stiffness and its extremes lie at the corners.
+        value_range range;
+    };
+    std::optional<frequencies> frequency;
     // A strength combination of a beam with a steel: the collapse of the beam
     // with both joints at their lower-bound stiffness (joints/nonlinear_analysis.hpp).
     std::optional<collapse_point> collapse;
