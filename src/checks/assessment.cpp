@@ -2,6 +2,8 @@
 
 #include <algorithm>
 #include <cmath>
+#include <string>
+#include <unordered_map>
 #include <utility>
 
 #include "pinproof/core/errors.hpp"
@@ -114,6 +116,36 @@ beam_state solve_state(const beam_model& model, const beam& b, const combination
     return solve_with_laws(model, b, c, s, e).state;
 }
 
+// The first natural frequency, remembered per thread: a sweep, a threshold
+// search or a boundary curve assesses the same beam at thousands of stiffness
+// pairs, and meets the pinned and fixed states and the scan's points again and
+// again. The key is every input of the solve, byte for byte, so a remembered
+// value is the value the solve would give.
+double remembered_frequency(double span, double EI, const std::vector<load>& loads, stiffness s, stiffness e)
+{
+    std::string key;
+    const auto put = [&key](const auto& v) { key.append(reinterpret_cast<const char*>(&v), sizeof v); };
+    put(span);
+    put(EI);
+    for (const stiffness k : {s, e}) {
+        put(k.is_rigid());
+        put(k.is_rigid() ? 0.0 : k.value());
+    }
+    for (const load& l : loads) {
+        put(static_cast<int>(l.kind));
+        put(l.value);
+        put(l.value_end);
+        put(l.from);
+        put(l.to);
+    }
+    thread_local std::unordered_map<std::string, double> memory;
+    if (const auto it = memory.find(key); it != memory.end()) return it->second;
+    if (memory.size() >= 50000) memory.clear();  // bounded: a few MB
+    const double f = first_natural_frequency(span, EI, loads, s, e);
+    memory.emplace(std::move(key), f);
+    return f;
+}
+
 // The first natural frequency of a vibration combination's states. Vibration is
 // of small amplitude: each joint acts with its stiffness of the state (for a
 // joint with a law, the law's initial stiffness at that bound).
@@ -122,7 +154,7 @@ combination_result::frequencies frequencies_of(const beam& b, const combination&
     const std::vector<load> loads = factored_loads(b.loads, c);
     const auto f = [&](stiffness s, stiffness e) {
         try {
-            return first_natural_frequency(b.span, b.EI(), loads, s, e);
+            return remembered_frequency(b.span, b.EI(), loads, s, e);
         } catch (const std::invalid_argument& x) {
             // The reader refuses a vibration combination without mass or with an upward load.
             throw internal_error(std::string("the frequency of combination ") + c.name + " could not be found: " + x.what());
