@@ -409,50 +409,99 @@ check moment_reversal_check(const project& p, const std::vector<combination_resu
     return c;
 }
 
-check support_moment_check(const project& p, const std::vector<combination_result>& combos, beam_end e)
+// The demand on the support in the governing strength state: every corner of
+// the range of every strength combination, the largest |M_j + R e|
+// (support_demand.hpp).
+std::optional<joint_assessment::support_response> support_response_of(const beam& b,
+                                                                      const std::vector<combination_result>& combos,
+                                                                      beam_end e)
+{
+    const joint& j = b.at(e);
+    const double ecc = j.support_eccentricity ? *j.support_eccentricity
+                                              : default_support_eccentricity(j.detail ? &*j.detail : nullptr);
+    std::optional<support_column> column;
+    if (j.column)
+        column = support_column{j.column->length_above > 0 ? j.column->sec.I : 0.0, j.column->length_above,
+                                j.column->sec.I, j.column->length_below};
+    const bool beam_web = j.detail && j.detail->support == support_type::beam_web;
+    double beam_state::*moment = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
+    double beam_state::*reaction = e == beam_end::start ? &beam_state::reaction_start : &beam_state::reaction_end;
+    std::optional<joint_assessment::support_response> out;
+    for (const auto& r : combos) {
+        if (r.comb.use != limit_state::strength) continue;
+        for (const auto& s : r.corners) {
+            support_demand d;
+            try {
+                d = demand_on_support(s.*moment, s.*reaction, ecc, column, beam_web);
+            } catch (const std::invalid_argument& x) {
+                throw internal_error(std::string("the demand on the support could not be found: ") + x.what());
+            }
+            if (out && std::abs(d.moment) <= std::abs(out->demand.moment)) continue;
+            out = joint_assessment::support_response{d, r.comb.name, s.*moment, s.*reaction, r.pinned.*reaction,
+                                                     !j.support_eccentricity};
+        }
+    }
+    return out;
+}
+
+check support_moment_check(const project& p, const beam& b, const joint_assessment& ja)
 {
     const formatter fmt{p.units};
     check c;
-    c.id = "support-moment-" + to_string(e);
+    c.id = "support-moment-" + to_string(ja.end);
     c.dim = dims::moment;
     c.informative = true;
-    double beam_state::*member = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
-    double beam_state::*reaction = e == beam_end::start ? &beam_state::reaction_start : &beam_state::reaction_end;
-    governing g;
-    double reaction_max = 0, reaction_pinned = 0;
-    for (const auto& r : combos) {
-        if (r.comb.use != limit_state::strength) continue;
-        const auto& range = r.envelope.of(member);
-        const double m = std::max(std::abs(range.min), std::abs(range.max));
-        if (!g.found || m > g.value) {
-            g = {m, r.comb.name, true};
-            reaction_max = r.envelope.of(reaction).max;
-            reaction_pinned = r.pinned.*reaction;
-        }
-    }
-    if (!g.found) {
+    if (!ja.support) {
         c.status = check_status::not_applicable;
         c.message = "No strength combination is given, so no support moment is reported.";
         return c;
     }
-    c.value = g.value;
-    if (g.value == 0.0) {
-        c.status = check_status::pass;
-        c.message = "For the supporting member: the joint transfers no moment (its upper-bound stiffness is a pin).";
+    const auto& s = *ja.support;
+    const joint& j = b.at(ja.end);
+    const support_demand& d = s.demand;
+    c.value = std::abs(d.moment);
+    const std::string basis =
+        s.eccentricity_is_default
+            ? (j.detail && j.detail->support == support_type::beam_web && j.detail->type == detail_type::fin_plate
+                   ? " (at the bolt line, gap plus bolt line: common practice, no source)"
+                   : p.standard == design_standard::en1993_1_8
+                         ? " (the default: 100 mm from the face of the support, BS 5950-1:2000 4.7.7, the nominal "
+                           "eccentricity of simple construction)"
+                         // AISC 360 sets no nominal eccentricity: the UK rule is named, never applied silently.
+                         : " (AISC 360 sets no nominal eccentricity: the default is the 100 mm of UK simple "
+                           "construction, BS 5950-1:2000 4.7.7; give support_eccentricity for this project)")
+            : " (as given)";
+    c.message = "For the supporting member: up to " + fmt(c.value.value(), dims::moment) + " (combination " +
+                s.combination + ", at a corner of the stiffness range): the joint moment " +
+                fmt(s.joint_moment, dims::moment) + " plus the reaction " + fmt(s.reaction, dims::force) + " at " +
+                fmt(d.eccentricity, dims::length) + basis + ".";
+    if (d.moment_above && d.moment_below)
+        c.message += " Shared by the column in proportion to I/L: " + fmt(*d.moment_above, dims::moment) + " above, " +
+                     fmt(*d.moment_below, dims::moment) + " below.";
+    if (d.torsion)
+        c.message += " On the web of the supporting beam it is a torsion of " + fmt(*d.torsion, dims::moment) + ".";
+    if (s.reaction_pinned > 0 && s.reaction > s.reaction_pinned * (1 + 1e-6))
+        c.message += " The reaction is " + format_number(100.0 * (s.reaction / s.reaction_pinned - 1.0), 2) +
+                     " % above the " + fmt(s.reaction_pinned, dims::force) + " with pins.";
+    if (j.support_moment_resistance) {
+        c.informative = false;
+        c.limit = *j.support_moment_resistance;
+        const bool ok = *c.value <= *c.limit;
+        c.status = ok ? check_status::pass : check_status::fail;
+        c.message += std::string(ok ? " Within" : " More than") + " the support's declared moment resistance " +
+                     fmt(*c.limit, dims::moment) +
+                     (ok ? "." : ": the supporting member must be designed for this moment, or the joint made more "
+                                 "flexible.");
         return c;
     }
-    // Reported for the designer of the supporting member; a warning because the
-    // pinned design of that member does not include it.
-    c.status = check_status::warn;
-    c.message = "For the supporting member: up to " + fmt(g.value, dims::moment) +
-                " is transferred into the support (combination " + g.combination +
-                ", this joint at its upper-bound stiffness), besides any moment from the eccentricity of the "
-                "reaction. The reaction reaches " + fmt(reaction_max, dims::force);
-    if (reaction_pinned > 0 && reaction_max > reaction_pinned * (1 + 1e-6)) {
-        c.message += " (" + format_number(100.0 * (reaction_max / reaction_pinned - 1.0), 2) + " % above the " +
-                     fmt(reaction_pinned, dims::force) + " with pins)";
-    }
-    c.message += ". Not a check of the support: pass these on to its designer.";
+    // Without a resistance it is reported for the designer of the supporting
+    // member: a warning where the joint adds a moment the pinned design of that
+    // member does not include (the eccentricity moment alone is part of it).
+    c.status = std::abs(s.joint_moment) > 0 ? check_status::warn : check_status::pass;
+    c.message += c.status == check_status::warn
+                     ? " The joint moment is not in a pinned design of the support: pass these on to its designer."
+                     : " In that state the joint transfers no moment: the eccentricity moment alone, as in simple "
+                       "construction.";
     return c;
 }
 
@@ -839,7 +888,9 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(strength_class_check(p, b, e));
     for (beam_end e : {beam_end::start, beam_end::end})
         a.checks.push_back(joint_ductility_check(p, b, a.combinations, e));
-    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end})
+        (e == beam_end::start ? a.start : a.end).support = support_response_of(b, a.combinations, e);
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, b, a.joint_at(e)));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(moment_reversal_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));

@@ -181,6 +181,51 @@ struct reader {
         return stiffness::spring(*s);
     }
 
+    // What the joint passes to its support (checks/support_demand.hpp): the
+    // eccentricity of the reaction, the column and the support's resistance.
+    void read_support(const json& j, const std::string& ptr, joint& out)
+    {
+        if (auto e = q(j, ptr, "support_eccentricity", dims::length, false)) {
+            if (*e < 0 || *e > plausible_support_eccentricity)
+                problems.add(child(ptr, "support_eccentricity"),
+                             "expected an eccentricity of the reaction from 0 to " +
+                                 format_quantity(plausible_support_eccentricity, dims::length, system) + ", found " +
+                                 shown(j.at("support_eccentricity")));
+            else out.support_eccentricity = *e;
+        }
+        if (auto m = q(j, ptr, "support_moment_resistance", dims::moment, false)) {
+            if (!(*m > 0))
+                problems.add(child(ptr, "support_moment_resistance"),
+                             "expected a positive moment resistance of the support, found " +
+                                 shown(j.at("support_moment_resistance")));
+            else out.support_moment_resistance = *m;
+        }
+        auto it = j.find("column");
+        if (it == j.end()) return;
+        const std::string cp = child(ptr, "column");
+        if (!expect_object(*it, cp, problems)) return;
+        reject_unknown_keys(*it, cp, {"section", "length_above", "length_below"}, problems);
+        auto sec = read_section(*it, cp);
+        // A length of 0 above is a roof: the column stops at the joint.
+        const auto length = [&](const char* key) -> std::optional<double> {
+            auto v = q(*it, cp, key, dims::length, true);
+            if (!v) return v;
+            if (*v == 0.0 && std::string(key) == "length_above") return v;
+            if (auto m = outside(*v, plausible_column_length, dims::length, system, shown(it->at(key)))) {
+                problems.add(child(cp, key), *m + (std::string(key) == "length_above" ? " (0 for a roof)" : ""));
+                return std::nullopt;
+            }
+            return v;
+        };
+        auto above = length("length_above");
+        auto below = length("length_below");
+        const json* detail = j.contains("detail") && j.at("detail").is_object() ? &j.at("detail") : nullptr;
+        if (detail && detail->contains("support") && detail->at("support") == "beam-web")
+            problems.add(cp, "expected no column for a joint on the web of a supporting beam (its detail's support is "
+                             "\"beam-web\": the moment twists that beam), found a column");
+        if (sec && above && below) out.column = joint_column{*sec, *above, *below};
+    }
+
     std::optional<joint> read_joint(const json& j, const std::string& ptr, std::optional<double> EI_over_L,
                                     const std::optional<section>& sec, design_standard standard)
     {
@@ -193,7 +238,8 @@ struct reader {
         if (!expect_object(j, ptr, problems)) return std::nullopt;
         reject_unknown_keys(j, ptr, {"stiffness", "stiffness_distribution", "moment_resistance", "description", "detail",
                                      "support_rotation",
-                                     "contact_stiffness", "designed_for_closure", "behaviour", "rotation_capacity"},
+                                     "contact_stiffness", "designed_for_closure", "behaviour", "rotation_capacity",
+                                     "support_eccentricity", "column", "support_moment_resistance"},
                             problems);
         joint out;
         const std::string sp = child(ptr, "stiffness");
@@ -272,6 +318,7 @@ struct reader {
             if (cs) out.contact_stiffness = *cs;
         }
         out.designed_for_closure = bool_field(j, ptr, "designed_for_closure", false, problems).value_or(false);
+        read_support(j, ptr, out);
         if (auto rc = q(j, ptr, "rotation_capacity", dims::angle, false)) {
             if (!(*rc > 0) || *rc > 0.5)
                 problems.add(child(ptr, "rotation_capacity"), "expected a rotation capacity above 0 and at most 0.5 rad, "

@@ -110,6 +110,19 @@ json behaviour_json(const joint_assessment& j, const joint& jt)
     return out;
 }
 
+// The demand passed to the support in the governing strength state; null
+// without a strength combination, and each part null where it does not apply.
+json support_demand_json(const joint_assessment& j)
+{
+    if (!j.support) return nullptr;
+    const support_demand& d = j.support->demand;
+    return {{"eccentricity", number(d.eccentricity)},
+            {"moment", number(d.moment)},
+            {"moment_above", optional_number(d.moment_above)},
+            {"moment_below", optional_number(d.moment_below)},
+            {"torsion", optional_number(d.torsion)}};
+}
+
 json joint_json(const joint_assessment& j, const beam& b)
 {
     json out;
@@ -125,6 +138,7 @@ json joint_json(const joint_assessment& j, const beam& b)
     out["detail"] = j.detail ? detail_json(*j.detail, b.at(j.end)) : json(nullptr);
     out["behaviour"] = behaviour_json(j, b.at(j.end));
     out["rotation_capacity"] = optional_number(b.at(j.end).rotation_capacity);
+    out["support_demand"] = support_demand_json(j);
     return out;
 }
 

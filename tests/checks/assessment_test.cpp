@@ -314,3 +314,81 @@ TEST_CASE("frequency check against limits.frequency [Blevins] [18/d]: the lower 
         CHECK(std::abs(frequency_from_deflection(r.pinned.max_deflection) / r.frequency->pinned - 1) <= 0.015);
     }
 }
+
+namespace {
+// A 6 m IPE 300 under 20 kN/m (strength factor 1.0) on two equal joints of
+// exactly 2 EI/L, with the support fields of the start joint given.
+std::string beam_on_support(const std::string& start_extra)
+{
+    return R"({"format": "pinproof-project/1", "title": "support demand", "standard": "EN1993-1-8", "frame": "braced",
+      "beams": [{"id": "S", "span": "6 m", "section": "IPE 300",
+        "loads": [{"case": "G", "kind": "udl", "w": "20 kN/m"}],
+        "combinations": [{"name": "ULS", "use": "strength", "factors": {"G": 1.0}}],
+        "joints": {"start": {"stiffness": "2 EI/L")" + start_extra + R"(}, "end": {"stiffness": "2 EI/L"}}}]})";
+}
+}  // namespace
+
+// [MW63] and reference pack 11.2: equal springs kappa under a UDL take M = M_F kappa/(kappa + 2),
+// M_F = wL^2/12; kappa = 2: M = wL^2/24 = 30 kN*m, R = wL/2 = 60 kN (symmetry).
+// [4.7.7] BS 5950-1:2000 4.7.7 (reference pack 11.3): the reaction 100 mm from the column face,
+// the net moment shared by the column lengths in proportion to EI/L.
+TEST_CASE("support demand [MW63] [4.7.7]: 30 kN*m + 60 kN x 100 mm = 36 kN*m - column 3.5 m above and 4.2 m below shares 6/11 and 5/11 - tol 1e-9")
+{
+    const project p = parse_project(beam_on_support(
+        R"(, "column": {"section": "HE 200 B", "length_above": "3.5 m", "length_below": "4.2 m"})"));
+    const auto a = assess_beam(p, p.beams[0]);
+    REQUIRE(a.start.support);
+    const support_demand& d = a.start.support->demand;
+    CHECK(d.eccentricity == doctest::Approx(0.100).epsilon(1e-15));
+    CHECK(a.start.support->joint_moment == doctest::Approx(30e3).epsilon(1e-9));
+    CHECK(a.start.support->reaction == doctest::Approx(60e3).epsilon(1e-9));
+    CHECK(d.moment == doctest::Approx(36e3).epsilon(1e-9));
+    REQUIRE(d.moment_above);
+    REQUIRE(d.moment_below);
+    CHECK(*d.moment_above == doctest::Approx(36e3 * 6 / 11).epsilon(1e-9));
+    CHECK(*d.moment_below == doctest::Approx(36e3 * 5 / 11).epsilon(1e-9));
+    CHECK_FALSE(d.torsion);
+    const check& c = find(a, "support-moment-start");
+    CHECK(c.status == check_status::warn);  // no resistance given: passed on, not a failure
+    CHECK(c.informative);
+    CHECK(c.value == doctest::Approx(36e3).epsilon(1e-9));
+    // The end joint has no column: no shares.
+    REQUIRE(a.end.support);
+    CHECK_FALSE(a.end.support->demand.moment_above);
+}
+
+TEST_CASE("support demand against the support's resistance [MW63] [4.7.7]: e = 150 mm gives 39 kN*m - fails at 35 kN*m and passes at 40 kN*m - tol 1e-9")
+{
+    SUBCASE("fails below the demand")
+    {
+        const project p = parse_project(beam_on_support(
+            R"(, "support_eccentricity": "150 mm", "support_moment_resistance": "35 kN*m")"));
+        const auto a = assess_beam(p, p.beams[0]);
+        const check& c = find(a, "support-moment-start");
+        CHECK(c.value == doctest::Approx(39e3).epsilon(1e-9));
+        CHECK(c.limit == doctest::Approx(35e3).epsilon(1e-15));
+        CHECK(c.status == check_status::fail);
+        CHECK_FALSE(c.informative);
+        CHECK_FALSE(a.holds());
+        CHECK(find(a, "support-moment-end").status == check_status::warn);  // no resistance at the end
+    }
+    SUBCASE("passes above it")
+    {
+        const project p = parse_project(beam_on_support(
+            R"(, "support_eccentricity": "150 mm", "support_moment_resistance": "40 kN*m")"));
+        CHECK(find(assess_beam(p, p.beams[0]), "support-moment-start").status == check_status::pass);
+    }
+}
+
+TEST_CASE("support demand of a pinned joint [4.7.7]: the eccentricity moment alone - wL/2 x 100 mm = 6 kN*m - passes - tol 1e-9")
+{
+    std::string text = beam_on_support("");
+    const std::string spring = R"("stiffness": "2 EI/L")";
+    for (std::size_t at = text.find(spring); at != std::string::npos; at = text.find(spring))
+        text.replace(at, spring.size(), R"("stiffness": 0)");
+    const project p = parse_project(text);
+    const auto a = assess_beam(p, p.beams[0]);
+    const check& c = find(a, "support-moment-start");
+    CHECK(c.value == doctest::Approx(6e3).epsilon(1e-9));
+    CHECK(c.status == check_status::pass);
+}

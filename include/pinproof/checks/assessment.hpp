@@ -13,6 +13,7 @@
 #include "pinproof/checks/detailing_rules.hpp"
 #include "pinproof/checks/gap_closure.hpp"
 #include "pinproof/checks/gap_geometry.hpp"
+#include "pinproof/checks/support_demand.hpp"
 #include "pinproof/model/project.hpp"
 #include "pinproof/core/units.hpp"
 
@@ -128,6 +129,18 @@ struct joint_assessment {
         std::optional<double> yield_factor;  // of that combination's loads
     };
     std::optional<law_response> law;
+    // The demand passed to the support (support_demand.hpp) in the governing
+    // strength state: the largest |M_j + R e| over the strength combinations
+    // and the corners of the range; nullopt without a strength combination.
+    struct support_response {
+        support_demand demand;
+        std::string combination;
+        double joint_moment = 0;   // N*m, hogging +, in that state
+        double reaction = 0;       // N, up +, in that state
+        double reaction_pinned = 0;  // N, of that combination with pins
+        bool eccentricity_is_default = true;
+    };
+    std::optional<support_response> support;
 };
 
 struct beam_assessment {
