@@ -29,7 +29,9 @@ const char* const closure_note =
 std::optional<double> ratio_of(const check& c)
 {
     if (!c.value || !c.limit || !(*c.limit > 0)) return std::nullopt;
-    const double r = *c.value / *c.limit;
+    // A least limit (the floor frequency) is used up as the value falls to it.
+    if (c.limit_is_minimum && !(*c.value > 0)) return std::nullopt;
+    const double r = c.limit_is_minimum ? *c.limit / *c.value : *c.value / *c.limit;
     if (!std::isfinite(r)) return std::nullopt;
     return r;
 }

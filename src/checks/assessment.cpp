@@ -2,9 +2,12 @@
 
 #include <algorithm>
 #include <cmath>
+#include <string>
+#include <unordered_map>
 #include <utility>
 
 #include "pinproof/core/errors.hpp"
+#include "pinproof/model/natural_frequency.hpp"
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/joints/joint_law.hpp"
 #include "pinproof/checks/joint_strength.hpp"
@@ -114,6 +117,68 @@ beam_state solve_state(const beam_model& model, const beam& b, const combination
     return solve_with_laws(model, b, c, s, e).state;
 }
 
+// The first natural frequency, remembered per thread: a sweep, a threshold
+// search or a boundary curve assesses the same beam at thousands of stiffness
+// pairs, and meets the pinned and fixed states and the scan's points again and
+// again. The key is every input of the solve, byte for byte, so a remembered
+// value is the value the solve would give.
+double remembered_frequency(double span, double EI, const std::vector<load>& loads, stiffness s, stiffness e)
+{
+    std::string key;
+    const auto put = [&key](const auto& v) { key.append(reinterpret_cast<const char*>(&v), sizeof v); };
+    put(span);
+    put(EI);
+    for (const stiffness k : {s, e}) {
+        put(k.is_rigid());
+        put(k.is_rigid() ? 0.0 : k.value());
+    }
+    for (const load& l : loads) {
+        put(static_cast<int>(l.kind));
+        put(l.value);
+        put(l.value_end);
+        put(l.from);
+        put(l.to);
+    }
+    thread_local std::unordered_map<std::string, double> memory;
+    if (const auto it = memory.find(key); it != memory.end()) return it->second;
+    if (memory.size() >= 50000) memory.clear();  // bounded: a few MB
+    const double f = first_natural_frequency(span, EI, loads, s, e);
+    memory.emplace(std::move(key), f);
+    return f;
+}
+
+// The first natural frequency of a vibration combination's states. Vibration is
+// of small amplitude: each joint acts with its stiffness of the state (for a
+// joint with a law, the law's initial stiffness at that bound).
+combination_result::frequencies frequencies_of(const beam& b, const combination& c)
+{
+    const std::vector<load> loads = factored_loads(b.loads, c);
+    const auto f = [&](stiffness s, stiffness e) {
+        try {
+            return remembered_frequency(b.span, b.EI(), loads, s, e);
+        } catch (const std::invalid_argument& x) {
+            // The reader refuses a vibration combination without mass or with an upward load.
+            throw internal_error(std::string("the frequency of combination ") + c.name + " could not be found: " + x.what());
+        }
+    };
+    combination_result::frequencies out;
+    out.pinned = f(stiffness::pinned(), stiffness::pinned());
+    out.fixed = f(stiffness::rigid(), stiffness::rigid());
+    const auto& rs = b.start.range;
+    const auto& re = b.end.range;
+    const std::pair<stiffness, stiffness> at[] = {{rs.min, re.min}, {rs.min, re.max}, {rs.max, re.min}, {rs.max, re.max}};
+    for (std::size_t i = 0; i < 4; ++i) {
+        // A degenerate range (a sweep point) repeats a corner: solve it once.
+        std::optional<double> same;
+        for (std::size_t k = 0; k < i; ++k)
+            if (at[k].first == at[i].first && at[k].second == at[i].second) same = out.corners[k];
+        out.corners.push_back(same ? *same : f(at[i].first, at[i].second));
+    }
+    out.range = {*std::min_element(out.corners.begin(), out.corners.end()),
+                 *std::max_element(out.corners.begin(), out.corners.end())};
+    return out;
+}
+
 combination_result analyse_combination(const beam& b, const combination& c, bool search_interior)
 {
     combination_result out;
@@ -125,6 +190,7 @@ combination_result analyse_combination(const beam& b, const combination& c, bool
     const auto& re = b.end.range;
     const auto solve = [&](stiffness s, stiffness e) { return solve_state(model, b, c, s, e); };
     out.corners = {solve(rs.min, re.min), solve(rs.min, re.max), solve(rs.max, re.min), solve(rs.max, re.max)};
+    if (c.use == limit_state::vibration) out.frequency = frequencies_of(b, c);
     if (c.use == limit_state::strength) {
         if (const auto Mpl = b.plastic_moment()) {
             try {
@@ -349,50 +415,99 @@ check moment_reversal_check(const project& p, const std::vector<combination_resu
     return c;
 }
 
-check support_moment_check(const project& p, const std::vector<combination_result>& combos, beam_end e)
+// The demand on the support in the governing strength state: every corner of
+// the range of every strength combination, the largest |M_j + R e|
+// (support_demand.hpp).
+std::optional<joint_assessment::support_response> support_response_of(const beam& b,
+                                                                      const std::vector<combination_result>& combos,
+                                                                      beam_end e)
+{
+    const joint& j = b.at(e);
+    const double ecc = j.support_eccentricity ? *j.support_eccentricity
+                                              : default_support_eccentricity(j.detail ? &*j.detail : nullptr);
+    std::optional<support_column> column;
+    if (j.column)
+        column = support_column{j.column->length_above > 0 ? j.column->sec.I : 0.0, j.column->length_above,
+                                j.column->sec.I, j.column->length_below};
+    const bool beam_web = j.detail && j.detail->support == support_type::beam_web;
+    double beam_state::*moment = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
+    double beam_state::*reaction = e == beam_end::start ? &beam_state::reaction_start : &beam_state::reaction_end;
+    std::optional<joint_assessment::support_response> out;
+    for (const auto& r : combos) {
+        if (r.comb.use != limit_state::strength) continue;
+        for (const auto& s : r.corners) {
+            support_demand d;
+            try {
+                d = demand_on_support(s.*moment, s.*reaction, ecc, column, beam_web);
+            } catch (const std::invalid_argument& x) {
+                throw internal_error(std::string("the demand on the support could not be found: ") + x.what());
+            }
+            if (out && std::abs(d.moment) <= std::abs(out->demand.moment)) continue;
+            out = joint_assessment::support_response{d, r.comb.name, s.*moment, s.*reaction, r.pinned.*reaction,
+                                                     !j.support_eccentricity};
+        }
+    }
+    return out;
+}
+
+check support_moment_check(const project& p, const beam& b, const joint_assessment& ja)
 {
     const formatter fmt{p.units};
     check c;
-    c.id = "support-moment-" + to_string(e);
+    c.id = "support-moment-" + to_string(ja.end);
     c.dim = dims::moment;
     c.informative = true;
-    double beam_state::*member = e == beam_end::start ? &beam_state::moment_start : &beam_state::moment_end;
-    double beam_state::*reaction = e == beam_end::start ? &beam_state::reaction_start : &beam_state::reaction_end;
-    governing g;
-    double reaction_max = 0, reaction_pinned = 0;
-    for (const auto& r : combos) {
-        if (r.comb.use != limit_state::strength) continue;
-        const auto& range = r.envelope.of(member);
-        const double m = std::max(std::abs(range.min), std::abs(range.max));
-        if (!g.found || m > g.value) {
-            g = {m, r.comb.name, true};
-            reaction_max = r.envelope.of(reaction).max;
-            reaction_pinned = r.pinned.*reaction;
-        }
-    }
-    if (!g.found) {
+    if (!ja.support) {
         c.status = check_status::not_applicable;
         c.message = "No strength combination is given, so no support moment is reported.";
         return c;
     }
-    c.value = g.value;
-    if (g.value == 0.0) {
-        c.status = check_status::pass;
-        c.message = "For the supporting member: the joint transfers no moment (its upper-bound stiffness is a pin).";
+    const auto& s = *ja.support;
+    const joint& j = b.at(ja.end);
+    const support_demand& d = s.demand;
+    c.value = std::abs(d.moment);
+    const std::string basis =
+        s.eccentricity_is_default
+            ? (j.detail && j.detail->support == support_type::beam_web && j.detail->type == detail_type::fin_plate
+                   ? " (at the bolt line, gap plus bolt line: common practice, no source)"
+                   : p.standard == design_standard::en1993_1_8
+                         ? " (the default: 100 mm from the face of the support, BS 5950-1:2000 4.7.7, the nominal "
+                           "eccentricity of simple construction)"
+                         // AISC 360 sets no nominal eccentricity: the UK rule is named, never applied silently.
+                         : " (AISC 360 sets no nominal eccentricity: the default is the 100 mm of UK simple "
+                           "construction, BS 5950-1:2000 4.7.7; give support_eccentricity for this project)")
+            : " (as given)";
+    c.message = "For the supporting member: up to " + fmt(c.value.value(), dims::moment) + " (combination " +
+                s.combination + ", at a corner of the stiffness range): the joint moment " +
+                fmt(s.joint_moment, dims::moment) + " plus the reaction " + fmt(s.reaction, dims::force) + " at " +
+                fmt(d.eccentricity, dims::length) + basis + ".";
+    if (d.moment_above && d.moment_below)
+        c.message += " Shared by the column in proportion to I/L: " + fmt(*d.moment_above, dims::moment) + " above, " +
+                     fmt(*d.moment_below, dims::moment) + " below.";
+    if (d.torsion)
+        c.message += " On the web of the supporting beam it is a torsion of " + fmt(*d.torsion, dims::moment) + ".";
+    if (s.reaction_pinned > 0 && s.reaction > s.reaction_pinned * (1 + 1e-6))
+        c.message += " The reaction is " + format_number(100.0 * (s.reaction / s.reaction_pinned - 1.0), 2) +
+                     " % above the " + fmt(s.reaction_pinned, dims::force) + " with pins.";
+    if (j.support_moment_resistance) {
+        c.informative = false;
+        c.limit = *j.support_moment_resistance;
+        const bool ok = *c.value <= *c.limit;
+        c.status = ok ? check_status::pass : check_status::fail;
+        c.message += std::string(ok ? " Within" : " More than") + " the support's declared moment resistance " +
+                     fmt(*c.limit, dims::moment) +
+                     (ok ? "." : ": the supporting member must be designed for this moment, or the joint made more "
+                                 "flexible.");
         return c;
     }
-    // Reported for the designer of the supporting member; a warning because the
-    // pinned design of that member does not include it.
-    c.status = check_status::warn;
-    c.message = "For the supporting member: up to " + fmt(g.value, dims::moment) +
-                " is transferred into the support (combination " + g.combination +
-                ", this joint at its upper-bound stiffness), besides any moment from the eccentricity of the "
-                "reaction. The reaction reaches " + fmt(reaction_max, dims::force);
-    if (reaction_pinned > 0 && reaction_max > reaction_pinned * (1 + 1e-6)) {
-        c.message += " (" + format_number(100.0 * (reaction_max / reaction_pinned - 1.0), 2) + " % above the " +
-                     fmt(reaction_pinned, dims::force) + " with pins)";
-    }
-    c.message += ". Not a check of the support: pass these on to its designer.";
+    // Without a resistance it is reported for the designer of the supporting
+    // member: a warning where the joint adds a moment the pinned design of that
+    // member does not include (the eccentricity moment alone is part of it).
+    c.status = std::abs(s.joint_moment) > 0 ? check_status::warn : check_status::pass;
+    c.message += c.status == check_status::warn
+                     ? " The joint moment is not in a pinned design of the support: pass these on to its designer."
+                     : " In that state the joint transfers no moment: the eccentricity moment alone, as in simple "
+                       "construction.";
     return c;
 }
 
@@ -463,6 +578,58 @@ check deflection_check(const project& p, const beam& b, const std::vector<combin
                              fmt(*c.limit, dims::length);
     c.status = g.value <= *c.limit ? check_status::pass : check_status::fail;
     c.message = text + (c.status == check_status::pass ? "." : ": the beam is too flexible.");
+    return c;
+}
+
+// The first natural frequency against its least value (limits.frequency), with
+// the pinned-end frequency beside the range and the 18/sqrt(delta) estimate
+// (model/natural_frequency.hpp) as the cross-check engineers know.
+check frequency_check(const project& p, const beam& b, const std::vector<combination_result>& combos)
+{
+    const formatter fmt{p.units};
+    check c;
+    c.id = "frequency";
+    c.dim = dims::frequency;
+    c.limit_is_minimum = true;
+    const combination_result* gov = nullptr;
+    for (const auto& r : combos)
+        if (r.frequency && (!gov || r.frequency->range.min < gov->frequency->range.min)) gov = &r;
+    if (!gov) {
+        c.status = check_status::not_applicable;
+        c.message = "No vibration combination is given (a combination with use \"vibration\", such as G + 0.1 Q), "
+                    "so the first natural frequency is not found or checked.";
+        return c;
+    }
+    const auto& f = *gov->frequency;
+    c.value = f.range.min;
+    // The estimate from the deflection of the state with the lowest frequency.
+    const auto lowest = static_cast<std::size_t>(std::min_element(f.corners.begin(), f.corners.end()) - f.corners.begin());
+    const double delta = gov->corners.at(lowest).max_deflection, delta_pinned = gov->pinned.max_deflection;
+    std::string estimate;
+    if (delta > 0 && delta_pinned > 0)
+        estimate = "; the estimate 18/sqrt(delta) gives " + fmt(frequency_from_deflection(delta), dims::frequency) +
+                   " (delta " + fmt(delta, dims::length) + ") and " +
+                   fmt(frequency_from_deflection(delta_pinned), dims::frequency) + " with pins";
+    const std::string text = "The first natural frequency is at least " + fmt(f.range.min, dims::frequency) +
+                             " over the stiffness range (" + fmt(f.pinned, dims::frequency) + " with ideal pins, " +
+                             fmt(f.fixed, dims::frequency) + " fixed), combination " + gov->comb.name + estimate;
+    if (!b.frequency_limit) {
+        c.status = check_status::not_applicable;
+        c.message = text + ". No frequency limit is given (limits.frequency), so it is not checked.";
+        return c;
+    }
+    c.limit = *b.frequency_limit;
+    const std::string against = text + ". Least frequency (limits.frequency): " + fmt(*c.limit, dims::frequency);
+    if (f.range.min >= *c.limit) {
+        c.status = check_status::pass;
+        c.message = against + ".";
+        if (f.pinned < *c.limit)
+            c.message += " With ideal pins the beam would not reach it: the check relies on the stiffness of the joints.";
+        return c;
+    }
+    c.status = check_status::fail;
+    c.message = against + ": the beam is too lively at its lower-bound joint stiffness. Stiffen the beam, or assess "
+                          "the floor's response to walking.";
     return c;
 }
 
@@ -752,12 +919,15 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(strength_class_check(p, b, e));
     for (beam_end e : {beam_end::start, beam_end::end})
         a.checks.push_back(joint_ductility_check(p, b, a.combinations, e));
-    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, a.combinations, e));
+    for (beam_end e : {beam_end::start, beam_end::end})
+        (e == beam_end::start ? a.start : a.end).support = support_response_of(b, a.combinations, e);
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(support_moment_check(p, b, a.joint_at(e)));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(moment_reversal_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(joint_shear_check(p, b, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(declared_resistance_check(p, b, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));
+    a.checks.push_back(frequency_check(p, b, a.combinations));
     assess_details(p, b, a, options.find_min_gap);
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(gap_closure_check(p, b, a.joint_at(e)));
     for (beam_end e : {beam_end::start, beam_end::end})

@@ -68,7 +68,7 @@ bool is_adverse(check_status s) { return s == check_status::fail || s == check_s
 std::optional<double> check_margin(const check& c)
 {
     if (c.status == check_status::not_applicable || c.informative || !c.varies_with_stiffness) return std::nullopt;
-    if (c.value && c.limit) return *c.value - *c.limit;
+    if (c.value && c.limit) return c.limit_is_minimum ? *c.limit - *c.value : *c.value - *c.limit;
     return is_adverse(c.status) ? 1.0 : -1.0;
 }
 

@@ -45,6 +45,9 @@ const base_unit base_units[] = {
     {"Pa", 1.0, dims::pressure, unit_system::si, "kMG"},
     {"kg", 1.0, mass_dim, unit_system::si, ""},
     {"s", 1.0, time_dim, unit_system::neutral, ""},
+    // The hertz, one cycle per second (SI Brochure, 9th ed., Table 4); no prefix:
+    // floor frequencies are a few hertz.
+    {"Hz", 1.0, dims::frequency, unit_system::neutral, ""},
     {"rad", 1.0, dims::angle, unit_system::neutral, "m"},
     {"deg", pi / 180.0, dims::angle, unit_system::neutral, ""},
     {"in", metre_per_inch, dims::length, unit_system::us_customary, ""},
@@ -372,6 +375,7 @@ const named_dimension named_dimensions[] = {
     {dims::rotational_stiffness, "rotational stiffness", "2500 kN*m/rad", {"kN*m/rad", 1e3},
      {"kip*in/rad", newton_per_kip * metre_per_inch}},
     {dims::angle, "angle (rotation)", "0.01 rad", {"mrad", 1e-3}, {"mrad", 1e-3}},
+    {dims::frequency, "frequency", "4 Hz", {"Hz", 1.0}, {"Hz", 1.0}},
     {dims::dimensionless, "dimensionless number", "0.5", {"", 1.0}, {"", 1.0}},
 };
 

@@ -26,7 +26,10 @@ constexpr double plausible_factor_magnitude = 1e3;
 constexpr plausible_range plausible_section_size{1e-4, 10.0};   // m: depth, flange and web sizes
 constexpr plausible_range plausible_section_area{1e-6, 10.0};   // m^2
 constexpr double plausible_deflection_limit = 10.0;          // m, an absolute limit
+constexpr plausible_range plausible_frequency_limit{0.1, 100.0};  // Hz (floor limits: about 3 to 10 Hz)
 constexpr double plausible_support_rotation = 0.5;           // rad
+constexpr double plausible_support_eccentricity = 2.0;       // m
+constexpr plausible_range plausible_column_length{0.1, 100.0};  // m, a storey
 constexpr double plausible_stiffness = 1e40;                 // N*m/rad; "rigid" is exact (1e30 agrees with it)
 
 // The message for a positive value outside `r`, or nullopt when it lies inside:

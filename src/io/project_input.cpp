@@ -181,6 +181,51 @@ struct reader {
         return stiffness::spring(*s);
     }
 
+    // What the joint passes to its support (checks/support_demand.hpp): the
+    // eccentricity of the reaction, the column and the support's resistance.
+    void read_support(const json& j, const std::string& ptr, joint& out)
+    {
+        if (auto e = q(j, ptr, "support_eccentricity", dims::length, false)) {
+            if (*e < 0 || *e > plausible_support_eccentricity)
+                problems.add(child(ptr, "support_eccentricity"),
+                             "expected an eccentricity of the reaction from 0 to " +
+                                 format_quantity(plausible_support_eccentricity, dims::length, system) + ", found " +
+                                 shown(j.at("support_eccentricity")));
+            else out.support_eccentricity = *e;
+        }
+        if (auto m = q(j, ptr, "support_moment_resistance", dims::moment, false)) {
+            if (!(*m > 0))
+                problems.add(child(ptr, "support_moment_resistance"),
+                             "expected a positive moment resistance of the support, found " +
+                                 shown(j.at("support_moment_resistance")));
+            else out.support_moment_resistance = *m;
+        }
+        auto it = j.find("column");
+        if (it == j.end()) return;
+        const std::string cp = child(ptr, "column");
+        if (!expect_object(*it, cp, problems)) return;
+        reject_unknown_keys(*it, cp, {"section", "length_above", "length_below"}, problems);
+        auto sec = read_section(*it, cp);
+        // A length of 0 above is a roof: the column stops at the joint.
+        const auto length = [&](const char* key) -> std::optional<double> {
+            auto v = q(*it, cp, key, dims::length, true);
+            if (!v) return v;
+            if (*v == 0.0 && std::string(key) == "length_above") return v;
+            if (auto m = outside(*v, plausible_column_length, dims::length, system, shown(it->at(key)))) {
+                problems.add(child(cp, key), *m + (std::string(key) == "length_above" ? " (0 for a roof)" : ""));
+                return std::nullopt;
+            }
+            return v;
+        };
+        auto above = length("length_above");
+        auto below = length("length_below");
+        const json* detail = j.contains("detail") && j.at("detail").is_object() ? &j.at("detail") : nullptr;
+        if (detail && detail->contains("support") && detail->at("support") == "beam-web")
+            problems.add(cp, "expected no column for a joint on the web of a supporting beam (its detail's support is "
+                             "\"beam-web\": the moment twists that beam), found a column");
+        if (sec && above && below) out.column = joint_column{*sec, *above, *below};
+    }
+
     std::optional<joint> read_joint(const json& j, const std::string& ptr, std::optional<double> EI_over_L,
                                     const std::optional<section>& sec, design_standard standard)
     {
@@ -194,7 +239,7 @@ struct reader {
         reject_unknown_keys(j, ptr, {"stiffness", "stiffness_distribution", "moment_resistance", "description", "detail",
                                      "support_rotation", "stiffness_scatter",
                                      "contact_stiffness", "designed_for_closure", "dependable_lower_bound", "behaviour",
-                                     "rotation_capacity"},
+                                     "rotation_capacity", "support_eccentricity", "column", "support_moment_resistance"},
                             problems);
         joint out;
         const std::string sp = child(ptr, "stiffness");
@@ -291,6 +336,7 @@ struct reader {
         }
         out.designed_for_closure = bool_field(j, ptr, "designed_for_closure", false, problems).value_or(false);
         out.dependable_lower_bound = bool_field(j, ptr, "dependable_lower_bound", false, problems).value_or(false);
+        read_support(j, ptr, out);
         if (auto rc = q(j, ptr, "rotation_capacity", dims::angle, false)) {
             if (!(*rc > 0) || *rc > 0.5)
                 problems.add(child(ptr, "rotation_capacity"), "expected a rotation capacity above 0 and at most 0.5 rad, "
@@ -487,7 +533,7 @@ struct reader {
             reject_unknown_keys(c, p, {"name", "use", "factors"}, problems);
             combination out_c;
             auto name = string_field(c, p, "name", true, problems);
-            auto use = choice_field(c, p, "use", {"strength", "service"}, true, problems);
+            auto use = choice_field(c, p, "use", {"strength", "service", "vibration"}, true, problems);
             if (name && name->empty()) problems.add(child(p, "name"), "expected a combination name, found an empty string");
             if (name && !names.insert(*name).second)
                 problems.add(child(p, "name"), "expected a unique combination name, found \"" + *name +
@@ -530,7 +576,9 @@ struct reader {
             }
             if (!ok) continue;
             out_c.name = *name;
-            out_c.use = *use == "strength" ? limit_state::strength : limit_state::service;
+            out_c.use = *use == "strength"  ? limit_state::strength
+                        : *use == "service" ? limit_state::service
+                                            : limit_state::vibration;
             out.push_back(out_c);
         }
         return out;
@@ -571,6 +619,46 @@ struct reader {
         out.absolute = *v;
         if (out.text.empty()) out.text = format_quantity(*v, dims::length, unit_system::si);
         return out;
+    }
+
+    // A vibration combination gives the mass that vibrates (natural_frequency.hpp):
+    // each of its factored loads must weigh down (a mass is never negative) and
+    // together they must weigh something. A frequency limit needs such a
+    // combination, or it would silently check nothing.
+    void check_vibration(const json& b, const std::string& ptr, const std::vector<combination>& combos,
+                         const std::vector<load>& loads, bool has_limit)
+    {
+        bool any = false;
+        for (std::size_t i = 0; i < combos.size(); ++i) {
+            const combination& c = combos[i];
+            if (c.use != limit_state::vibration) continue;
+            any = true;
+            // The pointer of the combination as written (invalid ones were skipped).
+            std::string cp = child(child(ptr, "combinations"), i);
+            const json& arr = b.at("combinations");
+            for (std::size_t k = 0; k < arr.size(); ++k)
+                if (arr[k].is_object() && arr[k].contains("name") && arr[k]["name"] == c.name)
+                    cp = child(child(ptr, "combinations"), k);
+            double total = 0;
+            std::string upward;
+            for (const load& l : factored_loads(loads, c)) {
+                if (l.kind == load_kind::moment) continue;
+                const bool up = l.value < 0 || (l.kind == load_kind::linear && l.value_end < 0);
+                if (up && upward.empty()) upward = l.load_case;
+                total += total_force(l);
+            }
+            if (!upward.empty())
+                problems.add(child(cp, "factors"),
+                             "expected factors that leave every load of a vibration combination downward (its mass, "
+                             "load / g, cannot be negative), found an upward load of case \"" + upward + "\"");
+            else if (!(total > 0))
+                problems.add(child(cp, "factors"),
+                             "expected a vibration combination that carries some mass (downward load), found none");
+        }
+        if (has_limit && !any)
+            problems.add(child(child(ptr, "limits"), "frequency"),
+                         "expected a combination with \"use\": \"vibration\" (the mass that vibrates, for example "
+                         "{\"G\": 1.0, \"Q\": 0.1}) to check the frequency limit against, found none");
     }
 
     std::optional<beam> read_beam(const json& b, const std::string& ptr, design_standard standard)
@@ -620,9 +708,13 @@ struct reader {
         }
         auto lim = b.find("limits");
         if (lim != b.end() && expect_object(*lim, child(ptr, "limits"), problems)) {
-            reject_unknown_keys(*lim, child(ptr, "limits"), {"deflection"}, problems);
+            reject_unknown_keys(*lim, child(ptr, "limits"), {"deflection", "frequency"}, problems);
             out.deflection = read_deflection_limit(*lim, child(ptr, "limits"));
+            if (lim->contains("frequency"))
+                out.frequency_limit = plausible(*lim, child(ptr, "limits"), "frequency", dims::frequency, true,
+                                                plausible_frequency_limit);
         }
+        check_vibration(b, ptr, combos, loads, out.frequency_limit.has_value());
         out.stiffness_correlation = read_stiffness_correlation(b, ptr, problems).value_or(1);
         if (b.contains("steel")) out.steel = read_steel(b.at("steel"), child(ptr, "steel"), standard, problems, &system);
         if (!id || !span || !E || !sec || !js || !je) return std::nullopt;

@@ -17,7 +17,12 @@ std::string to_string(load_kind k)
 
 std::string to_string(limit_state u)
 {
-    return u == limit_state::strength ? "strength" : "service";
+    switch (u) {
+    case limit_state::strength: return "strength";
+    case limit_state::service: return "service";
+    case limit_state::vibration: return "vibration";
+    }
+    return "unknown";
 }
 
 std::optional<double> position_on_span(double x, double span)

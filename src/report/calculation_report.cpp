@@ -14,6 +14,7 @@
 #include "pinproof/report/detail_drawing.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/checks/gap_geometry.hpp"
+#include "pinproof/model/natural_frequency.hpp"
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/report/svg_chart.hpp"
 #include "pinproof/checks/sweep.hpp"
@@ -205,6 +206,7 @@ private:
     void derived_joints(const beam& b);
     void combination_block(const beam& b, const combination_result& r);
     void results_table(const combination_result& r);
+    void frequency_rows(const combination_result& r);
     void span_diagrams(const beam& b, const combination_result& r);
     void sweep_chart(const beam& b);
     void beam_lines(const beam& b);
@@ -319,8 +321,8 @@ void report_writer::head()
           "@media print { body { padding: 0; } a { color: inherit; text-decoration: none; }\n"
           // On paper a chart needs less height than on a screen: the drawing
           // keeps its proportions inside the box (the viewBox scales it).
-          "  figure.chart svg { max-height: 78mm; }\n"
-          "  figure.chart[data-chart=sweep] svg { max-height: 105mm; }\n"
+          "  figure.chart svg { max-height: 66mm; }\n"
+          "  figure.chart[data-chart=sweep] svg { max-height: 95mm; }\n"
           "  figure.chart[data-chart=gap-detail] svg { max-height: 115mm; }\n"
           "  figcaption { font-size: 8pt; }\n}\n"
           "</style>\n</head>\n<body>\n";
@@ -532,7 +534,30 @@ void report_writer::results_table(const combination_result& r)
            << cell(r.envelope.ranges[i].min) << "</td><td class=\"num\">" << cell(r.envelope.ranges[i].max)
            << "</td><td class=\"num\">" << cell(r.fixed.*(f[i].member)) << "</td></tr>\n";
     }
+    if (r.frequency) frequency_rows(r);
     o_ << "</table>\n";
+}
+
+// A vibration combination: the first natural frequency of each state, and the
+// 18/sqrt(delta) estimate from its deflection (model/natural_frequency.hpp).
+void report_writer::frequency_rows(const combination_result& r)
+{
+    const auto& fr = *r.frequency;
+    const auto row = [&](const std::string& label, const std::string (&cells)[4]) {
+        o_ << "<tr><td>" << esc(label) << "</td><td>" << esc(u_.sym(dims::frequency)) << "</td>";
+        for (const auto& c : cells) o_ << "<td class=\"num\">" << c << "</td>";
+        o_ << "</tr>\n";
+    };
+    const std::string exact[4] = {u_.num(fr.pinned, dims::frequency), u_.num(fr.range.min, dims::frequency),
+                                  u_.num(fr.range.max, dims::frequency), u_.num(fr.fixed, dims::frequency)};
+    row("first natural frequency", exact);
+    const auto estimate = [](double d) {
+        return d > 0 ? format_number(frequency_from_deflection(d), 4) : std::string("-");
+    };
+    const auto& deflection = r.envelope.of(&beam_state::max_deflection);
+    const std::string est[4] = {estimate(r.pinned.max_deflection), estimate(deflection.max), estimate(deflection.min),
+                                estimate(r.fixed.max_deflection)};
+    row("estimate 18/sqrt(delta mm)", est);
 }
 
 // Diagrams, pointwise over the span, from the same model the assessment used.
@@ -738,7 +763,9 @@ void report_writer::checks(const beam_assessment& ba)
             // Each quantity kept whole; the line may break at the slash.
             const auto whole = [](const std::string& t) { return "<span class=\"nw\">" + esc(t) + "</span>"; };
             vl = whole(ratio ? format_number(*c.value, 3) : u_.q(*c.value, c.dim));
-            if (c.limit) vl += " / " + whole(ratio ? format_number(*c.limit, 3) : u_.q(*c.limit, c.dim));
+            if (c.limit)
+                vl += std::string(c.limit_is_minimum ? " / min " : " / ") +
+                      whole(ratio ? format_number(*c.limit, 3) : u_.q(*c.limit, c.dim));
         }
         // Two rows per check, kept together on the page: status, id and
         // numbers, then the reason across the full width of the sheet.

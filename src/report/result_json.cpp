@@ -140,6 +140,19 @@ json derived_json(const derived_joint& d)
     return out;
 }
 
+// The demand passed to the support in the governing strength state; null
+// without a strength combination, and each part null where it does not apply.
+json support_demand_json(const joint_assessment& j)
+{
+    if (!j.support) return nullptr;
+    const support_demand& d = j.support->demand;
+    return {{"eccentricity", number(d.eccentricity)},
+            {"moment", number(d.moment)},
+            {"moment_above", optional_number(d.moment_above)},
+            {"moment_below", optional_number(d.moment_below)},
+            {"torsion", optional_number(d.torsion)}};
+}
+
 json joint_json(const joint_assessment& j, const beam& b)
 {
     json out;
@@ -156,6 +169,7 @@ json joint_json(const joint_assessment& j, const beam& b)
     out["behaviour"] = behaviour_json(j, b.at(j.end));
     out["rotation_capacity"] = optional_number(b.at(j.end).rotation_capacity);
     out["derived"] = b.at(j.end).derived ? derived_json(*b.at(j.end).derived) : json(nullptr);
+    out["support_demand"] = support_demand_json(j);
     return out;
 }
 
@@ -166,6 +180,7 @@ std::string unit_of(dimension d)
     if (d == dims::length) return "m";
     if (d == dims::force) return "N";
     if (d == dims::rotational_stiffness) return "N*m/rad";
+    if (d == dims::frequency) return "Hz";
     return "1";
 }
 
@@ -216,6 +231,13 @@ json to_json(const beam_assessment& a)
         const auto& f = result_fields();
         for (std::size_t i = 0; i < f.size(); ++i)
             env[f[i].key] = {{"min", number(r.envelope.ranges[i].min)}, {"max", number(r.envelope.ranges[i].max)}};
+        // A vibration combination: the first natural frequency (Hz) of each state.
+        if (r.frequency) {
+            c["pinned"]["frequency"] = number(r.frequency->pinned);
+            c["fixed"]["frequency"] = number(r.frequency->fixed);
+            for (std::size_t i = 0; i < corners.size(); ++i) corners[i]["frequency"] = number(r.frequency->corners.at(i));
+            env["frequency"] = {{"min", number(r.frequency->range.min)}, {"max", number(r.frequency->range.max)}};
+        }
         c["range"] = {{"corners", corners}, {"envelope", env}, {"interior_points", r.interior_points}};
         c["collapse"] = r.collapse ? json{{"load_factor", number(r.collapse->load_factor)},
                                           {"rotation_start", number(r.collapse->rotation_start)},

@@ -5,6 +5,7 @@
 #include <sstream>
 
 #include "pinproof/core/printable_text.hpp"
+#include "pinproof/model/natural_frequency.hpp"
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/checks/failure_probability.hpp"
 #include "pinproof/checks/threshold.hpp"
@@ -235,6 +236,12 @@ void end_gaps(std::ostringstream& o, const project& p, const beam_assessment& a)
     }
 }
 
+// The engineers' estimate 18/sqrt(delta) of a state's frequency (natural_frequency.hpp).
+std::string estimate_cell(double deflection)
+{
+    return deflection > 0 ? format_number(frequency_from_deflection(deflection), 4) : std::string("-");
+}
+
 // Each combination: every result pinned, over the range and fixed.
 void combination_tables(std::ostringstream& o, const project& p, const beam_assessment& a)
 {
@@ -251,6 +258,17 @@ void combination_tables(std::ostringstream& o, const project& p, const beam_asse
               << rpad(u.cell(r.envelope.ranges[i].min, f[i]), 12)
               << rpad(u.cell(r.envelope.ranges[i].max, f[i]), 12)
               << rpad(u.cell(r.fixed.*(f[i].member), f[i]), 11) << "\n";
+        }
+        if (r.frequency) {
+            const auto& fr = *r.frequency;
+            o << "    " << pad("first natural frequency", 32) << pad(u.unit(dims::frequency), 10)
+              << rpad(u.num(fr.pinned, dims::frequency), 11) << rpad(u.num(fr.range.min, dims::frequency), 12)
+              << rpad(u.num(fr.range.max, dims::frequency), 12) << rpad(u.num(fr.fixed, dims::frequency), 11) << "\n";
+            o << "    " << pad("  estimate 18/sqrt(delta mm)", 32) << pad(u.unit(dims::frequency), 10)
+              << rpad(estimate_cell(r.pinned.max_deflection), 11)
+              << rpad(estimate_cell(r.envelope.of(&beam_state::max_deflection).max), 12)
+              << rpad(estimate_cell(r.envelope.of(&beam_state::max_deflection).min), 12)
+              << rpad(estimate_cell(r.fixed.max_deflection), 11) << "\n";
         }
         if (r.collapse)
             o << "    collapse of the beam (largest sagging moment at M_pl, both joints at their lower bound): at "
@@ -276,7 +294,7 @@ void check_list(std::ostringstream& o, const project& p, const beam_assessment& 
         if (c.value) {
             const bool ratio = c.dim == dims::dimensionless;
             vl = ratio ? format_number(*c.value, 3) : u.num(*c.value, c.dim) + " " + u.unit(c.dim);
-            if (c.limit) vl += " / " + (ratio ? format_number(*c.limit, 3) : u.num(*c.limit, c.dim) + " " + u.unit(c.dim));
+            if (c.limit) vl += std::string(c.limit_is_minimum ? " / min " : " / ") + (ratio ? format_number(*c.limit, 3) : u.num(*c.limit, c.dim) + " " + u.unit(c.dim));
         }
         o << "    " << pad(status_label(c.status), 6) << pad(c.id + "  ", 38) << vl << "\n";
         o << "          " << wrap(c.message, 88, "          ") << "\n";

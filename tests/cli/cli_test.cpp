@@ -228,7 +228,7 @@ TEST_CASE("cli check --json - writes the result JSON on stdout with the required
     REQUIRE(j["beams"].size() == 2);
     const std::set<std::string> stable_ids{"stiffness-class-start", "stiffness-class-end", "joint-moment-start",
                                            "joint-moment-end",      "support-moment-start", "support-moment-end", "moment-reversal-start", "moment-reversal-end",
-                                           "rotation-demand-start", "rotation-demand-end", "deflection",
+                                           "rotation-demand-start", "rotation-demand-end", "deflection", "frequency",
                                            "gap-closure-start",     "gap-closure-end",
                                            "strength-class-start",  "strength-class-end",
                                            "joint-ductility-start", "joint-ductility-end",

@@ -101,6 +101,8 @@ TEST_CASE("every listed unit parses to its exact SI value (1e-12 relative)")
         {"1 deg", 0.017453292519943295, dims::angle, "pi/180, common practice, no source"},
         {"1 kg", 1.0, dimension{0, 1, 0, 0}, "SI base unit"},
         {"1 s", 1.0, dimension{0, 0, 1, 0}, "SI base unit"},
+        {"4 Hz", 4.0, dims::frequency, "hertz = 1/s, SI Brochure Table 4"},
+        {"4 s^-1", 4.0, dims::frequency, "[SI]"},
     };
     for (const auto& c : table) {
         CAPTURE(c.text);
@@ -186,6 +188,8 @@ TEST_CASE("the returned dimension tells a wrong kind of quantity (exact)")
     CHECK(parse_quantity("8356 cm2").dim != dims::second_moment);
     CHECK(parse_quantity("0.5 deg").dim == dims::angle);
     CHECK(parse_quantity("0.5").dim == dims::dimensionless);
+    CHECK(parse_quantity("4 Hz").dim != dims::angle);
+    CHECK(parse_quantity("4 Hz").system == unit_system::neutral);
     CHECK(parse_quantity("6 m").dim != dims::dimensionless);
 }
 

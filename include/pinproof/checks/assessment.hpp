@@ -13,6 +13,7 @@
 #include "pinproof/checks/detailing_rules.hpp"
 #include "pinproof/checks/gap_closure.hpp"
 #include "pinproof/checks/gap_geometry.hpp"
+#include "pinproof/checks/support_demand.hpp"
 #include "pinproof/model/project.hpp"
 #include "pinproof/core/units.hpp"
 
@@ -36,6 +37,9 @@ struct check {
     // False for checks of the detail's geometry alone (detailing rules), which
     // no joint stiffness changes: sensitivity studies leave them out too.
     bool varies_with_stiffness = true;
+    // The limit is a least value (the floor frequency): the check passes where
+    // value >= limit. Otherwise it is a largest value (value <= limit).
+    bool limit_is_minimum = false;
 };
 
 struct value_range {
@@ -57,6 +61,17 @@ struct combination_result {
     state_envelope envelope;
     // Whether the envelope needed more than the corners (docs/method/range-envelope.md).
     int interior_points = 0;
+    // A vibration combination: the first natural frequency of each state
+    // (model/natural_frequency.hpp), Hz.
+    struct frequencies {
+        double pinned = 0, fixed = 0;
+        std::vector<double> corners;  // in the order of `corners`
+        // Over the range box. Adding end stiffness never lowers an eigenvalue
+        // (the Rayleigh quotient of K + dK with dK >= 0), so the frequency grows
+        // with each joint's stiffness and its extremes lie at the corners.
+        value_range range;
+    };
+    std::optional<frequencies> frequency;
     // A strength combination of a beam with a steel: the collapse of the beam
     // with both joints at their lower-bound stiffness (joints/nonlinear_analysis.hpp).
     std::optional<collapse_point> collapse;
@@ -119,6 +134,18 @@ struct joint_assessment {
         std::optional<double> yield_factor;  // of that combination's loads
     };
     std::optional<law_response> law;
+    // The demand passed to the support (support_demand.hpp) in the governing
+    // strength state: the largest |M_j + R e| over the strength combinations
+    // and the corners of the range; nullopt without a strength combination.
+    struct support_response {
+        support_demand demand;
+        std::string combination;
+        double joint_moment = 0;   // N*m, hogging +, in that state
+        double reaction = 0;       // N, up +, in that state
+        double reaction_pinned = 0;  // N, of that combination with pins
+        bool eccentricity_is_default = true;
+    };
+    std::optional<support_response> support;
 };
 
 struct beam_assessment {

@@ -3,7 +3,8 @@
 //
 // The checks are those of assess_beam(), evaluated at one exact stiffness
 // pair (a copy of the beam whose joints have the degenerate range {S, S}).
-// Each check's continuous margin is value - limit (SI): adverse (fail or
+// Each check's continuous margin is value - limit (SI; limit - value for a
+// least limit such as the floor frequency): adverse (fail or
 // warn) when positive, pass when zero or negative. Along a path the search
 // parameter is the fixity factor r = kappa / (kappa + 3) in [0, 1]
 // (Monforton and Wu, 1963), r = 1 being the exact rigid state, so the bracket
@@ -52,7 +53,8 @@ point_evaluation evaluate_at(const project& p, const beam& b, stiffness_pair at)
 // advisory check).
 bool is_adverse(check_status s);
 
-// The continuous margin of a check: value - limit (SI) where both exist;
+// The continuous margin of a check: value - limit (SI) where both exist
+// (limit - value for a least limit, check::limit_is_minimum);
 // otherwise +1 for an adverse and -1 for a passing status (a rigid joint has
 // no finite S*L/EI); nullopt for a check that does not apply.
 std::optional<double> check_margin(const check& c);

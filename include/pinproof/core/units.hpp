@@ -14,7 +14,7 @@
 // Unit symbols understood (case-sensitive):
 //   SI    m (with prefixes k, c, m), N (k, M, G), Pa (k, M, G), kg;
 //   US    ft, in, lbf (synonym lb), kip, psi, ksi;
-//   other s, rad (prefix m), deg.
+//   other s, Hz, rad (prefix m), deg.
 // Exact factors: in = 0.0254 m, ft = 0.3048 m (international yard and pound,
 // 1959); lbf = 0.45359237 kg x 9.80665 m/s^2 (standard gravity, 3rd CGPM
 // 1901); kip = 1000 lbf; psi = lbf/in^2; ksi = kip/in^2; deg = pi/180 rad.
@@ -58,6 +58,7 @@ inline constexpr dimension area{2, 0, 0, 0};                 // m^2
 inline constexpr dimension moment{2, 1, -2, 0};              // N*m
 inline constexpr dimension rotational_stiffness{2, 1, -2, -1};  // N*m/rad
 inline constexpr dimension angle{0, 0, 0, 1};                // rad
+inline constexpr dimension frequency{0, 0, -1, 0};           // Hz (cycles per second)
 }  // namespace dims
 
 // Which family of units a text used. Angles and bare numbers are neutral.

@@ -9,6 +9,7 @@
 #include "pinproof/model/connection_detail.hpp"
 #include "pinproof/model/derived_joint.hpp"
 #include "pinproof/model/joint_behaviour.hpp"
+#include "pinproof/model/section.hpp"
 #include "pinproof/model/stiffness.hpp"
 #include "pinproof/model/stiffness_distribution.hpp"
 
@@ -17,6 +18,13 @@ namespace pinproof {
 struct stiffness_range {
     stiffness min = stiffness::pinned();
     stiffness max = stiffness::pinned();
+};
+
+// The continuous column a joint frames into, as given: one section above and
+// below the joint, and the storey lengths (a length of 0 above: a roof).
+struct joint_column {
+    section sec;
+    double length_above = 0, length_below = 0;  // m
 };
 
 struct joint {
@@ -57,6 +65,13 @@ struct joint {
     std::optional<derived_joint> derived;
     // Why a fin plate was not derived (the derivation's refusal), where it was not.
     std::string not_derived_reason;
+    // The demand passed to the support (checks/support_demand.hpp): the
+    // reaction's eccentricity where given (m; else the default of simple
+    // construction), the column where given, and the moment the support can
+    // take, where given (N*m).
+    std::optional<double> support_eccentricity;
+    std::optional<joint_column> column;
+    std::optional<double> support_moment_resistance;
 };
 
 enum class beam_end { start, end };

@@ -39,9 +39,12 @@ double total_force(const load& l);
 // Clockwise moment of a load about x = 0 (N*m): force * lever + couple.
 double moment_about_start(const load& l);
 
-enum class limit_state { strength, service };
+// A vibration combination (for example G + 0.1 Q) gives the mass that vibrates
+// with the beam: its downward loads over g (model/natural_frequency.hpp). It is
+// neither a strength nor a service combination for the other checks.
+enum class limit_state { strength, service, vibration };
 
-std::string to_string(limit_state u);  // "strength", "service"
+std::string to_string(limit_state u);  // "strength", "service", "vibration"
 
 struct combination {
     std::string name;

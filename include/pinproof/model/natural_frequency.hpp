@@ -6,8 +6,11 @@
 // (cubic Hermite elements; Przemieniecki, Theory of Matrix Structural
 // Analysis, 1968, 11.4), nodes at every mass discontinuity and point mass and
 // at least 48 elements; the springs add to the end rotations' stiffness, a
-// rigid end removes its rotation; the generalised symmetric eigenproblem
-// K phi = omega^2 M phi is solved with Eigen's GeneralizedSelfAdjointEigenSolver.
+// rigid end removes its rotation; the lowest eigenvalue of the generalised
+// symmetric eigenproblem K phi = omega^2 M phi is found by inverse iteration
+// from the static deflection under the mass (Bathe, Finite Element Procedures,
+// 11.2.1, from memory), with Eigen's GeneralizedSelfAdjointEigenSolver where
+// that does not settle.
 // The mass is the combination's downward load divided by the standard
 // acceleration of gravity g_n = 9.80665 m/s^2 (by definition, CGPM 1901):
 // distributed loads give distributed mass (taken as each element's mean),

@@ -36,6 +36,8 @@ struct beam {
     std::vector<combination> combinations;
     joint start, end;
     std::optional<deflection_limit> deflection;
+    // The least first natural frequency under a vibration combination (Hz).
+    std::optional<double> frequency_limit;
     // 1: both joints are the same connection type, one stiffness draw for both;
     // 0: independent (docs/method/sweep-and-probability.md).
     int stiffness_correlation = 1;
