@@ -102,6 +102,31 @@ detailing_finding min_gap(const text& t, const connection_detail& d)
     return f;
 }
 
+// A tolerance left out is 0: the check then takes the gap as detailed as the
+// worst case, which fabrication and erection rarely deliver.
+detailing_finding gap_tolerance(const text& t, const connection_detail& d)
+{
+    const std::string rule = "the gap tolerance (fabrication and erection allowance) should be given";
+    const std::string source = "common practice, no source: beam lengths and the positions of supports vary by a "
+                               "few millimetres (EN 1090-2 gives the permitted deviations)";
+    detailing_finding f;
+    f.id = "gap-tolerance";
+    f.rule = rule;
+    f.source = source;
+    f.value = d.gap_tolerance;
+    f.unit = dims::length;
+    if (d.gap_tolerance_given) {
+        f.status = finding_status::pass;
+        f.message = "the gap tolerance is given: " + t.length(d.gap_tolerance) + ", worst-case gap " +
+                    t.length(d.worst_case_gap());
+    } else {
+        f.status = finding_status::warn;
+        f.message = "no gap_tolerance is given, so it is taken as 0 and the end-gap check uses the gap as detailed (" +
+                    t.length(d.gap) + ") as the worst case; give the fabrication and erection allowance";
+    }
+    return f;
+}
+
 detailing_finding plate_depth(const text& t, const connection_detail& d, const section& beam)
 {
     const std::string rule = "the " + fitting_name(d.type) +
@@ -258,7 +283,8 @@ std::vector<detailing_finding> check_detailing_rules(const connection_detail& de
     if (cache.size() > 1024) cache.clear();
     const text t{units};
     std::vector<detailing_finding> findings{
-        min_gap(t, detail),           plate_depth(t, detail, beam),   plate_ductility(t, detail, beam),
+        min_gap(t, detail),           gap_tolerance(t, detail),       plate_depth(t, detail, beam),
+        plate_ductility(t, detail, beam),
         bolt_hole_clearance(t, detail), bolt_edge_distance(t, detail), long_fin_plate(t, detail),
         end_plate_thickness(t, detail)};
     // Each message is a sentence: it starts with a capital and ends with a full stop.

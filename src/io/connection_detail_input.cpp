@@ -561,6 +561,54 @@ void check_clear_at_rest(reader& r, const connection_detail& d, const section& b
 
 }  // namespace
 
+namespace {
+
+// The fields the detail was read with, each given or defaulted, with the
+// default's source (the constants above).
+std::vector<detail_input> inputs_of(const json& value, const connection_detail& d, const fitting_keys& k,
+                                    design_standard standard)
+{
+    std::vector<detail_input> out;
+    const auto length = [&](const std::string& key, double v, const std::string& source) {
+        out.push_back({key, v, "", !value.contains(key), value.contains(key) ? "" : source});
+    };
+    const auto text = [&](const std::string& key, const std::string& v, bool defaulted, const std::string& source) {
+        out.push_back({key, std::nullopt, v, defaulted, defaulted ? source : ""});
+    };
+    const bool us = standard == design_standard::aisc360;
+    const char* const components = "the standard components of simple joints (Steel Buildings in Europe, Part 5: "
+                                   "Joint design, MSB05 p. 14)";
+    text("support", to_string(d.support), !value.contains("support"),
+         "a column flange, the usual support of a simple beam end (common practice, no source)");
+    if (d.type != detail_type::end_plate && d.type != detail_type::custom)
+        length("gap", d.gap, "10 mm, the usual gap of fin plate and cleat joints (SCI P212, from memory)");
+    length("gap_tolerance", d.gap_tolerance,
+           "0: none assumed, so the worst-case gap is the gap as detailed; give the fabrication and erection "
+           "allowance (see the gap-tolerance detailing rule)");
+    if (d.type == detail_type::custom) return out;
+    length(k.top, d.plate_top, std::string("50 mm, ") + components);
+    length(k.depth, d.plate_depth, "from the bolt rows: 2 x first_bolt + (rows - 1) x bolt_pitch");
+    length(k.thickness, d.plate_thickness, std::string("10 mm, ") + components);
+    if (d.type == detail_type::fin_plate || d.type == detail_type::end_plate)
+        text("plate_grade", to_string(d.grade), d.grade_is_default,
+             std::string(us ? "A36" : "S275") + ", the usual plate grade (common practice, no source)");
+    length("bolt_diameter", d.bolts.diameter, std::string("M20 (20 mm), ") + components);
+    length("hole_diameter", d.bolts.hole_diameter,
+           "a normal clearance hole, d + 2 mm up to M24 and d + 3 mm above (Steel Buildings in Europe, Part 5, "
+           "MSB05 p. 16)");
+    text("bolt_rows", std::to_string(d.bolts.rows), !value.contains("bolt_rows"),
+         value.contains(k.depth) ? "as many as the fitting's depth takes at the pitch"
+                                 : "the fewest rows whose fitting reaches 0.6 x the beam depth (Steel Buildings in "
+                                   "Europe, Part 5, MSB05 p. 16, 32)");
+    length("bolt_pitch", d.bolts.pitch, std::string("70 mm, ") + components);
+    length("first_bolt", d.bolts.first_bolt, std::string("40 mm below the top of the fitting, ") + components);
+    if (d.type == detail_type::fin_plate)
+        length("bolt_line", d.bolts.bolt_line, "50 mm from the beam end (common practice, no source)");
+    return out;
+}
+
+}  // namespace
+
 connection_detail read_connection_detail(const nlohmann::json& value, const std::string& pointer, const section& beam,
                                          problem_list& problems, design_standard standard)
 {
@@ -587,6 +635,7 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
 
     const auto tolerance = r.length("gap_tolerance", 0.0, true);
     if (tolerance) d.gap_tolerance = *tolerance;
+    d.gap_tolerance_given = r.has("gap_tolerance");
 
     if (!custom)
         read_fitting(r, d, k, h, before);
@@ -603,6 +652,7 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
     read_support(r, d);
     read_centre_of_rotation(r, d, h);
     if (problems.size() == before) check_clear_at_rest(r, d, beam);
+    if (problems.size() == before) d.inputs = inputs_of(value, d, k, standard);
     return d;
 }
 

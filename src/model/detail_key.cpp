@@ -23,7 +23,7 @@ std::string detail_key(const connection_detail& d, const section& beam)
         if (present(v.has_value())) put(*v);
     };
     for (long v : {static_cast<long>(d.type), static_cast<long>(d.support), static_cast<long>(d.grade),
-                   static_cast<long>(d.bolts.rows)})
+                   static_cast<long>(d.bolts.rows), static_cast<long>(d.gap_tolerance_given)})
         put_int(v);
     for (double v : {d.gap, d.gap_tolerance, d.plate_top, d.plate_depth, d.plate_thickness, d.bolts.diameter,
                      d.bolts.hole_diameter, d.bolts.pitch, d.bolts.first_bolt, d.bolts.bolt_line})

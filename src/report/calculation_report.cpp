@@ -204,6 +204,7 @@ private:
     void inputs(const beam& b);
     void joints(const beam& b, const beam_assessment& ba);
     void derived_joints(const beam& b);
+    void connection_inputs(const beam& b);
     void combination_block(const beam& b, const combination_result& r);
     void results_table(const combination_result& r);
     void frequency_rows(const combination_result& r);
@@ -318,6 +319,8 @@ void report_writer::head()
           ".verdict.pass { border-color: #1b6e20; color: #1b6e20; }\n"
           ".caution { border: 1px solid #8a5a00; background: #fff8e6; padding: 2mm 3mm; margin: 3mm 0; }\n"
           ".note { font-size: 9pt; color: #333; }\n"
+          "p.inputs { font-size: 9pt; margin-bottom: 0.5mm; }\n"
+          "ul.defaults { margin: 0 0 2mm 0; padding-left: 5mm; list-style: none; }\n"
           "@media print { body { padding: 0; } a { color: inherit; text-decoration: none; }\n"
           // On paper a chart needs less height than on a screen: the drawing
           // keeps its proportions inside the box (the viewBox scales it).
@@ -470,6 +473,30 @@ void report_writer::joints(const beam& b, const beam_assessment& ba)
     for (const auto& n : ba.notes) o_ << "<p class=\"note\">Note: " << esc(n) << "</p>\n";
 }
 
+// Each joint's connection as the assessment used it: every field, given or
+// taken as a default, and the default's source, so that no assumption is silent.
+void report_writer::connection_inputs(const beam& b)
+{
+    for (const beam_end e : {beam_end::start, beam_end::end}) {
+        const joint& jt = b.at(e);
+        if (!jt.detail || jt.detail->inputs.empty()) continue;
+        // One compact line of fields (a default marked *), then each default's source.
+        o_ << "<p class=\"inputs\"><strong>Connection at the " << to_string(e) << " as used ("
+           << esc(to_string(jt.detail->type)) << ", * a default):</strong> ";
+        bool first = true;
+        for (const detail_input& i : jt.detail->inputs) {
+            o_ << (first ? "" : "; ") << "<span class=\"nw\">" << esc(i.field) << " "
+               << esc(i.length ? u_.q(*i.length, dims::length) : i.text) << (i.is_default ? "*" : "") << "</span>";
+            first = false;
+        }
+        o_ << ".</p>\n";
+        std::string defaults;
+        for (const detail_input& i : jt.detail->inputs)
+            if (i.is_default) defaults += "<li>* " + esc(i.field) + ": " + esc(i.source) + "</li>\n";
+        if (!defaults.empty()) o_ << "<ul class=\"note defaults\">\n" << defaults << "</ul>\n";
+    }
+}
+
 // Each joint derived from its detail: a table of its components with the
 // governing one marked, then its resistances, stiffness and defaults.
 void report_writer::derived_joints(const beam& b)
@@ -479,8 +506,8 @@ void report_writer::derived_joints(const beam& b)
         if (!jt.derived) continue;
         const derived_joint& d = *jt.derived;
         o_ << "<h4>Joint at the " << to_string(e) << " from its detail (" << esc(d.basis) << ", "
-           << esc(to_string(jt.detail->type)) << ")</h4>\n<table>\n<tr><th>Component</th><th>Resistance</th>"
-              "<th>Per bolt</th><th>Source</th><th></th></tr>\n";
+           << esc(to_string(jt.detail->type)) << ")</h4>\n<table>\n<thead><tr><th>Component</th><th>Resistance</th>"
+              "<th>Per bolt</th><th>Source</th><th></th></tr></thead>\n";
         for (const joint_component& c : d.components) {
             const bool governs = c.id == d.governing;
             o_ << "<tr" << (governs ? " class=\"governs\"" : "") << "><td>" << (governs ? "<strong>" : "") << esc(c.id)
@@ -803,6 +830,7 @@ void report_writer::beam_section(const beam_assessment& ba)
     o_ << "<section class=\"beam\" id=\"beam-" << ++beams_ << "\">\n<h2>Beam " << esc(b.id) << "</h2>\n";
     inputs(b);
     joints(b, ba);
+    connection_inputs(b);
     derived_joints(b);
     for (const auto& r : ba.combinations) combination_block(b, r);
     sweep_chart(b);

@@ -170,6 +170,15 @@ json joint_json(const joint_assessment& j, const beam& b)
     out["rotation_capacity"] = optional_number(b.at(j.end).rotation_capacity);
     out["derived"] = b.at(j.end).derived ? derived_json(*b.at(j.end).derived) : json(nullptr);
     out["support_demand"] = support_demand_json(j);
+    // The connection as used, every default marked with its source.
+    json inputs = json::array();
+    if (const auto& d = b.at(j.end).detail)
+        for (const detail_input& i : d->inputs)
+            inputs.push_back({{"field", i.field},
+                              {"value", i.length ? json(number(*i.length)) : json(i.text)},
+                              {"default", i.is_default},
+                              {"source", i.is_default ? json(i.source) : json(nullptr)}});
+    out["inputs"] = inputs;
     return out;
 }
 

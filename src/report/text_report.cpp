@@ -221,10 +221,21 @@ void end_gaps(std::ostringstream& o, const project& p, const beam_assessment& a)
             o << "    smallest gap that passes: " << wrap(d.gap.min_gap_note, 80, "      ") << "\n";
         o << "    the 30 mrad rule of thumb for simple connections (comparison only): "
           << (d.clears_rule_of_thumb ? "cleared" : "NOT cleared") << "\n";
+        if (!jt.detail->inputs.empty()) {
+            // Every field the detail was read with; a default is marked and its source given.
+            std::string given;
+            for (const auto& i : jt.detail->inputs)
+                given += (given.empty() ? "" : ", ") + i.field + " " +
+                         (i.length ? u.num(*i.length, dims::length) + " " + u.unit(dims::length) : i.text) +
+                         (i.is_default ? "*" : "");
+            o << "    connection input (* a default): " << wrap(given, 80, "      ") << "\n";
+            for (const auto& i : jt.detail->inputs)
+                if (i.is_default) o << "      * " << i.field << ": " << wrap(i.source, 80, "        ") << "\n";
+        }
         if (d.consequence) {
             const auto& c = *d.consequence;
             const double M = j->end == beam_end::start ? c.result.state.moment_start : c.result.state.moment_end;
-            o << "    after closure (" << c.combination << ", lower-bound stiffness): joint moment "
+            o << "    after closure (" << c.combination << ", each joint at the stiffness its gap check credits): joint moment "
               << u.num(M, dims::moment) << " " << u.unit(dims::moment) << ", bearing force "
               << u.num(c.contact_force, dims::force) << " " << u.unit(dims::force) << " at an arm of "
               << u.num(c.lever_arm, dims::length) << " " << u.unit(dims::length) << ", max sagging moment "

@@ -70,12 +70,25 @@ detailing_finding rule(const connection_detail& d, const std::string& id, const 
 TEST_CASE("every rule is reported once - with its rule and source stated")
 {
     const auto all = check_detailing_rules(fin_plate(), ipe300());
-    CHECK(all.size() == 7);
+    CHECK(all.size() == 8);
     for (const auto& f : all) {
         CHECK_FALSE(f.rule.empty());
         CHECK_FALSE(f.source.empty());
         CHECK_FALSE(f.message.empty());
     }
+}
+
+TEST_CASE("gap-tolerance [common practice - no source]: warn when it is left out and taken as 0 - pass when given")
+{
+    auto d = fin_plate();
+    d.gap_tolerance_given = false;
+    d.gap_tolerance = 0;
+    auto f = rule(d, "gap-tolerance");
+    CHECK(f.status == finding_status::warn);
+    CHECK(f.message.find("taken as 0") != std::string::npos);
+    d.gap_tolerance_given = true;
+    d.gap_tolerance = 3 * mm;
+    CHECK(rule(d, "gap-tolerance").status == finding_status::pass);
 }
 
 TEST_CASE("min-gap: 10 mm [P212 - from memory]")

@@ -103,6 +103,39 @@ TEST_CASE("fin plate defaults")
     CHECK(d.bolts.bolt_line == doctest::Approx(50 * mm));
     CHECK(d.grade == plate_grade::s275);
     CHECK_FALSE(d.centre_of_rotation.has_value());
+    // Every field used is listed, each a default with its source [issue: no silent default].
+    CHECK_FALSE(d.gap_tolerance_given);
+    REQUIRE(d.inputs.size() == 13);
+    for (const auto& i : d.inputs) {
+        CAPTURE(i.field);
+        CHECK(i.is_default);
+        CHECK_FALSE(i.source.empty());
+    }
+    CHECK(d.inputs[2].field == "gap_tolerance");
+    CHECK(*d.inputs[2].length == 0);
+}
+
+TEST_CASE("connection inputs: given fields are marked given - defaults keep their source")
+{
+    const auto r = read(R"({"type": "fin-plate", "gap": "12 mm", "gap_tolerance": "3 mm", "bolt_rows": 3})");
+    REQUIRE(r.problems.empty());
+    const auto& in = r.detail.inputs;
+    const auto find = [&](const std::string& f) {
+        for (const auto& i : in)
+            if (i.field == f) return i;
+        FAIL("no input " << f);
+        return detail_input{};
+    };
+    CHECK_FALSE(find("gap").is_default);
+    CHECK(*find("gap").length == doctest::Approx(12 * mm));
+    CHECK(find("gap").source.empty());
+    CHECK_FALSE(find("gap_tolerance").is_default);
+    CHECK(r.detail.gap_tolerance_given);
+    CHECK_FALSE(find("bolt_rows").is_default);
+    CHECK(find("bolt_rows").text == "3");
+    CHECK(find("bolt_pitch").is_default);
+    CHECK(find("bolt_pitch").source.find("MSB05") != std::string::npos);
+    CHECK(find("plate_depth").is_default);  // from the rows
 }
 
 TEST_CASE("fields as given - in units")

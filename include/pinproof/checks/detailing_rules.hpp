@@ -24,7 +24,7 @@ enum class finding_status { pass, warn, not_applicable };
 std::string to_string(finding_status s);  // "pass", "warn", "not-applicable"
 
 struct detailing_finding {
-    // Stable rule id, the same for both ends: "min-gap", "plate-depth",
+    // Stable rule id, the same for both ends: "min-gap", "gap-tolerance", "plate-depth",
     // "plate-ductility", "bolt-hole-clearance", "bolt-edge-distance",
     // "long-fin-plate", "end-plate-thickness".
     std::string id;

@@ -100,6 +100,17 @@ struct derivation_fields {
     std::optional<double> edge_distance;    // fin plate: bolt line to the plate's free vertical edge
 };
 
+// One field of the detail as the assessment used it: given in the file, or
+// taken by the reader as a default, with the default's source. Every report
+// lists them, so that no assumption is silent (docs/file-format.md).
+struct detail_input {
+    std::string field;             // as in the file: "gap", "bolt_pitch", ...
+    std::optional<double> length;  // m, for a length
+    std::string text;              // for anything else: a name, a grade, a count
+    bool is_default = false;
+    std::string source;            // of a default: its value's origin and status
+};
+
 struct connection_detail {
     detail_type type = detail_type::fin_plate;
     support_type support = support_type::column_flange;
@@ -129,6 +140,10 @@ struct connection_detail {
     std::optional<detail_point> centre_of_rotation;
     // custom: the beam-end outline as a simple polygon, in order (either sense).
     std::vector<detail_point> outline;
+    // The fields as used, in reading order, each given or defaulted.
+    std::vector<detail_input> inputs;
+    // Whether the gap tolerance was given (a default of 0 is flagged).
+    bool gap_tolerance_given = false;
 };
 
 // The code's smallest distance from a bolt hole's centre to an edge or end of
