@@ -343,12 +343,14 @@ check joint_moment_check(const project& p, const beam& b, const std::vector<comb
         return c;
     }
     c.limit = *mrd;
+    // A resistance worked out from the detail is not the user's declaration.
+    const std::string whose = b.at(e).moment_resistance_from_detail ? "derived (from its detail)" : "declared";
     if (g.value <= *mrd) {
         c.status = check_status::pass;
-        c.message = attracted + ", within its declared moment resistance " + fmt(*mrd, dims::moment) + ".";
+        c.message = attracted + ", within its " + whose + " moment resistance " + fmt(*mrd, dims::moment) + ".";
     } else {
         c.status = check_status::fail;
-        c.message = attracted + ", more than its declared moment resistance " + fmt(*mrd, dims::moment) +
+        c.message = attracted + ", more than its " + whose + " moment resistance " + fmt(*mrd, dims::moment) +
                     ": the joint would have to yield to behave as a pin. As a linear spring it never yields, which "
                     "overstates the moment: give the joint its moment-rotation law (a \"behaviour\", e.g. " +
                     std::string(p.standard == design_standard::en1993_1_8

@@ -528,7 +528,7 @@ void report_writer::derived_joints(const beam& b)
             o_ << "initial stiffness not derived (" << esc(d.basis) << " gives no component stiffness)";
         o_ << "; free rotation before the bolts bear " << u_.q(d.free_rotation, dims::angle)
            << "; rotation capacity not derived.</p>\n";
-        for (const auto& s : d.defaults) o_ << "<p class=\"note\">Default: " << esc(s) << "</p>\n";
+        for (const auto& s : d.defaults) o_ << "<p class=\"note\">Assumed: " << esc(s) << "</p>\n";
         for (const auto& s : d.limits_exceeded)
             o_ << "<p class=\"note\">Beyond the conventional configuration: " << esc(s) << "</p>\n";
     }

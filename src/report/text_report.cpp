@@ -175,7 +175,7 @@ void derived_joints(std::ostringstream& o, const project& p, const beam_assessme
             o << "    initial stiffness: not derived (" << d.basis << " gives no component stiffness)\n";
         o << "    free rotation before the bolts bear " << u.num(d.free_rotation, dims::angle) << " " << u.unit(dims::angle)
           << "; rotation capacity not derived\n";
-        for (const auto& s : d.defaults) o << "    default: " << s << "\n";
+        for (const auto& s : d.defaults) o << "    assumed: " << s << "\n";
         for (const auto& s : d.limits_exceeded) o << "    beyond the conventional configuration: " << s << "\n";
     }
 }
