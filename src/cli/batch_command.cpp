@@ -65,8 +65,8 @@ void report_problems(const std::vector<input_problem>& problems, std::ostream& e
 CLI::App* add_batch_subcommand(CLI::App& app, batch_command_options& o)
 {
     auto* cmd = app.add_subcommand("batch", "Check every beam of a schedule (CSV) against a detail catalogue");
-    cmd->add_option("SCHEDULE", o.schedule, "Schedule: CSV with a header row, one beam per row")->required();
-    cmd->add_option("--details", o.details, "Detail catalogue (format pinproof-details/1)")
+    cmd->add_option("SCHEDULE", o.schedule, "Schedule: CSV with a header row, one beam per row ('-' for standard input)")->required();
+    cmd->add_option("--details", o.details, "Detail catalogue (format pinproof-details/1; '-' for standard input)")
         ->type_name("FILE")
         ->required();
     cmd->add_option("--out-csv", o.out_csv, "Write the summary CSV to FILE ('-' for stdout; the default without --out-json)")

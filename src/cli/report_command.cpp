@@ -44,7 +44,7 @@ int report_command(const std::string& file, const std::string& out_path, std::os
     output_set outputs;
     outputs.add_input(file);
     outputs.add_input(details_file);
-    outputs.add("-o", out_path, "");
+    if (out_path != "-") outputs.add("-o", out_path, "");
     outputs.check();  // before any work
 
     project p = load_project_file(file, details_file);
@@ -53,11 +53,15 @@ int report_command(const std::string& file, const std::string& out_path, std::os
     const std::string bytes = read_input_file(file, "project file");
     const project_assessment a = assess_project(p);
     report_info info;
-    info.input_file = file;
+    info.input_file = file == "-" ? "(standard input)" : file;
     info.input_sha256 = input_hash(bytes);
     info.date = today_iso();
     info.version = PINPROOF_VERSION;
     const std::string html = calculation_report_html(p, a, info);
+    if (out_path == "-") {  // the report itself on standard output, nothing else
+        out << html;
+        return a.all_hold() ? 0 : 1;
+    }
     output_set final_outputs;
     final_outputs.add_input(file);
     final_outputs.add_input(details_file);

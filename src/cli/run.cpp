@@ -147,7 +147,7 @@ command_line::command_line()
     app.require_subcommand(0, 1);
     app.footer(exit_codes_text);
     const char* details_help = "Detail catalogue (format pinproof-details/1) for joints given as detail ids; "
-                               "overrides the project's \"details\" key";
+                               "overrides the project's \"details\" key ('-' for standard input)";
     define_check_and_detail(details_help);
     sweep = app.add_subcommand("sweep", "Sweep a beam's joint stiffness from a true pin to rigid: results, "
                                         "thresholds and failure probabilities");
@@ -162,7 +162,7 @@ command_line::command_line()
 void command_line::define_check_and_detail(const char* details_help)
 {
     check = app.add_subcommand("check", "Check every beam of a project file and print the report");
-    check->add_option("FILE", file, "Project file (format pinproof-project/1)")->required();
+    check->add_option("FILE", file, "Project file (format pinproof-project/1; '-' for standard input)")->required();
     check->add_option("--json", json_out, "Also write the machine-readable result to FILE ('-' for stdout); "
                                           "refused if FILE is an input")
         ->type_name("FILE");
@@ -173,7 +173,7 @@ void command_line::define_check_and_detail(const char* details_help)
     sections->footer("Exit codes: 0 listed.");
 
     detail = app.add_subcommand("detail", "Check the end gap of one joint and draw its elevation (SVG)");
-    detail->add_option("FILE", detail_opts.file, "Project file (format pinproof-project/1)")->required();
+    detail->add_option("FILE", detail_opts.file, "Project file (format pinproof-project/1; '-' for standard input)")->required();
     detail->add_option("--beam", detail_opts.beam, "Beam id")->required();
     detail->add_option("--end", detail_opts.end, "Which joint: start or end")
         ->check(CLI::IsMember({"start", "end"}))
@@ -185,8 +185,8 @@ void command_line::define_check_and_detail(const char* details_help)
 void command_line::define_report(const char* details_help)
 {
     report = app.add_subcommand("report", "Write the calculation report of a project file as one HTML file");
-    report->add_option("FILE", report_file, "Project file (format pinproof-project/1)")->required();
-    report->add_option("-o,--output", report_out, "HTML file to write")->required()->type_name("FILE");
+    report->add_option("FILE", report_file, "Project file (format pinproof-project/1; '-' for standard input)")->required();
+    report->add_option("-o,--output", report_out, "HTML file to write ('-' for stdout)")->required()->type_name("FILE");
     report->add_option("--details", report_details, details_help)->type_name("FILE");
 }
 

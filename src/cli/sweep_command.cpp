@@ -25,7 +25,7 @@ namespace pinproof::cli {
 
 void add_sweep_options(CLI::App& sub, sweep_options& o)
 {
-    sub.add_option("FILE", o.file, "Project file (format pinproof-project/1)")->required();
+    sub.add_option("FILE", o.file, "Project file (format pinproof-project/1; '-' for standard input)")->required();
     sub.add_option("--details", o.details, "Detail catalogue for joints given as detail ids")->type_name("FILE");
     sub.add_option("--beam", o.beam_id, "Id of the beam to sweep (default: the first beam)")->type_name("ID");
     sub.add_option("--combination", o.combination,

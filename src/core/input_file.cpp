@@ -79,12 +79,61 @@ private:
     int fd_;
 };
 
+// Appends everything left on `fd` to `text`, held to max_input_bytes.
+void read_to_end(int fd, const std::string& path, const std::string& what, std::string& text)
+{
+    char buf[1 << 16];
+    for (;;) {
+        const ssize_t n = ::read(fd, buf, sizeof buf);
+        if (n == 0) break;
+        if (n < 0) {
+            if (errno == EINTR) continue;
+            const int e = errno;
+            throw input_error(path, "cannot read the " + what + ": " + std::strerror(e));
+        }
+        // A file that grows while it is read, or a pipe, is still held to the limit.
+        if (text.size() + static_cast<std::size_t>(n) > max_input_bytes)
+            throw input_error(path, "expected a " + what + " of at most 512 MiB, found more; the limit is " +
+                                        size_text(max_input_bytes));
+        text.append(buf, static_cast<std::size_t>(n));
+    }
+}
+
+// Standard input can be read once: its text is kept for a second read of the
+// same input (the report hashes the bytes its project was read from), and a
+// second kind of input named "-" is refused.
+struct standard_input_read {
+    bool done = false;
+    std::string what, text;
+};
+standard_input_read& standard_input()
+{
+    static standard_input_read in;
+    return in;
+}
+
+std::string read_standard_input(const std::string& what)
+{
+    std::lock_guard<std::mutex> lock(registry_mutex);
+    auto& in = standard_input();
+    if (in.done) {
+        if (in.what == what) return in.text;
+        throw input_error("-", "standard input can be read once, and it is already the " + in.what +
+                                   "; give the " + what + " as a file");
+    }
+    std::string text;
+    read_to_end(STDIN_FILENO, "-", what, text);
+    in = {true, what, text};
+    registry().push_back({file_identity{}, "-", what + " (standard input)", text.size()});
+    return text;
+}
+
 }  // namespace
 
 std::string read_input_file(const std::string& path, const std::string& what)
 {
-    const std::string limit = "the limit is " + size_text(max_input_bytes);
     if (path.empty()) throw input_error("(command line)", "expected the path of the " + what + ", found an empty name");
+    if (path == "-") return read_standard_input(what);
     // Look before opening: opening a FIFO with no writer would block, and a
     // directory opens fine on Linux.
     struct stat st {};
@@ -112,20 +161,7 @@ std::string read_input_file(const std::string& path, const std::string& what)
 
     std::string text;
     if (S_ISREG(opened.st_mode)) text.reserve(static_cast<std::size_t>(opened.st_size));
-    char buf[1 << 16];
-    for (;;) {
-        const ssize_t n = ::read(fd.get(), buf, sizeof buf);
-        if (n == 0) break;
-        if (n < 0) {
-            if (errno == EINTR) continue;
-            const int e = errno;
-            throw input_error(path, "cannot read the " + what + ": " + std::strerror(e));
-        }
-        // A file that grows while it is read, or a pipe, is still held to the limit.
-        if (text.size() + static_cast<std::size_t>(n) > max_input_bytes)
-            throw input_error(path, "expected a " + what + " of at most 512 MiB, found more; " + limit);
-        text.append(buf, static_cast<std::size_t>(n));
-    }
+    read_to_end(fd.get(), path, what, text);
     note_bytes(path, text.size());
     return text;
 }
@@ -143,6 +179,7 @@ std::vector<file_identity> input_files_read()
     std::lock_guard<std::mutex> lock(registry_mutex);
     std::vector<file_identity> out;
     for (const auto& f : registry()) {
+        if (f.path == "-") continue;  // standard input: no name to write to
         // A file deleted since may have given its inode to a new file: count
         // only those still found under the name they were read by.
         struct stat st {};

@@ -278,7 +278,11 @@ void output_set::add(std::string option, std::string path, std::string content)
     outputs_.push_back({std::move(option), std::move(path), std::move(content)});
 }
 
-void output_set::add_input(std::string path) { inputs_.push_back(std::move(path)); }
+void output_set::add_input(std::string path)
+{
+    if (path == "-") return;  // standard input has no name an output could take
+    inputs_.push_back(std::move(path));
+}
 
 void output_set::check() const
 {

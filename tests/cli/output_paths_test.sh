@@ -291,5 +291,33 @@ else
     fail "unknown --beam among 10,000 beams: exit $code, $size bytes"
 fi
 
+# --- Standard input and output: '-' wherever a file is read or written ------
+# (common practice of command-line tools, no source.)
+fresh
+"$bin" check p.json >../by-name.txt 2>/dev/null
+"$bin" check - <p.json >../by-stdin.txt 2>/dev/null; code=$?
+if [ "$code" = 0 ] && cmp -s ../by-name.txt ../by-stdin.txt; then pass "check - reads the project from standard input"
+else fail "check -: exit $code or a report that differs from check p.json"; fi
+"$bin" report - -o - <p.json >../r.html 2>../err; code=$?
+if [ "$code" = 0 ] && head -c 15 ../r.html | grep -q '<!DOCTYPE html>' && grep -q '(standard input)' ../r.html \
+    && ! grep -q 'Report written' ../r.html; then
+    expect_refused_listing=$(ls -A | sort | cmp -s - ../listing && echo same)
+    if [ "$expect_refused_listing" = same ]; then pass "report - -o -: the HTML on standard output, no file named '-'"
+    else fail "report - -o -: files changed"; fi
+else fail "report - -o -: exit $code, $(head -c 80 ../r.html)"; fi
+"$bin" batch - --details d.json <s.csv >../b-stdin.csv 2>/dev/null; c1=$?
+"$bin" batch s.csv --details d.json >../b-name.csv 2>/dev/null; c2=$?
+if [ "$c1" = "$c2" ] && cmp -s ../b-stdin.csv ../b-name.csv; then pass "batch - reads the schedule from standard input"
+else fail "batch -: exit $c1 vs $c2 or a different summary"; fi
+"$bin" batch s.csv --details - <d.json >../b-cat.csv 2>/dev/null
+if cmp -s ../b-cat.csv ../b-name.csv; then pass "batch --details - reads the catalogue from standard input"
+else fail "batch --details -: a different summary"; fi
+"$bin" check - --details - <p.json >/dev/null 2>../err; code=$?
+if [ "$code" = 2 ] && grep -q "standard input can be read once" ../err; then pass "two inputs named '-' refused"
+else fail "two inputs named '-': exit $code, $(head -2 ../err)"; fi
+"$bin" sweep - --beam MZ-C/3-4 --csv - <p.json >../sw.csv 2>/dev/null; code=$?
+if [ "$code" -le 1 ] && head -1 ../sw.csv | grep -q 'kappa\|stiffness'; then pass "sweep - --csv -"
+else fail "sweep - --csv -: exit $code, $(head -c 80 ../sw.csv)"; fi
+
 if [ $failures -gt 0 ]; then echo "output paths: $failures failed"; exit 1; fi
 echo "output paths: all passed"
