@@ -10,6 +10,7 @@
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/joints/classification.hpp"
 #include "pinproof/joints/nonlinear_analysis.hpp"
+#include "pinproof/report/beam_elevation.hpp"
 #include "pinproof/report/beam_line_chart.hpp"
 #include "pinproof/report/detail_drawing.hpp"
 #include "pinproof/core/errors.hpp"
@@ -829,6 +830,10 @@ void report_writer::beam_section(const beam_assessment& ba)
     const beam& b = *ba.input;
     o_ << "<section class=\"beam\" id=\"beam-" << ++beams_ << "\">\n<h2>Beam " << esc(b.id) << "</h2>\n";
     inputs(b);
+    figure("elevation", beam_elevation_svg(b, p_.units),
+           "Beam " + b.id + " as analysed: each end drawn as its idealisation (pin, roller, rotational spring with "
+           "its stiffness range, or fixed), the unfactored loads of every case drawn to scale within their kind, and "
+           "the span and load positions.");
     joints(b, ba);
     connection_inputs(b);
     derived_joints(b);

@@ -1,5 +1,7 @@
 #include "pinproof/report/detail_drawing.hpp"
 
+#include "pinproof/report/xml_text.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <sstream>
@@ -18,20 +20,7 @@ constexpr double char_width = 6.6;     // px, a conservative average for 12 px s
 constexpr double label_column = 340.0; // px
 constexpr double max_draw_w = 620.0, max_draw_h = 520.0;
 
-std::string esc(const std::string& s)
-{
-    std::string o;
-    for (char c : s) {
-        switch (c) {
-        case '&': o += "&amp;"; break;
-        case '<': o += "&lt;"; break;
-        case '>': o += "&gt;"; break;
-        case '"': o += "&quot;"; break;
-        default: o += (static_cast<unsigned char>(c) < 0x20 && c != '\t' && c != '\n' && c != '\r') ? "\xEF\xBF\xBD" : std::string(1, c);  // XML 1.0 2.2: no C0 but tab, LF, CR
-        }
-    }
-    return o;
-}
+std::string esc(const std::string& s) { return xml_text(s); }
 
 std::string num(double v)
 {

@@ -1,5 +1,7 @@
 #include "pinproof/report/svg_chart.hpp"
 
+#include "pinproof/report/xml_text.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
@@ -26,20 +28,7 @@ constexpr double row_height = 15;    // px, one row of marker labels
 
 double text_width(const std::string& s) { return char_width * static_cast<double>(s.size()); }
 
-std::string escape(const std::string& s)
-{
-    std::string out;
-    for (char c : s) {
-        switch (c) {
-        case '&': out += "&amp;"; break;
-        case '<': out += "&lt;"; break;
-        case '>': out += "&gt;"; break;
-        case '"': out += "&quot;"; break;
-        default: out += (static_cast<unsigned char>(c) < 0x20 && c != '\t' && c != '\n' && c != '\r') ? "\xEF\xBF\xBD" : std::string(1, c);  // XML 1.0 2.2: no C0 but tab, LF, CR
-        }
-    }
-    return out;
-}
+std::string escape(const std::string& s) { return xml_text(s); }
 
 std::string num(double v)
 {

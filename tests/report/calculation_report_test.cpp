@@ -71,11 +71,11 @@ std::size_t expected_details(const project& p)
 std::size_t expected_charts(const project& p)
 {
     std::size_t n = expected_details(p);
-    // Per combination: moment and shear (strength), or deflection; then the
-    // sweep and a beam line per end.
+    // Per beam its elevation; per combination: moment and shear (strength), or
+    // deflection; then the sweep and a beam line per end.
     for (const auto& b : p.beams)
         for (const auto& c : b.combinations) n += c.use == limit_state::strength ? 2 : 1;
-    for (const auto& b : p.beams) n += 1 + 2;
+    for (const auto& b : p.beams) n += 1 + 1 + 2;
     return n;
 }
 
@@ -127,6 +127,7 @@ TEST_CASE("the report is self-contained and carries verdict and caution and ever
     CHECK(count(html, "data-chart=\"shear\"") == 2);
     CHECK(count(html, "data-chart=\"deflection\"") == 3);
     CHECK(count(html, "data-chart=\"sweep\"") == 2);
+    CHECK(count(html, "data-chart=\"elevation\"") == 2);
     CHECK(count(html, "data-chart=\"beam-line\"") == 4);
     CHECK(count(html, "data-chart=\"gap-detail\"") == expected_details(p));
     CHECK(expected_details(p) > 0);  // the example details its joints

@@ -103,7 +103,7 @@ if grep -q "Verdict: the simple-support (pinned) assumption HOLDS for every beam
 else fail "verdict text in the page"; fi
 grep -q "local codes and licensed practice govern" "$work/dom.html" && pass "caution in the page" || fail "caution in the page"
 
-# Charts: per beam a moment and a shear diagram per strength combination, a
+# Charts: per beam its elevation, a moment and a shear diagram per strength combination, a
 # deflection diagram per other combination, the stiffness sweep and a beam
 # line per end, and a gap drawing per detailed joint.
 expected=$("$python" - "$input" <<'PY'
@@ -111,7 +111,7 @@ import json, sys
 p = json.load(open(sys.argv[1]))
 n = 0
 for b in p["beams"]:
-    n += sum(2 if c.get("use") == "strength" else 1 for c in b.get("combinations", [])) + 3
+    n += sum(2 if c.get("use") == "strength" else 1 for c in b.get("combinations", [])) + 4
     n += sum(1 for e in ("start", "end") if "detail" in b.get("joints", {}).get(e, {}))
 print(n)
 PY
