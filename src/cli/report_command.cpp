@@ -1,5 +1,6 @@
 #include "report_command.hpp"
 
+#include <cctype>
 #include <cstdlib>
 #include <ctime>
 #include <fstream>
@@ -14,6 +15,10 @@
 #include "pinproof/core/output_file.hpp"
 #include "pinproof/model/project.hpp"
 #include "pinproof/io/project_input.hpp"
+#include "pinproof/batch/batch.hpp"
+#include "pinproof/io/detail_catalogue.hpp"
+#include "pinproof/io/schedule.hpp"
+#include "pinproof/batch/schedule_summary.hpp"
 
 namespace pinproof::cli {
 namespace {
@@ -36,11 +41,60 @@ std::string today_iso()
     return buf;
 }
 
+// A file named *.csv is a schedule; anything else a project file.
+bool is_schedule(const std::string& file)
+{
+    if (file.size() < 4) return false;
+    std::string ext = file.substr(file.size() - 4);
+    for (char& c : ext) c = static_cast<char>(std::tolower(static_cast<unsigned char>(c)));
+    return ext == ".csv";
+}
+
+// The schedule's summary page (schedule_summary.hpp); exit codes as `batch`.
+int schedule_report(const std::string& file, const std::string& out_path, std::ostream& out,
+                    const std::string& details_file)
+{
+    if (details_file.empty())
+        throw input_error("--details", "expected the detail catalogue the schedule's rows name (--details FILE), "
+                                       "found none");
+    output_set outputs;
+    outputs.add_input(file);
+    outputs.add_input(details_file);
+    if (out_path != "-") outputs.add("-o", out_path, "");
+    outputs.check();  // before any work
+
+    const detail_catalogue catalogue = load_detail_catalogue_file(details_file);
+    const schedule s = load_schedule_file(file);
+    const std::string bytes = read_input_file(file, "schedule");
+    const batch_result r = run_batch(s, catalogue);
+    schedule_summary_info info;
+    info.schedule_file = file == "-" ? "(standard input)" : file;
+    info.schedule_sha256 = input_hash(bytes);
+    info.catalogue_file = details_file == "-" ? "(standard input)" : details_file;
+    info.catalogue_title = catalogue.title;
+    info.date = today_iso();
+    info.version = PINPROOF_VERSION;
+    const std::string html = schedule_summary_html(r, info);
+    const int code = r.summary.refused > 0 ? 2 : r.summary.failed > 0 ? 1 : 0;
+    if (out_path == "-") {
+        out << html;
+        return code;
+    }
+    output_set final_outputs;
+    final_outputs.add_input(file);
+    final_outputs.add_input(details_file);
+    final_outputs.add("-o", out_path, html);
+    final_outputs.commit();
+    out << "Schedule summary written to " << out_path << ": " << batch_counts_text(r.summary) << ".\n";
+    return code;
+}
+
 }  // namespace
 
 int report_command(const std::string& file, const std::string& out_path, std::ostream& out, std::ostream& /*err*/,
                    const std::string& details_file)
 {
+    if (is_schedule(file)) return schedule_report(file, out_path, out, details_file);
     output_set outputs;
     outputs.add_input(file);
     outputs.add_input(details_file);

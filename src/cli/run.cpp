@@ -184,8 +184,11 @@ void command_line::define_check_and_detail(const char* details_help)
 
 void command_line::define_report(const char* details_help)
 {
-    report = app.add_subcommand("report", "Write the calculation report of a project file as one HTML file");
-    report->add_option("FILE", report_file, "Project file (format pinproof-project/1; '-' for standard input)")->required();
+    report = app.add_subcommand("report", "Write the calculation report of a project file, or the summary page of a "
+                                          "schedule, as one HTML file");
+    report->add_option("FILE", report_file, "Project file (format pinproof-project/1; '-' for standard input), or a "
+                                            "schedule named *.csv (with --details): its summary page")
+        ->required();
     report->add_option("-o,--output", report_out, "HTML file to write ('-' for stdout)")->required()->type_name("FILE");
     report->add_option("--details", report_details, details_help)->type_name("FILE");
 }

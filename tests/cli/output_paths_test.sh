@@ -319,5 +319,15 @@ else fail "two inputs named '-': exit $code, $(head -2 ../err)"; fi
 if [ "$code" -le 1 ] && head -1 ../sw.csv | grep -q 'kappa\|stiffness'; then pass "sweep - --csv -"
 else fail "sweep - --csv -: exit $code, $(head -c 80 ../sw.csv)"; fi
 
+# The schedule's summary page: report on a *.csv with its catalogue; exit codes as batch.
+fresh
+"$bin" report s.csv --details d.json -o ../summary.html >../out 2>../err; code=$?
+if [ "$code" = 1 ] && grep -q 'class="sortable"' ../summary.html && grep -q "Schedule summary written" ../out; then
+    pass "report s.csv --details d.json: the summary page, exit 1 (a beam does not hold)"
+else fail "report s.csv: exit $code, $(head -2 ../err)"; fi
+"$bin" report s.csv -o ../summary2.html >/dev/null 2>../err; code=$?
+if [ "$code" = 2 ] && grep -q -- "--details" ../err && [ ! -e ../summary2.html ]; then pass "report s.csv without --details refused"
+else fail "report s.csv without --details: exit $code"; fi
+
 if [ $failures -gt 0 ]; then echo "output paths: $failures failed"; exit 1; fi
 echo "output paths: all passed"

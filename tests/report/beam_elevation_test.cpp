@@ -52,7 +52,7 @@ std::vector<double> band_heights(const std::string& svg)
 
 }  // namespace
 
-TEST_CASE("beam_elevation: each end as its idealisation")
+TEST_CASE("beam_elevation - each end as its idealisation")
 {
     beam b = two_udls_and_a_point_load();
     // | joint range            | idealisation |
@@ -74,7 +74,7 @@ TEST_CASE("beam_elevation: each end as its idealisation")
     CHECK(beam_elevation_svg(b, unit_system::si).find("fixed (rigid joint)") != std::string::npos);
 }
 
-TEST_CASE("beam_elevation: loads to scale within their kind, with values and units")
+TEST_CASE("beam_elevation - loads to scale within their kind with values and units")
 {
     const std::string svg = beam_elevation_svg(two_udls_and_a_point_load(), unit_system::si);
     // Line loads 8.5 and 17 kN/m: the larger band is 34 px, the other half of it (to 0.1 px).
@@ -96,7 +96,7 @@ TEST_CASE("beam_elevation: loads to scale within their kind, with values and uni
     CHECK(lengths[1] == doctest::Approx(35.0).epsilon(0.01));
 }
 
-TEST_CASE("beam_elevation: dimensions in the project's units, user text escaped")
+TEST_CASE("beam_elevation - dimensions in the project's units and user text escaped")
 {
     const std::string si = beam_elevation_svg(two_udls_and_a_point_load(), unit_system::si);
     CHECK(si.find("L = 6.000 m") != std::string::npos);
