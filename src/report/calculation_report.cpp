@@ -450,7 +450,11 @@ void report_writer::derived_joints(const beam& b)
             o_ << "initial stiffness not derived (" << esc(d.basis) << " gives no component stiffness)";
         o_ << "; free rotation before the bolts bear " << u_.q(d.free_rotation, dims::angle)
            << "; rotation capacity not derived.</p>\n";
-        for (const auto& s : d.defaults) o_ << "<p class=\"note\">Assumed: " << esc(s) << "</p>\n";
+        if (!d.defaults.empty()) {
+            o_ << "<ul class=\"defaults note\">\n";
+            for (const auto& s : d.defaults) o_ << "<li>Assumed: " << esc(s) << "</li>\n";
+            o_ << "</ul>\n";
+        }
         for (const auto& s : d.limits_exceeded)
             o_ << "<p class=\"note\">Beyond the conventional configuration: " << esc(s) << "</p>\n";
     }
@@ -597,7 +601,7 @@ void report_writer::sweep_chart(const beam& b)
     sweep_settings settings;
     settings.combination = b.combinations.front().name;
     const sweep_result s = sweep_beam(p_, b, settings);
-    o_ << "<h3>Joint-stiffness sweep</h3>\n<p>Both joints together from a true pin to rigid, combination "
+    o_ << "<div class=\"keep\">\n<h3>Joint-stiffness sweep</h3>\n<p>Both joints together from a true pin to rigid, combination "
        << esc(settings.combination)
        << ": each result divided by its value with pins (end moments by their value with fixed ends) against "
           "&kappa; = S L / EI, with the code boundaries and the given stiffness range.</p>\n";
@@ -605,6 +609,7 @@ void report_writer::sweep_chart(const beam& b)
            "Stiffness sweep of beam " + b.id + ", combination " + settings.combination +
                ": EN 1993-1-8 boundaries 0.5 and " + format_number(en_rigid_limit(p_.frame), 2) +
                ", AISC 360 boundaries 2 and 20.");
+    o_ << "</div>\n";
 }
 
 // The beam lines: of the first strength combination (else the first) for a
@@ -691,10 +696,12 @@ void report_writer::beam_line_chart(const beam& b, const combination& c, beam_en
 
 void report_writer::gap_drawings(const beam& b, const beam_assessment& ba)
 {
+    bool any = false;
     for (beam_end e : {beam_end::start, beam_end::end}) {
         const auto svg = gap_detail_svg(b, e, ba, u_.system);
         if (!svg) continue;
-        o_ << "<h3>Gap detail, " << to_string(e) << " joint</h3>\n";
+        if (!any) o_ << "<h3>Gap details</h3>\n";
+        any = true;
         figure("gap-detail", *svg,
                "Elevation at the " + to_string(e) + " joint of beam " + b.id +
                    " at the worst-case gap, turned to the rotation demand (exaggerated as stated).");
@@ -718,7 +725,7 @@ void report_writer::checks(const beam_assessment& ba)
         }
         // Two rows per check, kept together on the page: status, id and
         // numbers, then the reason across the full width of the sheet.
-        o_ << "<tbody class=\"check\"><tr class=\"" << status_class(c.status) << "\"><td class=\"status "
+        o_ << "<tbody class=\"check " << status_class(c.status) << "\"><tr class=\"" << status_class(c.status) << "\"><td class=\"status "
            << status_class(c.status) << "\" rowspan=\"2\">" << status_label(c.status) << "</td><td class=\"check-id\">"
            << esc(c.id) << "</td><td class=\"value\">" << vl << "</td></tr>\n<tr><td class=\"reason\" colspan=\"2\">"
            << esc(c.message) << "</td></tr></tbody>\n";
@@ -750,6 +757,7 @@ void report_writer::beam_section(const beam_assessment& ba)
 {
     const beam& b = *ba.input;
     o_ << "<section class=\"beam\" id=\"beam-" << ++beams_ << "\">\n<h2>Beam " << esc(b.id) << "</h2>\n";
+    verdict(ba);  // first, as a checker reads it; the checks below give the reasons
     inputs(b);
     figure("elevation", beam_elevation_svg(b, p_.units),
            "Beam " + b.id + " as analysed: each end drawn as its idealisation (pin, roller, rotational spring with "
@@ -763,7 +771,6 @@ void report_writer::beam_section(const beam_assessment& ba)
     beam_lines(b);
     gap_drawings(b, ba);
     checks(ba);
-    verdict(ba);
     o_ << "</section>\n";
 }
 

@@ -86,12 +86,24 @@ std::string report_stylesheet()
           "p.inputs { font-size: 9pt; margin-bottom: 0.5mm; }\n"
           "ul.defaults { margin: 0 0 2mm 0; padding-left: 5mm; list-style: none; }\n"
           "@media print { body { padding: 0; } a { color: inherit; text-decoration: none; }\n"
+          // A calc sheet's type: 9 pt text, 8.5 pt tables, tight cells; the
+          // reasons of checks that pass or do not apply in 7.5 pt (a failure
+          // or a warning keeps 9 pt: it is what the checker reads first).
+          "  html { font-size: 9pt; }\n"
+          "  th, td { padding: 0.5mm 1.2mm; font-size: 8.5pt; }\n"
+          "  h2 { margin: 4mm 0 1.5mm 0; } h3 { margin: 3.5mm 0 1.5mm 0; } h4 { margin: 3mm 0 1mm 0; }\n"
+          "  table { margin: 1.5mm 0 2mm 0; }\n"
+          "  table.checks td { font-size: 8pt; }\n"
+          "  ul.defaults li { margin: 0.3mm 0; }\n"
+          "  table.checks tbody.pass td.reason, table.checks tbody.na td.reason { font-size: 7.5pt; color: #333; }\n"
           // On paper a chart needs less height than on a screen: the drawing
           // keeps its proportions inside the box (the viewBox scales it).
-          "  figure.chart svg { max-height: 66mm; }\n"
-          "  figure.chart[data-chart=sweep] svg { max-height: 95mm; }\n"
-          "  figure.chart[data-chart=gap-detail] svg { max-height: 115mm; }\n"
-          "  figcaption { font-size: 8pt; }\n}\n";
+          "  figure.chart svg { max-height: 60mm; }\n"
+          "  figure.chart[data-chart=sweep] svg { max-height: 85mm; }\n"
+          "  figure.chart[data-chart=gap-detail] svg { max-height: 100mm; }\n"
+          "  figcaption { font-size: 8pt; }\n"
+          // A heading, its text and its chart move to the next sheet together.
+          "  div.keep { break-inside: avoid; page-break-inside: avoid; }\n}\n";
 }
 
 }  // namespace pinproof
