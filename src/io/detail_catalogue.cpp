@@ -12,6 +12,7 @@
 #include "io/json_fields.hpp"
 #include "pinproof/core/input_file.hpp"
 #include "io/plausibility.hpp"
+#include "pinproof/io/joint_behaviour_input.hpp"
 #include "pinproof/io/stiffness_distribution_input.hpp"
 #include "pinproof/core/spelling.hpp"
 #include "pinproof/core/units.hpp"
@@ -76,11 +77,46 @@ bool not_above(const catalogue_stiffness& a, const catalogue_stiffness& b)
     return a.value <= b.value;
 }
 
+// An entry's moment-rotation law, checked here with its pointer in the
+// catalogue: its form (under EN 1993-1-8, which knows every law; a row under
+// AISC 360 reads it again in its own terms, schedule.cpp) and its fit with the
+// entry's resistance and, for absolute bounds, its stiffness. A multilinear
+// curve gives the stiffness itself, which a catalogue entry always states, so
+// it is not taken here.
+bool read_entry_behaviour(const json& b, const std::string& ptr, catalogue_detail& d, problem_list& problems)
+{
+    const std::size_t before = problems.size();
+    const std::string bp = child(ptr, "behaviour");
+    const auto law = read_joint_behaviour(b, bp, design_standard::en1993_1_8, problems);
+    if (!law) return false;
+    if (law->law == joint_law_kind::multilinear) {
+        problems.add(child(bp, "law"), "expected a law that starts from the entry's stiffness (linear, ec3-curve, "
+                                       "ec3-eta, power or richard-abbott), found \"multilinear\": a catalogue entry "
+                                       "states its stiffness, so give the curve in a project file's joint");
+        return false;
+    }
+    joint j;
+    j.moment_resistance = d.moment_resistance;
+    j.behaviour = law;
+    const bool absolute = d.stiffness_min.form == catalogue_stiffness::kind::absolute &&
+                          d.stiffness_max.form == catalogue_stiffness::kind::absolute;
+    // Bounds in EI/L meet the stiffness checks on each beam; here only the resistance.
+    j.range.min = absolute ? stiffness::spring(d.stiffness_min.value) : stiffness::spring(1.0);
+    j.range.max = absolute ? stiffness::spring(d.stiffness_max.value) : stiffness::spring(1.0);
+    if (!absolute && law->law == joint_law_kind::richard_abbott) j.behaviour->plastic_stiffness = 0.0;
+    if (d.stiffness_min.form == catalogue_stiffness::kind::rigid || d.stiffness_max.form == catalogue_stiffness::kind::rigid)
+        j.range.min = j.range.max = stiffness::rigid();
+    check_behaviour_fits(j, ptr, problems, unit_system::neutral);
+    if (problems.size() != before) return false;
+    d.behaviour = b;
+    return true;
+}
+
 std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr, problem_list& problems)
 {
     if (!expect_object(e, ptr, problems)) return std::nullopt;
     reject_unknown_keys(e, ptr, {"id", "type", "description", "stiffness", "stiffness_distribution",
-                                 "moment_resistance", "geometry", "notes"},
+                                 "moment_resistance", "behaviour", "geometry", "notes"},
                         problems);
     catalogue_detail d;
     d.pointer = ptr;
@@ -156,6 +192,7 @@ std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr
         }
         (std::string(key) == "geometry" ? d.geometry : d.stiffness_distribution) = *g;
     }
+    if (ok && e.contains("behaviour")) ok = read_entry_behaviour(e.at("behaviour"), ptr, d, problems);
     if (!ok) return std::nullopt;
     d.id = *id;
     d.type = *type;
@@ -301,6 +338,7 @@ std::size_t resolve_detail_references(json& doc, const detail_catalogue& catalog
                 inline_joint["detail"] = std::move(g);
             }
             if (!d->stiffness_distribution.is_null()) inline_joint["stiffness_distribution"] = d->stiffness_distribution;
+            if (!d->behaviour.is_null()) inline_joint["behaviour"] = d->behaviour;
             *j = std::move(inline_joint);
             ++rewritten;
         }

@@ -225,4 +225,36 @@ std::optional<steel_material> read_steel(const json& value, const std::string& p
     return s;
 }
 
+// The law and the rest of the joint must agree: a law that needs the
+// moment resistance has one, the stiffness range is finite and, where the
+// law needs it, above zero.
+void check_behaviour_fits(const joint& out, const std::string& ptr, problem_list& problems, unit_system system)
+{
+    const joint_behaviour& b = *out.behaviour;
+    const std::string bp = child(ptr, "behaviour");
+    if (b.law == joint_law_kind::ec3_curve && !out.moment_resistance && !out.moment_resistance_from_detail)
+        problems.add(child(bp, "law"), "expected a \"moment_resistance\" on the joint with the ec3-curve law (EN "
+                                       "1993-1-8 6.3.1(6) defines it up to M_j,Rd), found none");
+    // A derived stiffness is finite and above zero; the plastic stiffness is
+    // checked against it once derived (joints/joint_from_detail.hpp).
+    if (out.stiffness_from_detail) return;
+    if (out.range.min.is_rigid() || out.range.max.is_rigid()) {
+        problems.add(child(ptr, "stiffness"), "expected a finite stiffness with a behaviour (a law starts from "
+                                              "S_j,ini), found \"rigid\"");
+        return;
+    }
+    const bool needs_positive = b.law == joint_law_kind::ec3_curve || b.law == joint_law_kind::power ||
+                                b.law == joint_law_kind::richard_abbott;
+    if (needs_positive && !(out.range.min.value() > 0))
+        problems.add(child(ptr, "stiffness"), "expected an initial stiffness above zero for the " + to_string(b.law) +
+                                              " law, found a lower bound of zero (a pin)");
+    if (b.law == joint_law_kind::richard_abbott && !(b.plastic_stiffness < out.range.min.value()))
+        problems.add(child(bp, "plastic_stiffness"), "expected a plastic stiffness below the joint's lower-bound "
+                                                     "initial stiffness " +
+                                                         format_quantity(out.range.min.value(),
+                                                                         dims::rotational_stiffness, system) +
+                                                         ", found " + format_quantity(b.plastic_stiffness,
+                                                                                      dims::rotational_stiffness, system));
+}
+
 }  // namespace pinproof

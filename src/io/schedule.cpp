@@ -14,6 +14,7 @@
 #include <stdexcept>
 
 #include "pinproof/core/input_file.hpp"
+#include "pinproof/io/joint_behaviour_input.hpp"
 #include "io/input_text.hpp"
 #include "io/plausibility.hpp"
 #include "pinproof/core/printable_text.hpp"
@@ -716,6 +717,21 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
                     stiffness_ok = false;
                     break;
                 }
+    }
+    if (!stiffness_ok) return out;
+    // The entry's law, read under this row's standard (an EN law is refused
+    // under AISC 360) and fitted to the stiffness on this beam.
+    for (int i = 0; i < 2; ++i) {
+        if (details[i]->behaviour.is_null()) continue;
+        joint& j = i == 0 ? b.start : b.end;
+        problem_list found;
+        const std::string at = details[i]->pointer;
+        j.behaviour = read_joint_behaviour(details[i]->behaviour, at + "/behaviour", rules.standard, found);
+        if (j.behaviour) check_behaviour_fits(j, at, found, r.system);
+        for (const auto& p : found.problems())
+            r.add(*s.column(i == 0 ? "start" : "end"), "catalogue detail \"" + message_text(details[i]->id) + "\" at " +
+                                                             p.where + " on this beam: " + p.message);
+        if (!found.empty()) stiffness_ok = false;
     }
     if (!stiffness_ok) return out;
     if (!attach_detail_geometry(b, details, at_line, out)) return out;

@@ -332,3 +332,54 @@ TEST_CASE("batch: the shipped example schedule reads without refused rows [commo
     CHECK(r.summary.passed > 0);
     CHECK(r.summary.failed > 0);
 }
+
+// A catalogue entry with a moment-rotation law: the schedule row reads it
+// under the row's standard, and gives the checks of the same joint written
+// inline in a project file [PF]. The EN 1993-1-8 6.3.1(6) curve caps the joint
+// moment at M_j,Rd, so a joint that attracts 55 kN*m as a linear spring
+// (above its 38 kN*m) carries at most 38 kN*m with the curve: the joint-moment
+// check passes (EN 1993-1-8 6.3.1(6), 5.1.2(3); pack section 2).
+TEST_CASE("batch: a catalogue entry's law is applied to the row as in a project file [PF] [EN 1993-1-8 6.3.1(6)]")
+{
+    const detail_catalogue cat = parse_detail_catalogue(R"({"format": "pinproof-details/1", "details": [
+      {"id": "EP", "type": "end-plate", "stiffness": {"min": "700 kN*m/rad", "max": "3000 kN*m/rad"},
+       "moment_resistance": "38 kN*m"},
+      {"id": "EP-EC3", "type": "end-plate", "stiffness": {"min": "700 kN*m/rad", "max": "3000 kN*m/rad"},
+       "moment_resistance": "38 kN*m", "behaviour": {"law": "ec3-curve", "joint_type": "bolted-end-plate"}}]})");
+    const schedule s = parse_schedule("id,span,section,g,q,start,end,combinations\n"
+                                      "LIN,8 m,IPE 400,20 kN/m,15 kN/m,EP,EP,EN1990\n"
+                                      "EC3,8 m,IPE 400,20 kN/m,15 kN/m,EP-EC3,EP-EC3,EN1990\n"
+                                      "US,8 m,IPE 400,20 kN/m,15 kN/m,EP-EC3,EP,ASCE7\n");
+    const batch_result r = run_batch(s, cat, {});
+    REQUIRE(r.rows.size() == 3);
+    // | row | joint             | expected                                        |
+    // | LIN | linear spring     | joint-moment-start fails (55 kN*m > 38 kN*m)    |
+    // | EC3 | ec3-curve         | |M| <= M_j,Rd = 38 kN*m; joint-moment passes    |
+    // | US  | ec3-curve, AISC   | refused: an EN rule under AISC 360              |
+    CHECK(std::find(r.rows[0].failed_checks.begin(), r.rows[0].failed_checks.end(), "joint-moment-start") !=
+          r.rows[0].failed_checks.end());
+    CHECK(*r.rows[0].moment_start > 38e3);
+    REQUIRE(r.rows[1].moment_start.has_value());
+    CHECK(*r.rows[1].moment_start <= 38e3 * (1 + 1e-12));
+    CHECK(*r.rows[1].moment_start > 2.0 / 3.0 * 38e3);  // beyond the elastic part of the curve
+    CHECK(std::find(r.rows[1].failed_checks.begin(), r.rows[1].failed_checks.end(), "joint-moment-start") ==
+          r.rows[1].failed_checks.end());
+    CHECK(r.rows[2].verdict == batch_verdict::refused);
+    REQUIRE(!r.rows[2].problems.empty());
+    CHECK(r.rows[2].problems[0].message.find("a rule of EN 1993-1-8") != std::string::npos);
+
+    // The project route: the same beam with the law written inline.
+    json doc = json::parse(R"({"format": "pinproof-project/1", "title": "t", "standard": "EN1993-1-8", "frame": "braced",
+      "beams": [{"id": "EC3", "span": "8 m", "section": "IPE 400",
+        "loads": [{"case": "G", "kind": "udl", "w": "20 kN/m"}, {"case": "Q", "kind": "udl", "w": "15 kN/m"}],
+        "combinations": [{"name": "EN1990 6.10: 1.35G+1.5Q", "use": "strength", "factors": {"G": 1.35, "Q": 1.5}},
+                         {"name": "EN1990 6.14b: G+Q", "use": "service", "factors": {"G": 1.0, "Q": 1.0}}],
+        "joints": {"start": "EP-EC3", "end": "EP-EC3"}}]})");
+    problem_list problems;
+    resolve_detail_references(doc, cat, problems);
+    REQUIRE(problems.empty());
+    const project p = read_project(doc);
+    REQUIRE(p.beams.at(0).start.behaviour.has_value());
+    const beam_assessment from_project = assess_beam(p, p.beams.at(0));
+    CHECK(r.rows[1].moment_start == find_check(from_project, "joint-moment-start")->value);
+}

@@ -43,6 +43,9 @@ struct catalogue_detail {
     // reads `geometry` as a joint's `detail`): null when absent.
     nlohmann::json geometry;
     nlohmann::json stiffness_distribution;
+    // The moment-rotation law (docs/method/joint-laws.md) as written, checked
+    // when the catalogue is read; each beam reads it under its own standard.
+    nlohmann::json behaviour;
     std::string notes;
     // The entry's "stiffness" and "moment_resistance" values as written, so that
     // a project file joint can be rewritten with the units it was given in.
