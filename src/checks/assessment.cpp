@@ -730,7 +730,7 @@ void assess_details(const project& p, const beam& b, beam_assessment& a, bool fi
         d.strength_combination =
             strength.sagging >= strength.hogging ? strength.sagging_combination : strength.hogging_combination;
         d.gap = check_gap(*j.detail, b.sec, rotation_demand{d.demand_sagging, d.demand_hogging}, find_min_gap);
-        d.findings = check_detailing_rules(*j.detail, b.sec, p.units);
+        d.findings = check_detailing_rules(*j.detail, b.sec, p.units, p.standard);
         const auto closes = [](const sense_check& sc, double demand) {
             return sc.closing.rotation && demand > *sc.closing.rotation;
         };

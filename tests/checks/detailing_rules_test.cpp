@@ -11,6 +11,13 @@
 //   [P358]      SCI P358: end plate 10 mm with M20, 12 mm with M24 (from memory).
 //   [AISC]      fallback rotation 0.03 rad: AISC 360 Commentary and Manual
 //               Part 10 (from memory).
+//   [M10]       AISC Steel Construction Manual, Part 10 (reference pack 10.3 and
+//               7, from memory): conventional single plate, plate or web
+//               t <= d_b/2 + 1/16 in, bolt line at most 3 1/2 in from the weld
+//               line; double angles at most 5/8 in thick; setback 1/2 in;
+//               connection length at least half the clear web depth.
+//   [J3.4]      AISC 360-16 Table J3.4 minimum edge distances (from memory):
+//               1 in for a 3/4 in bolt, 1 1/4 in for a 1 in bolt.
 #include <doctest/doctest.h>
 
 #include <string>
@@ -256,4 +263,119 @@ TEST_CASE("fallback rotation demand [AISC - from memory]")
     CHECK(fallback_rotation_demand.label.find("fallback") != std::string_view::npos);
     CHECK(fallback_rotation_demand.source.find("from memory") != std::string_view::npos);
     CHECK(to_string(finding_status::not_applicable) == "not-applicable");
+}
+
+namespace {
+
+constexpr double inch = 0.0254;
+
+// A W18x35 as the US rules see it (AISC Manual Table 1-1, from memory): d 17.7 in,
+// t_w 0.300 in, t_f 0.425 in, fillet taken as 0.40 in.
+section w18x35()
+{
+    section s;
+    s.name = "W18x35";
+    s.depth = 17.7 * inch;
+    s.web_thickness = 0.300 * inch;
+    s.flange_thickness = 0.425 * inch;
+    s.root_radius = 0.40 * inch;
+    return s;
+}
+
+// A conventional single plate: 3/8 in A36, three 3/4 in bolts at 3 in, 1 1/2 in
+// edge distances, 9 in long, bolt line 3 in from the weld line with a 1/2 in setback.
+connection_detail single_plate()
+{
+    connection_detail d;
+    d.type = detail_type::fin_plate;
+    d.grade = plate_grade::a36;
+    d.gap = 0.5 * inch;
+    d.plate_top = 3 * inch;
+    d.plate_depth = 9 * inch;
+    d.plate_thickness = 0.375 * inch;
+    d.bolts.diameter = 0.75 * inch;
+    d.bolts.hole_diameter = 13.0 / 16 * inch;
+    d.bolts.rows = 3;
+    d.bolts.pitch = 3 * inch;
+    d.bolts.first_bolt = 1.5 * inch;
+    d.bolts.bolt_line = 2.5 * inch;
+    return d;
+}
+
+detailing_finding us_rule(const connection_detail& d, const std::string& id, const section& s = w18x35())
+{
+    return find(check_detailing_rules(d, s, unit_system::us_customary, design_standard::aisc360), id);
+}
+
+}  // namespace
+
+TEST_CASE("AISC 360 project: the US rules under the same ids - never the European guides' [M10] [J3.4]")
+{
+    auto d = single_plate();
+    // | rule               | value                        | limit                         | status |
+    // | plate-ductility    | web 0.300 in (thinner)       | 3/8 + 1/16 = 0.4375 in        | pass   |
+    // | long-fin-plate     | 0.5 + 2.5 = 3.0 in           | 3.5 in                        | pass   |
+    // | bolt-edge-distance | 1.5 in                       | 1 in (3/4 in bolt)            | pass   |
+    // | min-gap            | 0.5 in                       | 0.5 in                        | pass   |
+    // | plate-depth        | 9 in                         | (17.7 - 2(0.425 + 0.40))/2 = 8.025 in | pass |
+    const auto all = check_detailing_rules(d, w18x35(), unit_system::us_customary, design_standard::aisc360);
+    CHECK(all.size() == 8);
+    for (const auto& f : all) {
+        CAPTURE(f.id);
+        CHECK(f.source.find("Steel Buildings in Europe") == std::string::npos);
+        CHECK(f.source.find("SCI P") == std::string::npos);
+    }
+    auto f = us_rule(d, "plate-ductility");
+    CHECK(f.status == finding_status::pass);
+    CHECK(*f.value == doctest::Approx(0.300 * inch).epsilon(1e-12));
+    CHECK(*f.limit == doctest::Approx(0.4375 * inch).epsilon(1e-12));
+    f = us_rule(d, "long-fin-plate");
+    CHECK(f.status == finding_status::pass);
+    CHECK(*f.value == doctest::Approx(3.0 * inch).epsilon(1e-12));
+    CHECK(*f.limit == doctest::Approx(3.5 * inch).epsilon(1e-12));
+    f = us_rule(d, "bolt-edge-distance");
+    CHECK(f.status == finding_status::pass);
+    CHECK(*f.limit == doctest::Approx(1.0 * inch).epsilon(1e-12));
+    f = us_rule(d, "min-gap");
+    CHECK(f.status == finding_status::pass);
+    CHECK(*f.limit == doctest::Approx(0.5 * inch).epsilon(1e-12));
+    f = us_rule(d, "plate-depth");
+    CHECK(f.status == finding_status::pass);
+    CHECK(*f.limit == doctest::Approx(8.025 * inch).epsilon(1e-12));
+    CHECK(us_rule(d, "end-plate-thickness").status == finding_status::not_applicable);
+
+    // Beyond each limit: a 1/2 in plate on a 1/2 in web, the bolt line 4 in out,
+    // a 7/8 in edge distance, a 3/8 in setback, a 6 in plate.
+    section thick = w18x35();
+    thick.web_thickness = 0.5 * inch;
+    d.plate_thickness = 0.5 * inch;
+    CHECK(us_rule(d, "plate-ductility", thick).status == finding_status::warn);
+    d.bolts.bolt_line = 3.5 * inch;
+    CHECK(us_rule(d, "long-fin-plate").status == finding_status::warn);
+    d.bolts.first_bolt = 0.875 * inch;
+    CHECK(us_rule(d, "bolt-edge-distance").status == finding_status::warn);
+    d.gap = 0.375 * inch;
+    CHECK(us_rule(d, "min-gap").status == finding_status::warn);
+    d.plate_depth = 6 * inch;
+    CHECK(us_rule(d, "plate-depth").status == finding_status::warn);
+}
+
+TEST_CASE("AISC 360 project: double angles at most 5/8 in thick [M10] - a 1 in bolt needs 1 1/4 in of edge [J3.4]")
+{
+    auto d = single_plate();
+    d.type = detail_type::web_cleats;
+    d.plate_thickness = 0.625 * inch;
+    auto f = us_rule(d, "plate-ductility");
+    CHECK(f.status == finding_status::pass);
+    d.plate_thickness = 0.75 * inch;
+    CHECK(us_rule(d, "plate-ductility").status == finding_status::warn);
+    // The same angles in an EN project: no thickness rule (thin cleats give flexibility).
+    CHECK(rule(d, "plate-ductility").status == finding_status::not_applicable);
+    auto p = single_plate();
+    p.bolts.diameter = 1.0 * inch;
+    p.bolts.hole_diameter = 1.125 * inch;
+    p.bolts.first_bolt = 1.25 * inch;
+    f = us_rule(p, "bolt-edge-distance");
+    CHECK(f.status == finding_status::pass);
+    CHECK(*f.limit == doctest::Approx(1.25 * inch).epsilon(1e-12));
 }

@@ -15,6 +15,7 @@
 #include <vector>
 
 #include "pinproof/model/connection_detail.hpp"
+#include "pinproof/model/design_standard.hpp"
 #include "pinproof/model/section.hpp"
 #include "pinproof/core/units.hpp"
 
@@ -38,9 +39,13 @@ struct detailing_finding {
 };
 
 // Every rule, in a fixed order, for one beam end; the lengths in the messages
-// are shown in `units`.
+// are shown in `units`. Each standard in its own terms: an EN 1993-1-8 project
+// gets the rules of the European simple-joint guides, an AISC 360 project
+// those of US practice (AISC 360 and the steel manual's Part 10), under the
+// same rule ids.
 std::vector<detailing_finding> check_detailing_rules(const connection_detail& detail, const section& beam,
-                                                     unit_system units = unit_system::si);
+                                                     unit_system units = unit_system::si,
+                                                     design_standard standard = design_standard::en1993_1_8);
 
 // The rotation a simple connection is commonly required to accommodate when no
 // analysis gives the end rotation. Used only as a fallback demand.
