@@ -159,13 +159,16 @@ detailing_finding gap_tolerance(const text& t, const connection_detail& d)
 // the beam end.
 detailing_finding plate_depth_us(const text& t, const connection_detail& d, const section& beam)
 {
-    const std::string rule = "the " + fitting_name(d.type) +
+    const std::string name = d.type == detail_type::fin_plate ? "single plate" : d.type == detail_type::web_cleats
+                                                                                      ? "angle"
+                                                                                      : fitting_name(d.type);
+    const std::string rule = "the " + name +
                              " length should be at least half the beam's T dimension (the clear web depth between "
                              "the fillets), for the stability of the beam end";
     const std::string source = std::string(manual_part10) + "; from memory";
     if (d.type == detail_type::custom) return not_applicable("plate-depth", rule, source, "a custom detail gives no fitting");
     const double T = beam.depth - 2 * (beam.flange_thickness.value_or(0.0) + beam.root_radius.value_or(0.0));
-    auto f = at_least(t, "plate-depth", d.plate_depth, 0.5 * T, dims::length, rule, source, fitting_name(d.type) + " length");
+    auto f = at_least(t, "plate-depth", d.plate_depth, 0.5 * T, dims::length, rule, source, name + " length");
     if (!beam.flange_thickness || !beam.root_radius)
         f.message += " (the section gives no flange thickness or fillet: T taken as the overall depth less what is given)";
     return f;

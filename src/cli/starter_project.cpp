@@ -104,10 +104,10 @@ const char* starter_project(bool us_customary)
       ],
       "joints": {
         "start": {
-          "notes": "A single-plate (fin plate) connection given inline: a stiffness range (the designer's estimate, here as multiples of EI/L) and the connection as detailed, for the end-gap check and the detailing rules. A joint may also be the id of an entry of a detail catalogue.",
+          "notes": "A single-plate (fin plate) connection given inline: a stiffness range (the designer's estimate, here as multiples of EI/L) and the connection as detailed, for the end-gap check and the detailing rules. Its moment resistance is worked out from the detail ('from-detail': the bolt group under AISC 360-16 J3.6 and J3.10); a value such as '12 kip*ft' may be given instead, and is then compared with the derived one. A joint may also be the id of an entry of a detail catalogue.",
           "description": "single plate 3/8 in, 3 bolts 3/4 in",
-          "stiffness": { "min": "0.05 EI/L", "max": "0.25 EI/L" },
-          "moment_resistance": "12 kip*ft",
+          "stiffness": { "min": "0.05 EI/L", "max": "0.15 EI/L" },
+          "moment_resistance": "from-detail",
           "detail": {
             "type": "fin-plate",
             "support": "column-flange",
