@@ -928,6 +928,7 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(rotation_demand_check(p, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(joint_shear_check(p, b, a.combinations, e));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(declared_resistance_check(p, b, e));
+    for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(ductile_hierarchy_check(p, b, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));
     a.checks.push_back(frequency_check(p, b, a.combinations));
     assess_details(p, b, a, options.find_min_gap);

@@ -128,4 +128,121 @@ check declared_resistance_check(const project& p, const beam& b, beam_end e)
     return c;
 }
 
+namespace {
+
+const joint_component* component(const derived_joint& d, const std::string& id)
+{
+    for (const auto& c : d.components)
+        if (c.id == id) return &c;
+    return nullptr;
+}
+
+// The least throat of the two fillet welds of a plate of thickness t that
+// makes them as strong as the plate in tension across them (full strength),
+// EN 1993-1-8 4.5.3.2, the directional method for a weld loaded
+// perpendicular to its axis: sigma_perp = tau_perp = F / (a sqrt 2), so
+// 2 a f_u / (sqrt 2 beta_w gamma_M2) >= t f_y / gamma_M0, that is
+// a >= t f_y sqrt 2 beta_w gamma_M2 / (2 f_u), with beta_w 0.85 for S275 and
+// 0.9 for S355 (Table 4.1), gamma_M2 1.25, gamma_M0 1.0, and f_y, f_u of the
+// plate by EN 10025-2 as everywhere in the derivation (steel_grade.hpp). With
+// the f_u = 430 MPa of EN 1993-1-1 Table 3.1 the ratio for S275 is the 0.48 of
+// the simple-joint guides (reference pack 10.2); EN 10025-2's 410 MPa gives 0.50.
+double full_strength_throat_ratio(plate_grade g, double t)
+{
+    steel_material m;
+    m.grade = g == plate_grade::s355 ? steel_grade::s355 : steel_grade::s275;
+    const double beta_w = g == plate_grade::s355 ? 0.9 : 0.85;
+    return m.fy(t) * std::sqrt(2.0) * beta_w * 1.25 / (2 * *m.fu(t) * 1.0);
+}
+
+}  // namespace
+
+check ductile_hierarchy_check(const project& p, const beam& b, beam_end e)
+{
+    const joint& j = b.at(e);
+    check c;
+    c.id = "ductile-hierarchy-" + to_string(e);
+    c.dim = dims::length;
+    c.varies_with_stiffness = false;  // the detail alone decides it
+    if (!j.derived || !j.detail) {
+        c.message = not_derived(j) + ", so the order in which its parts yield is not checked.";
+        return c;
+    }
+    const derived_joint& d = *j.derived;
+    const connection_detail& det = *j.detail;
+    const bool us = p.standard == design_standard::aisc360;
+    std::vector<std::string> found, fine;
+    bool compared = false;
+    // The bolts must not be the first to go: bearing in the plate or the web
+    // (which deforms and lets the joint turn) before bolt shear (which is
+    // sudden). EN 1993-1-8 6.4.2(3): a joint governed by bolt shear is not
+    // given rotation capacity (reference pack 10.5, from memory); the
+    // simple-joint guides require the same of fin plates. In an AISC 360
+    // project the conventional configuration's thickness limit serves this
+    // end (detailing-plate-ductility), so only the weld is checked here.
+    if (!us) {
+        const auto* shear = component(d, "bolt-shear");
+        const auto* plate = component(d, "bolt-bearing-plate");
+        const auto* web = component(d, "bolt-bearing-web");
+        if (shear && shear->resistance && plate && plate->resistance && web && web->resistance) {
+            compared = true;
+            const double bearing = std::min(*plate->resistance, *web->resistance);
+            const std::string which = *plate->resistance <= *web->resistance ? "bearing on the plate" : "bearing on the web";
+            const std::string text = which + " (" + fmt(p, bearing, dims::force) + ") against bolt shear (" +
+                                     fmt(p, *shear->resistance, dims::force) + ")";
+            if (bearing <= *shear->resistance) fine.push_back(text + ": bearing governs, the bolts do not shear first");
+            else
+                found.push_back(text + ": bolt shear governs, so the bolts may shear before the holes deform and "
+                                       "the joint may not turn as a pin needs (EN 1993-1-8 6.4.2(3))");
+        }
+    }
+    // The welds must be stronger than the plate, so that the plate yields
+    // and the welds never tear.
+    if (det.derivation.weld) {
+        const fillet_weld& w = *det.derivation.weld;
+        const double tp = det.plate_thickness;
+        double have = 0, need = 0;
+        std::string rule;
+        if (us) {
+            // AISC: fillets on both sides of 5/8 of the plate thickness develop
+            // the plate (reference pack 10.3: AISC Engineering FAQ 5.2.1).
+            have = w.leg_length();
+            need = 0.625 * tp;
+            rule = "fillet legs of at least 5/8 of the plate thickness (AISC Engineering FAQ 5.2.1)";
+        } else {
+            have = w.throat();
+            need = full_strength_throat_ratio(det.grade, tp) * tp;
+            rule = "a full-strength throat of at least " + format_number(full_strength_throat_ratio(det.grade, tp), 3) +
+                   " t_p (EN 1993-1-8 4.5.3.2, " + to_string(det.grade) + ")";
+        }
+        compared = true;
+        c.value = have;
+        c.limit = need;
+        c.limit_is_minimum = true;
+        const std::string text = std::string("the weld ") + (us ? "leg " : "throat ") + fmt(p, have, dims::length) +
+                                 " against " + rule + ", " + fmt(p, need, dims::length);
+        if (have >= need * (1 - 1e-9)) fine.push_back(text + ": the plate yields before the weld");
+        else found.push_back(text + ": the weld may tear before the plate yields");
+    } else {
+        fine.push_back("the weld is not checked (no weld size given)");
+    }
+    if (!found.empty()) c.status = check_status::warn;
+    else if (compared) c.status = check_status::pass;
+    const auto join = [](const std::vector<std::string>& v) {
+        std::string out;
+        for (std::size_t i = 0; i < v.size(); ++i) out += (i ? "; " : "") + v[i];
+        return out;
+    };
+    const std::string head = "The order in which the parts of " + basis_of(d) + " yield: ";
+    if (c.status == check_status::warn)
+        c.message = head + join(found) + (fine.empty() ? "" : "; " + join(fine)) +
+                    ". A simple joint must deform before it breaks: change the detail so that the plate or web "
+                    "yields first.";
+    else if (c.status == check_status::pass)
+        c.message = head + join(fine) + ".";
+    else
+        c.message = head + join(fine) + "; nothing else of the hierarchy applies in an " + d.basis + " project.";
+    return c;
+}
+
 }  // namespace pinproof

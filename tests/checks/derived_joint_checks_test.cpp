@@ -9,6 +9,7 @@
 //   [RULE]   the 10 % margin on a declared moment resistance (common practice, no source).
 #include <doctest/doctest.h>
 
+#include <cmath>
 #include <string>
 
 #include "pinproof/checks/assessment.hpp"
@@ -111,4 +112,74 @@ TEST_CASE("joint-shear [beam]: 1.35 x 100 kN/m gives at least 405 kN - above the
     CHECK(*c.value >= 405 * kN * (1 - 1e-9));
     CHECK(c.status == check_status::fail);
     CHECK(c.message.find("exceeds") != std::string::npos);
+}
+
+// ductile-hierarchy [W]: EN 1993-1-8 4.5.3.2, the directional method for a double fillet loaded
+// across its axis: a >= t f_y sqrt(2) beta_w gamma_M2 / (2 f_u). With the f_u = 430 MPa of EN
+// 1993-1-1 Table 3.1 this is the 0.48 t_p of the simple-joint guides (reference pack 10.2, [C]);
+// the derivation takes f_u = 410 MPa (EN 10025-2), so 0.504 t_p. [6.4.2] EN 1993-1-8 6.4.2(3):
+// bolt shear governing gives no rotation capacity (reference pack 10.5, from memory).
+TEST_CASE("ductile-hierarchy [W] [6.4.2]: bearing before bolt shear and a full-strength weld - tol 1e-9")
+{
+    const double pack_ratio = 275 * std::sqrt(2.0) * 0.85 * 1.25 / (2 * 430);
+    CHECK(pack_ratio == doctest::Approx(0.48).epsilon(0.002));  // the guides' 0.48 t_p
+    const double ratio = 275 * std::sqrt(2.0) * 0.85 * 1.25 / (2 * 410);
+
+    // | case                              | expected                                   |
+    // | 8.8 bolts, 8 mm legs (5.66 throat) | pass: web bearing < bolt shear; 5.66 >= 5.04 mm |
+    // | 4.6 bolts, 4 mm legs (2.83 throat) | warn: bolt shear governs; 2.83 < 5.04 mm   |
+    // | no weld given                      | pass on the bolts; the weld not checked    |
+    std::string good = mezzanine_detail;
+    good.insert(good.size() - 1, R"(, "weld": {"leg": "8 mm"})");
+    const auto g = assess(R"({"stiffness": {"min": "300 kN*m/rad", "max": "1400 kN*m/rad"}, "detail": )" + good + "}");
+    const check& cg = find(g.a, "ductile-hierarchy-start");
+    CHECK(cg.status == check_status::pass);
+    CHECK(*cg.value == doctest::Approx(0.008 / std::sqrt(2.0)).epsilon(1e-9));
+    CHECK(*cg.limit == doctest::Approx(ratio * 0.010).epsilon(1e-9));
+    CHECK(cg.limit_is_minimum);
+
+    std::string bad = mezzanine_detail;
+    bad.insert(bad.size() - 1, R"(, "bolt_grade": "4.6", "weld": {"leg": "4 mm"})");
+    const auto b = assess(R"({"stiffness": {"min": "300 kN*m/rad", "max": "1400 kN*m/rad"}, "detail": )" + bad + "}");
+    const check& cb = find(b.a, "ductile-hierarchy-start");
+    CHECK(cb.status == check_status::warn);
+    CHECK(cb.message.find("bolt shear governs") != std::string::npos);
+    CHECK(cb.message.find("the weld may tear before the plate yields") != std::string::npos);
+
+    const auto n = assess(R"({"stiffness": {"min": "300 kN*m/rad", "max": "1400 kN*m/rad"}, "detail": )" +
+                          mezzanine_detail + "}");
+    const check& cn = find(n.a, "ductile-hierarchy-start");
+    CHECK(cn.status == check_status::pass);
+    CHECK(cn.message.find("the weld is not checked") != std::string::npos);
+    // A joint without a detail: not applicable.
+    CHECK(find(n.a, "ductile-hierarchy-end").status == check_status::not_applicable);
+}
+
+// [FAQ] AISC Engineering FAQ 5.2.1 (reference pack 10.3, [C]): fillets on both sides of 5/8 t_p
+// develop a single plate. An AISC 360 project gets that rule and no European one.
+TEST_CASE("ductile-hierarchy [FAQ]: a US single plate's fillets at least 5/8 t_p - exact")
+{
+    const auto us = [](const std::string& leg) {
+        project p = parse_project(R"({"format": "pinproof-project/1", "title": "t", "standard": "AISC360",
+          "frame": "braced", "beams": [{"id": "B1", "span": "20 ft", "section": "W18x35",
+          "loads": [{"case": "D", "kind": "udl", "w": "1 kip/ft"}],
+          "combinations": [{"name": "U", "use": "strength", "factors": {"D": 1.4}}],
+          "joints": {"start": {"stiffness": {"min": "0.05 EI/L", "max": "0.15 EI/L"},
+            "detail": {"type": "fin-plate", "gap": "0.5 in", "plate_top": "2 in", "plate_depth": "10 in",
+              "plate_thickness": "0.375 in", "bolt_diameter": "0.75 in", "hole_diameter": "0.8125 in",
+              "bolt_rows": 3, "bolt_pitch": "3 in", "first_bolt": "1.5 in", "bolt_line": "2 in",
+              "weld": {"leg": ")" + leg + R"("}}},
+            "end": {"stiffness": "0 kip*in/rad"}}}]})");
+        derive_joints(p);
+        const beam_assessment a = assess_beam(p, p.beams[0]);
+        return find(a, "ductile-hierarchy-start");
+    };
+    // | leg      | 5/8 x 3/8 in = 0.234375 in | status |
+    // | 1/4 in   | 0.25 >= 0.234              | pass   |
+    // | 3/16 in  | 0.1875 < 0.234             | warn   |
+    const check pass = us("0.25 in");
+    CHECK(pass.status == check_status::pass);
+    CHECK(*pass.limit == doctest::Approx(0.234375 * 0.0254).epsilon(1e-12));
+    CHECK(pass.message.find("bolt shear") == std::string::npos);  // no EN 6.4.2 rule in a US project
+    CHECK(us("0.1875 in").status == check_status::warn);
 }

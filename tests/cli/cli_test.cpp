@@ -233,7 +233,8 @@ TEST_CASE("cli check --json - writes the result JSON on stdout with the required
                                            "strength-class-start",  "strength-class-end",
                                            "joint-ductility-start", "joint-ductility-end",
                                            "joint-shear-start",     "joint-shear-end",
-                                           "declared-resistance-start", "declared-resistance-end"};
+                                           "declared-resistance-start", "declared-resistance-end",
+                                           "ductile-hierarchy-start", "ductile-hierarchy-end"};
     for (const auto& b : j["beams"]) {
         CAPTURE(b.value("id", std::string("?")));
         REQUIRE(has_keys(b, {"id", "verdict", "checks", "joints", "combinations"}));
