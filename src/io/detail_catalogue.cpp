@@ -98,8 +98,9 @@ bool read_entry_behaviour(const json& b, const std::string& ptr, catalogue_detai
     joint j;
     j.moment_resistance = d.moment_resistance;
     j.behaviour = law;
-    const bool absolute = d.stiffness_min.form == catalogue_stiffness::kind::absolute &&
+    const bool absolute = !d.stiffness_from_detail && d.stiffness_min.form == catalogue_stiffness::kind::absolute &&
                           d.stiffness_max.form == catalogue_stiffness::kind::absolute;
+    j.moment_resistance_from_detail = d.moment_resistance_from_detail;
     // Bounds in EI/L meet the stiffness checks on each beam; here only the resistance.
     j.range.min = absolute ? stiffness::spring(d.stiffness_min.value) : stiffness::spring(1.0);
     j.range.max = absolute ? stiffness::spring(d.stiffness_max.value) : stiffness::spring(1.0);
@@ -152,6 +153,9 @@ std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr
             d.stiffness_min = *lo;
             d.stiffness_max = *hi;
         }
+    } else if (it->is_string() && trimmed(it->get<std::string>()) == "from-detail") {
+        // Worked out for each beam from the entry's geometry (joints/joint_from_detail.hpp).
+        d.stiffness_from_detail = true;
     } else {
         auto s = read_bound(*it, sp, problems);
         ok = ok && s.has_value();
@@ -159,8 +163,13 @@ std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr
     }
     if (it != e.end()) d.stiffness_text = *it;
 
-    auto mr = quantity_field(e, ptr, "moment_resistance", dims::moment, false, problems);
-    if (mr && *mr < 0) {
+    const bool mr_from_detail = e.contains("moment_resistance") && e.at("moment_resistance").is_string() &&
+                                trimmed(e.at("moment_resistance").get<std::string>()) == "from-detail";
+    auto mr = mr_from_detail ? std::nullopt : quantity_field(e, ptr, "moment_resistance", dims::moment, false, problems);
+    if (mr_from_detail) {
+        d.moment_resistance_from_detail = true;
+        d.moment_resistance_text = e.at("moment_resistance");
+    } else if (mr && *mr < 0) {
         problems.add(child(ptr, "moment_resistance"),
                      "expected a moment resistance of zero or more, found " + shown(e.at("moment_resistance")));
         ok = false;
@@ -191,6 +200,19 @@ std::optional<catalogue_detail> read_entry(const json& e, const std::string& ptr
             }
         }
         (std::string(key) == "geometry" ? d.geometry : d.stiffness_distribution) = *g;
+    }
+    // "from-detail" needs a detail the library derives: a fin plate with its geometry.
+    if ((d.stiffness_from_detail || d.moment_resistance_from_detail) && ok) {
+        const std::string field = d.stiffness_from_detail ? "stiffness" : "moment_resistance";
+        if (type && *type != "fin-plate") {
+            problems.add(child(ptr, field), "expected a stiffness and a moment resistance for a " + *type +
+                                                " entry (\"from-detail\" derives fin plates only), found \"from-detail\"");
+            ok = false;
+        } else if (d.geometry.is_null()) {
+            problems.add(child(ptr, field), "expected a \"geometry\" to derive the joint from, found \"from-detail\" "
+                                            "without one");
+            ok = false;
+        }
     }
     if (ok && e.contains("behaviour")) ok = read_entry_behaviour(e.at("behaviour"), ptr, d, problems);
     if (!ok) return std::nullopt;
@@ -296,8 +318,14 @@ detail_catalogue load_detail_catalogue_file(const std::string& path)
 joint joint_for_beam(const catalogue_detail& d, double EI, double span)
 {
     joint j;
-    j.range.min = d.stiffness_min.for_beam(EI, span);
-    j.range.max = d.stiffness_max.for_beam(EI, span);
+    // A derived stiffness or resistance is set when the joint is derived
+    // (joints/joint_from_detail.hpp), before any analysis.
+    j.stiffness_from_detail = d.stiffness_from_detail;
+    j.moment_resistance_from_detail = d.moment_resistance_from_detail;
+    if (!d.stiffness_from_detail) {
+        j.range.min = d.stiffness_min.for_beam(EI, span);
+        j.range.max = d.stiffness_max.for_beam(EI, span);
+    }
     j.moment_resistance = d.moment_resistance;
     return j;
 }

@@ -719,6 +719,18 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
                 }
     }
     if (!stiffness_ok) return out;
+    // A stiffness "from-detail" comes from the EN 1993-1-8 components; AISC 360
+    // gives none, so a row under it needs the entry's stated range.
+    for (int i = 0; i < 2; ++i)
+        if (details[i]->stiffness_from_detail && rules.standard == design_standard::aisc360) {
+            r.add(*s.column(i == 0 ? "start" : "end"),
+                  "catalogue detail \"" + message_text(details[i]->id) + "\" at " + details[i]->pointer +
+                      "/stiffness: expected a stiffness range for a row under AISC 360 (AISC 360-16 gives no "
+                      "component stiffness, so \"from-detail\" derives the moment resistance only), found "
+                      "\"from-detail\"");
+            stiffness_ok = false;
+        }
+    if (!stiffness_ok) return out;
     // The entry's law, read under this row's standard (an EN law is refused
     // under AISC 360) and fitted to the stiffness on this beam.
     for (int i = 0; i < 2; ++i) {

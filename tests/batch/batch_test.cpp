@@ -35,6 +35,7 @@
 #include "cli.hpp"
 #include "pinproof/batch/batch.hpp"
 #include "pinproof/io/detail_catalogue.hpp"
+#include "pinproof/joints/joint_from_detail.hpp"
 #include "pinproof/model/project.hpp"
 #include "pinproof/io/schedule.hpp"
 #include "pinproof/model/section.hpp"
@@ -382,4 +383,56 @@ TEST_CASE("batch: a catalogue entry's law is applied to the row as in a project 
     REQUIRE(p.beams.at(0).start.behaviour.has_value());
     const beam_assessment from_project = assess_beam(p, p.beams.at(0));
     CHECK(r.rows[1].moment_start == find_check(from_project, "joint-moment-start")->value);
+}
+
+// A catalogue fin plate with "from-detail" stiffness and resistance: each row
+// derives the joint from the entry's geometry (EN 1993-1-8 components,
+// joints/fin_plate.hpp, verified in fin_plate_test.cpp) and gives the checks of
+// the same joint written inline in a project file [PF]. Under AISC 360 a
+// derived stiffness is refused (AISC 360 gives no component stiffness).
+TEST_CASE("batch: a catalogue entry's from-detail joint is derived on each row as in a project file [PF] - exact")
+{
+    const detail_catalogue cat = parse_detail_catalogue(R"({"format": "pinproof-details/1", "details": [
+      {"id": "FP-D", "type": "fin-plate", "stiffness": "from-detail", "moment_resistance": "from-detail",
+       "geometry": {"gap": "10 mm", "gap_tolerance": "3 mm", "plate_top": "50 mm", "plate_depth": "190 mm",
+                    "plate_thickness": "10 mm", "bolt_diameter": "20 mm", "bolt_rows": 3, "bolt_pitch": "60 mm",
+                    "first_bolt": "35 mm", "bolt_line": "50 mm"}},
+      {"id": "PIN", "type": "custom", "stiffness": 0}]})");
+    const schedule s = parse_schedule("id,span,section,g,q,start,end,combinations\n"
+                                      "EN,6 m,IPE 300,8.5 kN/m,7.5 kN/m,FP-D,PIN,EN1990\n"
+                                      "US,6 m,IPE 300,8.5 kN/m,7.5 kN/m,FP-D,PIN,ASCE7\n");
+    const schedule_row row = read_schedule_row(s, 0, cat);
+    REQUIRE(row.input.has_value());
+    beam b = *row.input;
+    derive_beam_joints(b, row.settings.standard);
+    REQUIRE(b.start.derived.has_value());
+    // | quantity            | expected                                  |
+    // | stiffness range     | 0.5 and 2 x the derived S_j,ini (default) |
+    // | moment resistance   | the derived bolt group's                  |
+    CHECK(!b.start.range.min.is_rigid());
+    CHECK(b.start.range.min.value() == 0.5 * *b.start.derived->initial_stiffness);
+    CHECK(b.start.range.max.value() == 2.0 * *b.start.derived->initial_stiffness);
+    CHECK(b.start.moment_resistance == b.start.derived->moment_resistance);
+
+    const batch_result r = run_batch(s, cat, {});
+    REQUIRE(r.rows.size() == 2);
+    CHECK(r.rows[0].verdict != batch_verdict::refused);
+    CHECK(r.rows[1].verdict == batch_verdict::refused);
+    REQUIRE(!r.rows[1].problems.empty());
+    CHECK(r.rows[1].problems[0].message.find("AISC 360-16 gives no component stiffness") != std::string::npos);
+
+    json doc = json::parse(R"({"format": "pinproof-project/1", "title": "t", "standard": "EN1993-1-8", "frame": "braced",
+      "beams": [{"id": "EN", "span": "6 m", "section": "IPE 300",
+        "loads": [{"case": "G", "kind": "udl", "w": "8.5 kN/m"}, {"case": "Q", "kind": "udl", "w": "7.5 kN/m"}],
+        "combinations": [{"name": "EN1990 6.10: 1.35G+1.5Q", "use": "strength", "factors": {"G": 1.35, "Q": 1.5}},
+                         {"name": "EN1990 6.14b: G+Q", "use": "service", "factors": {"G": 1.0, "Q": 1.0}}],
+        "joints": {"start": "FP-D", "end": "PIN"}}]})");
+    problem_list problems;
+    resolve_detail_references(doc, cat, problems);
+    REQUIRE(problems.empty());
+    project p = read_project(doc);
+    derive_joints(p);
+    const beam_assessment from_project = assess_beam(p, p.beams.at(0));
+    CHECK(r.rows[0].moment_start == find_check(from_project, "joint-moment-start")->value);
+    CHECK(r.rows[0].reaction_start == find_check(from_project, "joint-shear-start")->value);
 }

@@ -39,6 +39,10 @@ struct catalogue_detail {
     std::string description;
     catalogue_stiffness stiffness_min, stiffness_max;
     std::optional<double> moment_resistance;  // N*m
+    // "from-detail": worked out for each beam from the entry's geometry (a fin
+    // plate; joints/joint_from_detail.hpp); stiffness_min/max are then unused.
+    bool stiffness_from_detail = false;
+    bool moment_resistance_from_detail = false;
     // Kept as written, for readers that interpret them (connection_detail.hpp
     // reads `geometry` as a joint's `detail`): null when absent.
     nlohmann::json geometry;
