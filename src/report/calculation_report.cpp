@@ -429,14 +429,14 @@ void report_writer::derived_joints(const beam& b)
         const derived_joint& d = *jt.derived;
         o_ << "<h4>Joint at the " << to_string(e) << " from its detail (" << esc(d.basis) << ", "
            << esc(to_string(jt.detail->type)) << ")</h4>\n<table>\n<thead><tr><th>Component</th><th>Resistance</th>"
-              "<th>Per bolt</th><th>Source</th><th></th></tr></thead>\n";
+              "<th>Per bolt</th><th>Source</th></tr></thead>\n";
         for (const joint_component& c : d.components) {
             const bool governs = c.id == d.governing;
             o_ << "<tr" << (governs ? " class=\"governs\"" : "") << "><td>" << (governs ? "<strong>" : "") << esc(c.id)
-               << (governs ? "</strong>" : "") << "</td><td class=\"num\">"
+               << (governs ? " (governs)</strong>" : "") << "</td><td class=\"num\">"
                << (c.resistance ? u_.q(*c.resistance, dims::force) : std::string("&ndash;")) << "</td><td class=\"num\">"
                << (c.per_bolt ? u_.q(*c.per_bolt, dims::force) : std::string("&ndash;")) << "</td><td>" << esc(c.source)
-               << "</td><td>" << (governs ? "<strong>governs</strong>" : "") << "</td></tr>\n";
+               << "</td></tr>\n";
         }
         o_ << "</table>\n<p>Shear resistance " << u_.q(d.shear_resistance, dims::force) << " (" << esc(d.governing)
            << " governs); moment resistance " << u_.q(d.moment_resistance, dims::moment) << " ("
