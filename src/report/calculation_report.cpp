@@ -189,6 +189,7 @@ private:
     void inputs(const beam& b);
     void joints(const beam& b, const beam_assessment& ba);
     void derived_joints(const beam& b);
+    std::string derived_joint_block(const joint& jt, const derived_joint& d) const;
     void connection_inputs(const beam& b);
     void combination_block(const beam& b, const combination_result& r);
     void results_table(const combination_result& r);
@@ -420,44 +421,65 @@ void report_writer::connection_inputs(const beam& b)
 }
 
 // Each joint derived from its detail: a table of its components with the
-// governing one marked, then its resistances, stiffness and defaults.
+// governing one marked, then its resistances, stiffness and defaults. Two
+// ends that derive to the same text (the same detail on the same section
+// under the same shear) share one table.
 void report_writer::derived_joints(const beam& b)
 {
+    std::string block[2];
     for (const beam_end e : {beam_end::start, beam_end::end}) {
         const joint& jt = b.at(e);
-        if (!jt.derived) continue;
-        const derived_joint& d = *jt.derived;
-        o_ << "<h4>Joint at the " << to_string(e) << " from its detail (" << esc(d.basis) << ", "
-           << esc(to_string(jt.detail->type)) << ")</h4>\n<table>\n<thead><tr><th>Component</th><th>Resistance</th>"
-              "<th>Per bolt</th><th>Source</th></tr></thead>\n";
-        for (const joint_component& c : d.components) {
-            const bool governs = c.id == d.governing;
-            o_ << "<tr" << (governs ? " class=\"governs\"" : "") << "><td>" << (governs ? "<strong>" : "") << esc(c.id)
-               << (governs ? " (governs)</strong>" : "") << "</td><td class=\"num\">"
-               << (c.resistance ? u_.q(*c.resistance, dims::force) : std::string("&ndash;")) << "</td><td class=\"num\">"
-               << (c.per_bolt ? u_.q(*c.per_bolt, dims::force) : std::string("&ndash;")) << "</td><td>" << esc(c.source)
-               << "</td></tr>\n";
-        }
-        o_ << "</table>\n<p>Shear resistance " << u_.q(d.shear_resistance, dims::force) << " (" << esc(d.governing)
-           << " governs); moment resistance " << u_.q(d.moment_resistance, dims::moment) << " ("
-           << esc(d.moment_governing) << ")" << (jt.moment_resistance_from_detail ? ", used as the joint's" : "") << "; ";
-        if (d.initial_stiffness)
-            o_ << "initial stiffness S<sub>j,ini</sub> " << u_.q(*d.initial_stiffness, dims::rotational_stiffness)
-               << ", range " << format_number(d.scatter_min, 3) << " to " << format_number(d.scatter_max, 3)
-               << " times it" << (d.scatter_default ? " (default)" : "") << " = "
-               << u_.q(*d.stiffness_min, dims::rotational_stiffness) << " .. " << u_.q(*d.stiffness_max, dims::rotational_stiffness) << (jt.stiffness_from_detail ? ", used as the joint's range" : "");
-        else
-            o_ << "initial stiffness not derived (" << esc(d.basis) << " gives no component stiffness)";
-        o_ << "; free rotation before the bolts bear " << u_.q(d.free_rotation, dims::angle)
-           << "; rotation capacity not derived.</p>\n";
-        if (!d.defaults.empty()) {
-            o_ << "<ul class=\"defaults note\">\n";
-            for (const auto& s : d.defaults) o_ << "<li>Assumed: " << esc(s) << "</li>\n";
-            o_ << "</ul>\n";
-        }
-        for (const auto& s : d.limits_exceeded)
-            o_ << "<p class=\"note\">Beyond the conventional configuration: " << esc(s) << "</p>\n";
+        if (jt.derived) block[e == beam_end::start ? 0 : 1] = derived_joint_block(jt, *jt.derived);
     }
+    const auto heading = [&](const std::string& where, const joint& jt) {
+        o_ << "<h4>" << where << " (" << esc(jt.derived->basis) << ", "
+           << esc(to_string(jt.detail->type)) << ")</h4>\n";
+    };
+    if (!block[0].empty() && block[0] == block[1]) {
+        heading("Joints at the start and at the end from their details, identical", b.start);
+        o_ << block[0];
+        return;
+    }
+    for (const beam_end e : {beam_end::start, beam_end::end}) {
+        const std::string& text = block[e == beam_end::start ? 0 : 1];
+        if (text.empty()) continue;
+        heading("Joint at the " + to_string(e) + " from its detail", b.at(e));
+        o_ << text;
+    }
+}
+
+std::string report_writer::derived_joint_block(const joint& jt, const derived_joint& d) const
+{
+    std::ostringstream out;  // a block of its own, compared between the ends
+    out << "<table>\n<thead><tr><th>Component</th><th>Resistance</th><th>Per bolt</th><th>Source</th></tr></thead>\n";
+    for (const joint_component& c : d.components) {
+        const bool governs = c.id == d.governing;
+        out << "<tr" << (governs ? " class=\"governs\"" : "") << "><td>" << (governs ? "<strong>" : "") << esc(c.id)
+           << (governs ? " (governs)</strong>" : "") << "</td><td class=\"num\">"
+           << (c.resistance ? u_.q(*c.resistance, dims::force) : std::string("&ndash;")) << "</td><td class=\"num\">"
+           << (c.per_bolt ? u_.q(*c.per_bolt, dims::force) : std::string("&ndash;")) << "</td><td>" << esc(c.source)
+           << "</td></tr>\n";
+    }
+    out << "</table>\n<p>Shear resistance " << u_.q(d.shear_resistance, dims::force) << " (" << esc(d.governing)
+       << " governs); moment resistance " << u_.q(d.moment_resistance, dims::moment) << " ("
+       << esc(d.moment_governing) << ")" << (jt.moment_resistance_from_detail ? ", used as the joint's" : "") << "; ";
+    if (d.initial_stiffness)
+        out << "initial stiffness S<sub>j,ini</sub> " << u_.q(*d.initial_stiffness, dims::rotational_stiffness)
+           << ", range " << format_number(d.scatter_min, 3) << " to " << format_number(d.scatter_max, 3)
+           << " times it" << (d.scatter_default ? " (default)" : "") << " = "
+           << u_.q(*d.stiffness_min, dims::rotational_stiffness) << " .. " << u_.q(*d.stiffness_max, dims::rotational_stiffness) << (jt.stiffness_from_detail ? ", used as the joint's range" : "");
+    else
+        out << "initial stiffness not derived (" << esc(d.basis) << " gives no component stiffness)";
+    out << "; free rotation before the bolts bear " << u_.q(d.free_rotation, dims::angle)
+       << "; rotation capacity not derived.</p>\n";
+    if (!d.defaults.empty()) {
+        out << "<ul class=\"defaults note\">\n";
+        for (const auto& s : d.defaults) out << "<li>Assumed: " << esc(s) << "</li>\n";
+        out << "</ul>\n";
+    }
+    for (const auto& s : d.limits_exceeded)
+        out << "<p class=\"note\">Beyond the conventional configuration: " << esc(s) << "</p>\n";
+    return out.str();
 }
 
 void report_writer::combination_block(const beam& b, const combination_result& r)
