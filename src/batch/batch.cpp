@@ -15,6 +15,7 @@
 #include "pinproof/core/csv_cell.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/report/result_json.hpp"
+#include "pinproof/checks/governing_check.hpp"
 #include "pinproof/joints/joint_from_detail.hpp"
 
 namespace pinproof {
@@ -26,15 +27,6 @@ const char* const closure_note =
     "Closure rotations are the sagging closure at the worst-case gap of the catalogue entry's geometry; empty where "
     "the entry gives no geometry or nothing closes within 90 degrees.";
 
-std::optional<double> ratio_of(const check& c)
-{
-    if (!c.value || !c.limit || !(*c.limit > 0)) return std::nullopt;
-    // A least limit (the floor frequency) is used up as the value falls to it.
-    if (c.limit_is_minimum && !(*c.value > 0)) return std::nullopt;
-    const double r = c.limit_is_minimum ? *c.limit / *c.value : *c.value / *c.limit;
-    if (!std::isfinite(r)) return std::nullopt;
-    return r;
-}
 
 std::optional<double> check_value(const beam_assessment& a, const std::string& id)
 {
@@ -53,31 +45,11 @@ json number_or_null(const std::optional<double>& v)
 void summarise(batch_row& row, const beam_assessment& a)
 {
     row.verdict = a.holds() ? batch_verdict::holds : batch_verdict::does_not_hold;
-    // A failed check governs over any other; among failed checks, or among the
-    // others with a value and a limit, the largest value/limit governs. A failed
-    // check without a ratio (a rigid joint) outranks every ratio. Checks that
-    // only report (no limit) never govern.
-    const check* governing = nullptr;
-    int best_rank = 0;
-    double best_ratio = -1;
-    for (const auto& c : a.checks) {
-        // Detailing rules are advice (warn at most) and some are "at least" rules,
-        // for which value/limit is not a utilisation: they never govern.
-        if (c.id.rfind("detailing-", 0) == 0 || c.informative) continue;
-        const auto r = ratio_of(c);
-        const bool failed = c.status == check_status::fail;
-        const int rank = failed ? 2 : r ? 1 : 0;
-        if (rank == 0) continue;
-        const double key = r ? *r : std::numeric_limits<double>::infinity();
-        if (rank > best_rank || (rank == best_rank && key > best_ratio)) {
-            governing = &c;
-            best_rank = rank;
-            best_ratio = key;
-        }
-    }
+    // The governing check: checks/governing_check.hpp.
+    const check* governing = governing_check(a);
     if (governing) {
         row.governing_check = governing->id;
-        row.worst_ratio = ratio_of(*governing);
+        row.worst_ratio = utilisation(*governing);
         row.message = governing->message;
     }
     row.moment_start = check_value(a, "joint-moment-start");

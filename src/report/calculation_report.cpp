@@ -10,6 +10,7 @@
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/joints/classification.hpp"
 #include "pinproof/joints/nonlinear_analysis.hpp"
+#include "pinproof/checks/governing_check.hpp"
 #include "pinproof/report/beam_elevation.hpp"
 #include "pinproof/report/beam_line_chart.hpp"
 #include "pinproof/report/report_style.hpp"
@@ -287,13 +288,29 @@ void report_writer::title_block()
     else
         o_ << "the simple-support (pinned) assumption DOES NOT HOLD for " << a_.beams.size() - holding << " of "
            << a_.beams.size() << " beams.";
-    o_ << "</div>\n<table>\n<thead><tr><th>Beam</th><th>Verdict</th><th>Failed checks</th></tr></thead>\n";
+    // The summary sheet: per beam its verdict, the check that governs (the
+    // largest utilisation, or a failure: checks/governing_check.hpp), the
+    // classes of its joints over their stiffness ranges, and what fails.
+    const bool en = p_.standard == design_standard::en1993_1_8;
+    o_ << "</div>\n<table>\n<thead><tr><th>Beam</th><th>Verdict</th><th>Governing check</th><th>Joint classes ("
+       << (en ? "EN 1993-1-8" : "AISC 360") << ", lower .. upper bound)</th><th>Failed checks</th></tr></thead>\n";
     for (const auto& b : a_.beams) {
         std::string failed;
         for (const auto& c : b.checks)
             if (c.status == check_status::fail) failed += (failed.empty() ? "" : ", ") + c.id;
+        std::string governing = "none";
+        if (const check* g = governing_check(b)) {
+            const auto u = utilisation(*g);
+            governing = g->id + (u ? " (" + format_number(*u, 3) + ")" : std::string());
+        }
+        std::string classes;
+        for (const auto* j : {&b.start, &b.end})
+            classes += (classes.empty() ? "" : "; ") + to_string(j->end) + ": " +
+                       (en ? to_string(j->en_lower) + " .. " + to_string(j->en_upper)
+                           : to_string(j->aisc_lower) + " .. " + to_string(j->aisc_upper));
         o_ << "<tr><td class=\"id\">" << esc(b.id) << "</td><td class=\"status " << (b.holds() ? "pass\">HOLDS" : "fail\">DOES NOT HOLD")
-           << "</td><td>" << (failed.empty() ? "none" : esc(failed)) << "</td></tr>\n";
+           << "</td><td><code>" << esc(governing) << "</code></td><td>" << esc(classes) << "</td><td>"
+           << (failed.empty() ? "none" : esc(failed)) << "</td></tr>\n";
     }
     o_ << "</table>\n";
     o_ << "<div class=\"caution\"><strong>Caution.</strong> " << esc(caution_text)
