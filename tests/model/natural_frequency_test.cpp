@@ -7,6 +7,8 @@
 //              4.73004074 (fixed-fixed), 3.92660231 (fixed-pinned); lambda^2 = 9.8696, 22.373,
 //              15.418 in the reference pack 11.4 (values to 9 figures from memory; the
 //              frequency equations cos(l) cosh(l) = 1 and tan(l) = tanh(l) solved in the test).
+//              Clamped-free (cantilever): lambda = 1.87510407, lambda^2 = 3.5160 (pack 11.4),
+//              the root of cos(l) cosh(l) = -1 solved in the test.
 //   [scipy]    python3-scipy brentq on the determinant of the four boundary conditions of
 //              W = A cos + B sin + C cosh + D sinh with springs EI W'' = +-k W' at the ends,
 //              written out in the test.
@@ -143,4 +145,32 @@ TEST_CASE("a partial load adds its mass where it lies: a stiffer end rises the f
     CHECK_THROWS_AS(first_natural_frequency(L, EI, {udl(-w)}, stiffness::pinned(), stiffness::pinned()),
                     std::invalid_argument);
     CHECK_THROWS_AS(first_natural_frequency(L, EI, {}, stiffness::pinned(), stiffness::pinned()), std::invalid_argument);
+}
+
+TEST_CASE("cantilever - rigid root - UDL [Blevins]: lambda = 1.87510407 (cos l cosh l = -1) - f = 3.516/(2 pi) sqrt(EI/m)/L^2 - tol 1e-7")
+{
+    const double lambda = root([](double l) { return std::cos(l) * std::cosh(l) + 1; }, 1.5, 2.2);
+    CHECK(std::abs(lambda - 1.87510407) <= 1e-8);
+    CHECK(std::abs(lambda * lambda - 3.5160) <= 5e-4);  // pack 11.4, 5 figures
+    const double f = first_natural_frequency(L, EI, {udl(w)}, stiffness::rigid(), stiffness::pinned(),
+                                             beam_layout::cantilever);
+    CHECK(std::abs(f / classical(lambda) - 1) <= 1e-7);
+}
+
+TEST_CASE("cantilever - spring root: below the rigid root - tends to it as S grows - a pinned root is refused")
+{
+    // Adding stiffness never lowers an eigenvalue (Rayleigh quotient; common practice, no source).
+    const auto f = [](stiffness s) {
+        return first_natural_frequency(L, EI, {udl(w)}, s, stiffness::pinned(), beam_layout::cantilever);
+    };
+    const double rigid = f(stiffness::rigid());
+    double previous = 0;
+    for (double kappa : {0.5, 2.0, 8.0, 40.0}) {
+        const double v = f(stiffness::spring(kappa * EI / L));
+        CHECK(v > previous);
+        CHECK(v < rigid);
+        previous = v;
+    }
+    CHECK(std::abs(f(stiffness::spring(1e9 * EI / L)) / rigid - 1) <= 1e-6);
+    CHECK_THROWS_AS(f(stiffness::pinned()), std::invalid_argument);
 }
