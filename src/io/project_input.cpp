@@ -735,8 +735,11 @@ struct reader {
                             problems);
         beam out;
         out.pointer = ptr;
+        const std::size_t problems_before = problems.size();
         out.layout = read_layout(b, ptr);
         const bool cantilever = out.layout == beam_layout::cantilever;
+        // A refused layout leaves the joints it needs unknown: a missing end joint is not reported then.
+        const bool layout_refused = problems.size() > problems_before;
         auto id = string_field(b, ptr, "id", true, problems);
         if (id && id->empty()) problems.add(child(ptr, "id"), "expected a beam id, found an empty string");
         out.description = string_field(b, ptr, "description", false, problems).value_or("");
@@ -775,6 +778,7 @@ struct reader {
             }
             for (const char* e : {"start", "end"}) {
                 if (cantilever && std::string(e) == "end") continue;
+                if (!jit->contains(e) && layout_refused && std::string(e) == "end") continue;
                 if (!jit->contains(e)) {
                     problems.add(child(jp, e), std::string("missing required field \"") + e + "\"");
                     continue;

@@ -571,6 +571,8 @@ void report_writer::results_table(const beam& b, const combination_result& r)
        << "<th>Range min</th><th>Range max</th><th>" << (cantilever ? "Rigid root" : "Fixed") << "</th></tr></thead>\n";
     const auto& f = result_fields();
     for (std::size_t i = 0; i < f.size(); ++i) {
+        // A free tip has neither reaction nor moment: their rows are left out.
+        if (cantilever && (f[i].member == &beam_state::reaction_end || f[i].member == &beam_state::moment_end)) continue;
         const bool position = f[i].member == &beam_state::max_sagging_at || f[i].member == &beam_state::max_hogging_at ||
                               f[i].member == &beam_state::max_deflection_at;
         auto cell = [&](double v) {

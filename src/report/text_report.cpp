@@ -274,6 +274,9 @@ void combination_tables(std::ostringstream& o, const project& p, const beam_asse
           << rpad("range max", 12) << rpad(cantilever ? "rigid root" : "fixed", 11) << "\n";
         const auto& f = result_fields();
         for (std::size_t i = 0; i < f.size(); ++i) {
+            // A free tip has neither reaction nor moment: their rows are left out.
+            if (cantilever && (f[i].member == &beam_state::reaction_end || f[i].member == &beam_state::moment_end))
+                continue;
             o << "    " << pad(f[i].label, 32) << pad(units_view::is_position(f[i]) ? u.pos_unit() : u.unit(f[i].dim), 10)
               << (r.pinned ? rpad(u.cell(r.pinned.value().*(f[i].member), f[i]), 11) : std::string())
               << rpad(u.cell(r.envelope.ranges[i].min, f[i]), 12)
