@@ -10,6 +10,7 @@
 #include "pinproof/checks/assessment.hpp"
 #include "pinproof/joints/classification.hpp"
 #include "pinproof/joints/nonlinear_analysis.hpp"
+#include "pinproof/report/beam_elevation.hpp"
 #include "pinproof/report/beam_line_chart.hpp"
 #include "pinproof/report/detail_drawing.hpp"
 #include "pinproof/core/errors.hpp"
@@ -869,6 +870,11 @@ void report_writer::beam_section(const beam_assessment& ba)
     const beam& b = *ba.input;
     o_ << "<section class=\"beam\" id=\"beam-" << ++beams_ << "\">\n<h2>Beam " << esc(b.id) << "</h2>\n";
     inputs(b);
+    if (b.layout == beam_layout::cantilever)
+        figure("elevation", cantilever_elevation_svg(b, p_.units),
+               "Elevation of cantilever " + b.id +
+                   ": the root joint's spring at the supporting member on the left, the free tip on the right, the "
+                   "unfactored loads by case (not to scale vertically).");
     joints(b, ba);
     connection_inputs(b);
     derived_joints(b);
