@@ -149,29 +149,8 @@ beam_model::load_state beam_model::integrate(const std::vector<load>& loads, dou
 
     // Shear (upward on the left-hand part) and sagging moment just right of a
     // node; a clockwise couple raises the sagging moment by its value.
-    double V = out.reaction_start - P.front();
-    double M = C.front();
-    double slope = 0.0, w = 0.0;
-    for (std::size_t e = 0; e < elements_.size(); ++e) {
-        const auto& el = elements_[e];
-        const double l = el.length;
-        const double qa = loads.empty() ? 0.0 : el.qa, t = loads.empty() ? 0.0 : el.qb - el.qa;
-        // M(s) = M + V s - qa s^2/2 - t s^3/(6 l) and w = w + slope s - (1/EI) double integral of M(s).
-        element_polynomial c{};
-        c[0] = w;
-        c[1] = slope;
-        c[2] = -M / (2 * EI_);
-        c[3] = -V / (6 * EI_);
-        c[4] = qa / (24 * EI_);
-        c[5] = t / (120 * l * EI_);
-        out.w[e] = c;
-        w = polynomial::value(c, l);
-        slope = polynomial::value(polynomial::derivative(c), l);
-        const double V_end = V - qa * l - t * l / 2;
-        const double M_end = M + V * l - qa * l * l / 2 - t * l * l / 6;
-        V = V_end - P[e + 1];
-        M = M_end + C[e + 1];
-    }
+    const element_run run = integrate_elements(P, C, out.reaction_start - P.front(), C.front(), !loads.empty(), out.w);
+    const double V = run.shear, M = run.moment, w = run.w, slope = run.slope;
     // Past the end support nothing may remain: these residuals are the
     // equilibrium of the whole beam, reached by a path independent of statics.
     out.closure_shear = V + out.reaction_end;
@@ -184,6 +163,40 @@ beam_model::load_state beam_model::integrate(const std::vector<load>& loads, dou
     out.rotation_start = theta_start;
     out.rotation_end = -(slope + theta_start);
     return out;
+}
+
+// EI w'' = -M integrated element by element from w = 0 and slope 0 at the
+// start, with the shear V and the sagging moment M just right of the start,
+// the point forces P and clockwise couples C at the nodes, and the elements'
+// line loads where `with_loads`: on each element M(s) = M + V s - qa s^2/2 -
+// t s^3/(6 l) and w = w + slope s - (1/EI) times the double integral of M(s),
+// exactly. Returns the shear and moment just past the last node, and the
+// deflection and slope there.
+beam_model::element_run beam_model::integrate_elements(const std::vector<double>& P, const std::vector<double>& C,
+                                                      double V, double M, bool with_loads,
+                                                      std::vector<element_polynomial>& w_out) const
+{
+    double slope = 0.0, w = 0.0;
+    for (std::size_t e = 0; e < elements_.size(); ++e) {
+        const auto& el = elements_[e];
+        const double l = el.length;
+        const double qa = with_loads ? el.qa : 0.0, t = with_loads ? el.qb - el.qa : 0.0;
+        element_polynomial c{};
+        c[0] = w;
+        c[1] = slope;
+        c[2] = -M / (2 * EI_);
+        c[3] = -V / (6 * EI_);
+        c[4] = qa / (24 * EI_);
+        c[5] = t / (120 * l * EI_);
+        w_out[e] = c;
+        w = polynomial::value(c, l);
+        slope = polynomial::value(polynomial::derivative(c), l);
+        const double V_end = V - qa * l - t * l / 2;
+        const double M_end = M + V * l - qa * l * l / 2 - t * l * l / 6;
+        V = V_end - P[e + 1];
+        M = M_end + C[e + 1];
+    }
+    return {V, M, w, slope};
 }
 
 // Exact deflection of the cantilever with a rigid root under the beam's loads.
@@ -209,32 +222,11 @@ beam_model::load_state beam_model::integrate_cantilever() const
     }
     // Just right of the root: the root's anticlockwise couple (hogging) makes
     // the sagging moment -M_root; a clockwise couple there raises it.
-    double V = out.reaction_start - P.front();
-    double M = -moment + C.front();
-    double slope = 0.0, w = 0.0;
-    for (std::size_t e = 0; e < elements_.size(); ++e) {
-        const auto& el = elements_[e];
-        const double l = el.length;
-        const double qa = el.qa, t = el.qb - el.qa;
-        element_polynomial c{};
-        c[0] = w;
-        c[1] = slope;
-        c[2] = -M / (2 * EI_);
-        c[3] = -V / (6 * EI_);
-        c[4] = qa / (24 * EI_);
-        c[5] = t / (120 * l * EI_);
-        out.w[e] = c;
-        w = polynomial::value(c, l);
-        slope = polynomial::value(polynomial::derivative(c), l);
-        const double V_end = V - qa * l - t * l / 2;
-        const double M_end = M + V * l - qa * l * l / 2 - t * l * l / 6;
-        V = V_end - P[e + 1];
-        M = M_end + C[e + 1];
-    }
-    out.closure_shear = V;  // no support at the tip
-    out.closure_moment = M;
+    const element_run run = integrate_elements(P, C, out.reaction_start - P.front(), -moment + C.front(), true, out.w);
+    out.closure_shear = run.shear;  // no support at the tip
+    out.closure_moment = run.moment;
     out.rotation_start = 0.0;
-    out.rotation_end = -slope;
+    out.rotation_end = -run.slope;
     return out;
 }
 

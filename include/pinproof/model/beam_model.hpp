@@ -152,6 +152,11 @@ private:
     };
     load_state integrate(const std::vector<load>& loads, double couple_start, double couple_end) const;
     load_state integrate_cantilever() const;
+    struct element_run {
+        double shear = 0, moment = 0, w = 0, slope = 0;  // just past the last node
+    };
+    element_run integrate_elements(const std::vector<double>& P, const std::vector<double>& C, double V, double M,
+                                   bool with_loads, std::vector<element_polynomial>& w_out) const;
     // The state whose deflection is w_load + a w_start + b w_end (two
     // supports: a, b the end moments; a cantilever: a the root rotation, b 0).
     beam_state fill_extremes(beam_state s, double a, double b) const;
