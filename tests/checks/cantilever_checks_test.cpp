@@ -83,7 +83,8 @@ TEST_CASE("root-class [EN]: kappa_min 9 passes k_b = 8 - kappa_min 7 fails - rig
 TEST_CASE("root-class [AISC]: the fully restrained boundary 20 - kappa_min 15 fails")
 {
     const project p = parse_project(cantilever(R"({"min": "15 EI/L", "max": "30 EI/L"})", "", "AISC360"));
-    const check& c = find(assess_beam(p, p.beams[0]), "root-class");
+    const auto a = assess_beam(p, p.beams[0]);  // kept alive while its check is read
+    const check& c = find(a, "root-class");
     CHECK(c.status == check_status::fail);
     CHECK(*c.limit == 20.0);
 }
@@ -92,7 +93,8 @@ TEST_CASE("root-flexibility [C8]: UDL increase 4/kappa_min against 10 % - kappa 
 {
     {
         const project p = parse_project(cantilever(R"({"min": "50 EI/L", "max": "80 EI/L"})"));
-        const check& c = find(assess_beam(p, p.beams[0]), "root-flexibility");
+        const auto a = assess_beam(p, p.beams[0]);  // kept alive while its check is read
+        const check& c = find(a, "root-flexibility");
         CHECK(*c.value == doctest::Approx(4.0 / 50.0).epsilon(1e-9));
         CHECK(*c.limit == doctest::Approx(0.10).epsilon(1e-15));
         CHECK(c.status == check_status::pass);
@@ -110,7 +112,8 @@ TEST_CASE("root-flexibility [C8]: UDL increase 4/kappa_min against 10 % - kappa 
     {
         // limits.root_flexibility given as a percentage.
         const project p = parse_project(cantilever(R"({"min": "20 EI/L", "max": "80 EI/L"})", R"(, "root_flexibility": "25 %")"));
-        const check& c = find(assess_beam(p, p.beams[0]), "root-flexibility");
+        const auto a = assess_beam(p, p.beams[0]);  // kept alive while its check is read
+        const check& c = find(a, "root-flexibility");
         CHECK(*c.limit == doctest::Approx(0.25).epsilon(1e-12));
         CHECK(c.status == check_status::pass);
     }
