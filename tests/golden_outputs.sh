@@ -31,6 +31,9 @@ for f in mezzanine-fin-plates roof-web-cleats-us transfer-end-plates-fails; do
     run "$f.sweep" "$bin" sweep "catalog-examples/$f.json" --csv "out/$f.sweep.csv" --svg "out/$f.sweep.svg" \
         --json "out/$f.sweep.json"
 done
+# A cantilever: check and report (its sweep is not supported yet).
+run balcony-cantilevers.check "$bin" check catalog-examples/balcony-cantilevers.json --json "out/balcony-cantilevers.result.json"
+run balcony-cantilevers.report "$bin" report catalog-examples/balcony-cantilevers.json -o "out/balcony-cantilevers.report.html"
 run mezzanine.detail-start "$bin" detail catalog-examples/mezzanine-fin-plates.json --beam MZ-C/3-4 --end start \
     --svg "out/mezzanine.detail-start.svg"
 run mezzanine.detail-end "$bin" detail catalog-examples/mezzanine-fin-plates.json --beam MZ-D/3-4 --end end \

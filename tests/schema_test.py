@@ -168,11 +168,12 @@ def main(argv):
             print("skip  project with a detail id: no pinproof-details/1 example")
 
         # Broken copies: each must be refused by the schema and by pinproof.
-        # The base is the first project example with inline joints and a udl first.
+        # The base is the first project example on two supports with inline joints and a udl first.
         base = None
         for _, document in projects:
             b = document["beams"][0]
-            if isinstance(b["joints"]["start"], dict) and b["loads"][0].get("kind") == "udl" and "details" not in document:
+            if isinstance(b["joints"]["start"], dict) and b["loads"][0].get("kind") == "udl" and "details" not in document \
+                    and b.get("layout", "two-supports") == "two-supports":
                 base = document
                 break
         if base is None:

@@ -53,6 +53,7 @@ void summarise(batch_row& row, const beam_assessment& a)
         row.message = governing->message;
     }
     row.moment_start = check_value(a, "joint-moment-start");
+    if (!row.moment_start) row.moment_start = check_value(a, "root-moment");  // a cantilever's root
     row.moment_end = check_value(a, "joint-moment-end");
     row.rotation_start = check_value(a, "rotation-demand-start");
     row.rotation_end = check_value(a, "rotation-demand-end");

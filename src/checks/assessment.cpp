@@ -11,6 +11,7 @@
 #include "pinproof/model/result_fields.hpp"
 #include "pinproof/joints/joint_law.hpp"
 #include "pinproof/checks/joint_strength.hpp"
+#include "pinproof/checks/cantilever_checks.hpp"
 #include "pinproof/checks/derived_joint_checks.hpp"
 
 namespace pinproof {
@@ -122,10 +123,12 @@ beam_state solve_state(const beam_model& model, const beam& b, const combination
 // pairs, and meets the pinned and fixed states and the scan's points again and
 // again. The key is every input of the solve, byte for byte, so a remembered
 // value is the value the solve would give.
-double remembered_frequency(double span, double EI, const std::vector<load>& loads, stiffness s, stiffness e)
+double remembered_frequency(double span, double EI, const std::vector<load>& loads, stiffness s, stiffness e,
+                            beam_layout layout)
 {
     std::string key;
     const auto put = [&key](const auto& v) { key.append(reinterpret_cast<const char*>(&v), sizeof v); };
+    put(static_cast<int>(layout));
     put(span);
     put(EI);
     for (const stiffness k : {s, e}) {
@@ -142,7 +145,7 @@ double remembered_frequency(double span, double EI, const std::vector<load>& loa
     thread_local std::unordered_map<std::string, double> memory;
     if (const auto it = memory.find(key); it != memory.end()) return it->second;
     if (memory.size() >= 50000) memory.clear();  // bounded: a few MB
-    const double f = first_natural_frequency(span, EI, loads, s, e);
+    const double f = first_natural_frequency(span, EI, loads, s, e, layout);
     memory.emplace(std::move(key), f);
     return f;
 }
@@ -155,15 +158,16 @@ combination_result::frequencies frequencies_of(const beam& b, const combination&
     const std::vector<load> loads = factored_loads(b.loads, c);
     const auto f = [&](stiffness s, stiffness e) {
         try {
-            return remembered_frequency(b.span, b.EI(), loads, s, e);
+            return remembered_frequency(b.span, b.EI(), loads, s, e, b.layout);
         } catch (const std::invalid_argument& x) {
             // The reader refuses a vibration combination without mass or with an upward load.
             throw internal_error(std::string("the frequency of combination ") + c.name + " could not be found: " + x.what());
         }
     };
     combination_result::frequencies out;
-    out.pinned = f(stiffness::pinned(), stiffness::pinned());
-    out.fixed = f(stiffness::rigid(), stiffness::rigid());
+    const bool cantilever = b.layout == beam_layout::cantilever;
+    if (!cantilever) out.pinned = f(stiffness::pinned(), stiffness::pinned());
+    out.fixed = cantilever ? f(stiffness::rigid(), stiffness::pinned()) : f(stiffness::rigid(), stiffness::rigid());
     const auto& rs = b.start.range;
     const auto& re = b.end.range;
     const std::pair<stiffness, stiffness> at[] = {{rs.min, re.min}, {rs.min, re.max}, {rs.max, re.min}, {rs.max, re.max}};
@@ -183,15 +187,18 @@ combination_result analyse_combination(const beam& b, const combination& c, bool
 {
     combination_result out;
     out.comb = c;
-    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c));
-    out.pinned = model.solve(stiffness::pinned(), stiffness::pinned());
-    out.fixed = model.solve(stiffness::rigid(), stiffness::rigid());
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c), b.layout);
+    const bool cantilever = b.layout == beam_layout::cantilever;
+    // A cantilever's tip is free (its end joint a pin by construction); its
+    // pinned bound would be a mechanism.
+    if (!cantilever) out.pinned = model.solve(stiffness::pinned(), stiffness::pinned());
+    out.fixed = model.solve(stiffness::rigid(), cantilever ? stiffness::pinned() : stiffness::rigid());
     const auto& rs = b.start.range;
     const auto& re = b.end.range;
     const auto solve = [&](stiffness s, stiffness e) { return solve_state(model, b, c, s, e); };
     out.corners = {solve(rs.min, re.min), solve(rs.min, re.max), solve(rs.max, re.min), solve(rs.max, re.max)};
     if (c.use == limit_state::vibration) out.frequency = frequencies_of(b, c);
-    if (c.use == limit_state::strength) {
+    if (c.use == limit_state::strength && !cantilever) {
         if (const auto Mpl = b.plastic_moment()) {
             try {
                 out.collapse = beam_collapse(model, end_for_joint(b.start, rs.min), end_for_joint(b.end, re.min), *Mpl);
@@ -445,7 +452,7 @@ std::optional<joint_assessment::support_response> support_response_of(const beam
                 throw internal_error(std::string("the demand on the support could not be found: ") + x.what());
             }
             if (out && std::abs(d.moment) <= std::abs(out->demand.moment)) continue;
-            out = joint_assessment::support_response{d, r.comb.name, s.*moment, s.*reaction, r.pinned.*reaction,
+            out = joint_assessment::support_response{d, r.comb.name, s.*moment, s.*reaction, r.pinned.value().*reaction,
                                                      !j.support_eccentricity};
         }
     }
@@ -557,7 +564,7 @@ check deflection_check(const project& p, const beam& b, const std::vector<combin
         const double d = std::max(std::abs(range.min), std::abs(range.max));
         if (!g.found || d > g.value) {
             g = {d, r.comb.name, true};
-            pinned = std::abs(r.pinned.max_deflection);
+            pinned = std::abs(r.pinned.value().max_deflection);
         }
     }
     if (!b.deflection) {
@@ -606,15 +613,22 @@ check frequency_check(const project& p, const beam& b, const std::vector<combina
     c.value = f.range.min;
     // The estimate from the deflection of the state with the lowest frequency.
     const auto lowest = static_cast<std::size_t>(std::min_element(f.corners.begin(), f.corners.end()) - f.corners.begin());
-    const double delta = gov->corners.at(lowest).max_deflection, delta_pinned = gov->pinned.max_deflection;
+    // A cantilever's bounds are its rigid root (no pinned bound: a mechanism);
+    // the 18/sqrt(delta) estimate belongs to a beam on two supports and is not given for it.
+    const bool cantilever = b.layout == beam_layout::cantilever;
     std::string estimate;
-    if (delta > 0 && delta_pinned > 0)
-        estimate = "; the estimate 18/sqrt(delta) gives " + fmt(frequency_from_deflection(delta), dims::frequency) +
-                   " (delta " + fmt(delta, dims::length) + ") and " +
-                   fmt(frequency_from_deflection(delta_pinned), dims::frequency) + " with pins";
+    if (!cantilever) {
+        const double delta = gov->corners.at(lowest).max_deflection, delta_pinned = gov->pinned.value().max_deflection;
+        if (delta > 0 && delta_pinned > 0)
+            estimate = "; the estimate 18/sqrt(delta) gives " + fmt(frequency_from_deflection(delta), dims::frequency) +
+                       " (delta " + fmt(delta, dims::length) + ") and " +
+                       fmt(frequency_from_deflection(delta_pinned), dims::frequency) + " with pins";
+    }
+    const std::string bounds = cantilever ? fmt(f.fixed, dims::frequency) + " with a rigid root"
+                                          : fmt(f.pinned.value(), dims::frequency) + " with ideal pins, " +
+                                                fmt(f.fixed, dims::frequency) + " fixed";
     const std::string text = "The first natural frequency is at least " + fmt(f.range.min, dims::frequency) +
-                             " over the stiffness range (" + fmt(f.pinned, dims::frequency) + " with ideal pins, " +
-                             fmt(f.fixed, dims::frequency) + " fixed), combination " + gov->comb.name + estimate;
+                             " over the stiffness range (" + bounds + "), combination " + gov->comb.name + estimate;
     if (!b.frequency_limit) {
         c.status = check_status::not_applicable;
         c.message = text + ". No frequency limit is given (limits.frequency), so it is not checked.";
@@ -625,7 +639,7 @@ check frequency_check(const project& p, const beam& b, const std::vector<combina
     if (f.range.min >= *c.limit) {
         c.status = check_status::pass;
         c.message = against + ".";
-        if (f.pinned < *c.limit)
+        if (f.pinned && *f.pinned < *c.limit)
             c.message += " With ideal pins the beam would not reach it: the check relies on the stiffness of the joints.";
         return c;
     }
@@ -649,7 +663,7 @@ rotation_extremes end_rotation_extremes(const std::vector<combination_result>& c
     rotation_extremes r;
     for (const auto& c : combos) {
         if (strength_only && c.comb.use != limit_state::strength) continue;
-        const auto range = over_range ? c.envelope.of(member) : value_range{c.pinned.*member, c.pinned.*member};
+        const auto range = over_range ? c.envelope.of(member) : value_range{c.pinned.value().*member, c.pinned.value().*member};
         if (range.max > r.sagging) {
             r.sagging = range.max;
             r.sagging_combination = c.comb.name;
@@ -897,6 +911,36 @@ check detailing_check(const detailing_finding& f, beam_end e, const project& p)
     return c;
 }
 
+// The fixed question for a cantilever (cantilever_checks.hpp): its root is
+// the only restraint, so the checks of a pinned end, of the end gap, of a
+// detail and of the support's demand are not run; the tip is free.
+void assess_cantilever(const project& p, const beam& b, beam_assessment& a)
+{
+    a.checks.push_back(root_class_check(p, b, a.start));
+    a.checks.push_back(root_flexibility_check(p, b, a.combinations));
+    a.checks.push_back(root_moment_check(p, b, a.combinations));
+    a.checks.push_back(tip_deflection_check(p, b, a.combinations));
+    a.checks.push_back(frequency_check(p, b, a.combinations));
+    a.notes.push_back("Cantilever: the start joint is the root, the end a free tip. The checks ask whether the fixed "
+                      "root is real; the pinned-end, end-gap and support-demand checks of a beam on two supports are "
+                      "not run (docs/method/layouts.md).");
+}
+
+// Assumptions and defaults applied to the beam, in words.
+void add_notes(const project& p, const beam& b, beam_assessment& a)
+{
+    if (b.E_is_default)
+        a.notes.push_back(p.standard == design_standard::en1993_1_8
+                              ? "E not given: 210 000 MPa is used (EN 1993-1-1 3.2.6(1))."
+                              : "E not given: 29 000 ksi is used (AISC 360-16, Section B2 / Symbols).");
+    if (p.standard == design_standard::aisc360)
+        a.notes.push_back("AISC 360-16 Commentary B3.4 classifies a connection by its secant stiffness at service "
+                          "loads: the stiffness range should be that secant stiffness.");
+    if (p.frame == frame_bracing::unbraced && p.standard == design_standard::en1993_1_8)
+        a.notes.push_back("Unbraced frame: the EN 1993-1-8 rigid boundary k_b = 25 applies only where K_b/K_c >= 0.1 in "
+                          "every storey; otherwise joints are semi-rigid (5.2.2.5(1)).");
+}
+
 }  // namespace
 
 beam_assessment assess_beam(const project& p, const beam& b, const assessment_options& options)
@@ -912,6 +956,11 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     a.start = assess_joint(p, b, beam_end::start);
     a.end = assess_joint(p, b, beam_end::end);
     a.checks.reserve(32);
+    if (b.layout == beam_layout::cantilever) {
+        assess_cantilever(p, b, a);
+        add_notes(p, b, a);
+        return a;
+    }
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(stiffness_class_check(p, a.joint_at(e)));
     a.plastic_moment = b.plastic_moment();
     for (beam_end e : {beam_end::start, beam_end::end})
@@ -936,16 +985,7 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end})
         if (a.joint_at(e).detail)
             for (const auto& f : a.joint_at(e).detail->findings) a.checks.push_back(detailing_check(f, e, p));
-    if (b.E_is_default)
-        a.notes.push_back(p.standard == design_standard::en1993_1_8
-                              ? "E not given: 210 000 MPa is used (EN 1993-1-1 3.2.6(1))."
-                              : "E not given: 29 000 ksi is used (AISC 360-16, Section B2 / Symbols).");
-    if (p.standard == design_standard::aisc360)
-        a.notes.push_back("AISC 360-16 Commentary B3.4 classifies a connection by its secant stiffness at service "
-                          "loads: the stiffness range should be that secant stiffness.");
-    if (p.frame == frame_bracing::unbraced && p.standard == design_standard::en1993_1_8)
-        a.notes.push_back("Unbraced frame: the EN 1993-1-8 rigid boundary k_b = 25 applies only where K_b/K_c >= 0.1 in "
-                          "every storey; otherwise joints are semi-rigid (5.2.2.5(1)).");
+    add_notes(p, b, a);
     return a;
 }
 

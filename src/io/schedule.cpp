@@ -288,7 +288,8 @@ const std::vector<std::string>& schedule_required_columns()
 
 const std::vector<std::string>& schedule_optional_columns()
 {
-    static const std::vector<std::string> c{"combinations", "deflection_limit", "E", "description", "standard", "frame"};
+    static const std::vector<std::string> c{"combinations", "deflection_limit", "E", "description", "standard", "frame",
+                                            "layout"};
     return c;
 }
 
@@ -512,6 +513,7 @@ struct row_rules {
     combination_set set = combination_set::en1990;
     design_standard standard = design_standard::en1993_1_8;
     frame_bracing frame = frame_bracing::braced;
+    beam_layout layout = beam_layout::two_supports;
 };
 
 row_rules read_row_rules(row_reader& r)
@@ -531,6 +533,15 @@ row_rules read_row_rules(row_reader& r)
     if (auto c = r.cell("frame", false)) {
         if (*c == "braced" || *c == "unbraced") out.frame = parse_frame_bracing(*c);
         else r.add(*s.column("frame"), "expected \"braced\" or \"unbraced\", found " + in_quotes(*c));
+    }
+    // "layout": empty or "two-supports" (the default), or "cantilever" (the
+    // start detail is the root, the end cell left empty: a free tip).
+    if (auto c = r.cell("layout", false)) {
+        if (*c == "two-supports" || *c == "cantilever") out.layout = parse_beam_layout(*c);
+        else if (*c == "overhang")
+            r.add(*s.column("layout"), "expected \"two-supports\" or \"cantilever\", found \"overhang\": a beam with an "
+                                       "overhang beyond its end support is not supported yet");
+        else r.add(*s.column("layout"), "expected \"two-supports\" or \"cantilever\", found " + in_quotes(*c));
     }
     return out;
 }
@@ -575,11 +586,17 @@ std::array<std::optional<double>, 2> read_row_line_loads(row_reader& r)
 }
 
 // The catalogue entries named by the start and end cells.
-std::array<const catalogue_detail*, 2> read_row_details(row_reader& r, const detail_catalogue& catalogue)
+// A cantilever names its root's detail at "start"; its "end" cell stays empty (a free tip).
+std::array<const catalogue_detail*, 2> read_row_details(row_reader& r, const detail_catalogue& catalogue, bool cantilever)
 {
     std::array<const catalogue_detail*, 2> details = {nullptr, nullptr};
     const char* end_cols[2] = {"start", "end"};
+    if (cantilever)
+        if (auto e = r.cell("end", false))
+            r.add(*r.s.column("end"), "expected an empty cell: the end of a cantilever is its free tip (the start "
+                                      "detail is the root), found " + in_quotes(*e));
     for (int i = 0; i < 2; ++i) {
+        if (cantilever && i == 1) continue;
         auto d = r.cell(end_cols[i], true);
         if (!d) continue;
         details[i] = catalogue.find(*d);
@@ -672,7 +689,19 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     if (E_default) E = rules.standard == design_standard::en1993_1_8 ? default_E_en : default_E_aisc;
     const std::optional<section> sec = read_row_section(r);
     const auto line_loads = read_row_line_loads(r);
-    const auto details = read_row_details(r, catalogue);
+    const bool cantilever = rules.layout == beam_layout::cantilever;
+    const auto details = read_row_details(r, catalogue, cantilever);
+    // A cantilever's root: a pin is a mechanism; a detail's geometry (the end gap) is not worked out for a root yet.
+    if (cantilever && details[0]) {
+        const catalogue_detail& d = *details[0];
+        if (d.stiffness_min.form != catalogue_stiffness::kind::rigid && d.stiffness_min.value == 0.0)
+            r.add(*s.column("start"), "expected a root detail with stiffness above 0: a cantilever whose root is a pin, "
+                                      "or whose stiffness range reaches 0, is a mechanism, found detail " +
+                                          in_quotes(d.id) + " with a lower bound of 0");
+        if (d.geometry.is_object())
+            r.add(*s.column("start"), "expected a root detail without a geometry: the end gap of a cantilever's root is "
+                                      "not supported yet, found detail " + in_quotes(d.id) + " with one");
+    }
     auto deflection = r.deflection_cell();
     std::string description;
     if (auto d = r.cell("description", false)) description = *d;
@@ -701,11 +730,12 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
         b.loads.push_back(l);
     }
     b.combinations = combinations_of(rules.set);
+    b.layout = rules.layout;
     b.start = joint_for_beam(*details[0], b.EI(), b.span);
-    b.end = joint_for_beam(*details[1], b.EI(), b.span);
+    b.end = cantilever ? joint{} : joint_for_beam(*details[1], b.EI(), b.span);
     // A stiffness given as a multiple of EI/L meets the project file's ceiling here, with this beam's EI/L.
     bool stiffness_ok = true;
-    for (int i = 0; i < 2; ++i) {
+    for (int i = 0; i < (cantilever ? 1 : 2); ++i) {
         const joint& j = i == 0 ? b.start : b.end;
         for (const stiffness& k : {j.range.min, j.range.max})
             if (!k.is_rigid())
@@ -721,7 +751,16 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     if (!stiffness_ok) return out;
     // A stiffness "from-detail" comes from the EN 1993-1-8 components; AISC 360
     // gives none, so a row under it needs the entry's stated range.
-    for (int i = 0; i < 2; ++i)
+    const int ends = cantilever ? 1 : 2;
+    // A cantilever's root takes neither a derived joint nor a law yet (as in a project file).
+    if (cantilever && (details[0]->stiffness_from_detail || details[0]->moment_resistance_from_detail ||
+                       !details[0]->behaviour.is_null())) {
+        r.add(*s.column("start"), "expected a root detail with a stated stiffness and resistance and no moment-rotation "
+                                  "law: \"from-detail\" and laws at a cantilever's root are not supported yet, found "
+                                  "detail " + in_quotes(details[0]->id));
+        stiffness_ok = false;
+    }
+    for (int i = 0; i < ends; ++i)
         if (details[i]->stiffness_from_detail && rules.standard == design_standard::aisc360) {
             r.add(*s.column(i == 0 ? "start" : "end"),
                   "catalogue detail \"" + message_text(details[i]->id) + "\" at " + details[i]->pointer +
@@ -733,7 +772,7 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     if (!stiffness_ok) return out;
     // The entry's law, read under this row's standard (an EN law is refused
     // under AISC 360) and fitted to the stiffness on this beam.
-    for (int i = 0; i < 2; ++i) {
+    for (int i = 0; i < ends; ++i) {
         if (details[i]->behaviour.is_null()) continue;
         joint& j = i == 0 ? b.start : b.end;
         problem_list found;
@@ -746,7 +785,8 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
         if (!found.empty()) stiffness_ok = false;
     }
     if (!stiffness_ok) return out;
-    if (!attach_detail_geometry(b, details, at_line, out)) return out;
+    // A cantilever's root detail has no geometry (refused above): nothing to attach.
+    if (!cantilever && !attach_detail_geometry(b, details, at_line, out)) return out;
     b.deflection = deflection;
     b.pointer = at_line;
     out.input = std::move(b);

@@ -16,8 +16,8 @@ bool finite(double v) { return std::isfinite(v); }
 
 }  // namespace
 
-beam_model::beam_model(double span, double EI, std::vector<load> loads)
-    : span_(span), EI_(EI), loads_(std::move(loads))
+beam_model::beam_model(double span, double EI, std::vector<load> loads, beam_layout layout)
+    : span_(span), EI_(EI), layout_(layout), loads_(std::move(loads))
 {
     if (!finite(span) || span <= 0) throw std::invalid_argument("span must be positive and finite");
     if (!finite(EI) || EI <= 0) throw std::invalid_argument("EI must be positive and finite");
@@ -58,6 +58,30 @@ beam_model::beam_model(double span, double EI, std::vector<load> loads)
         }
     }
 
+    for (const auto& l : loads_) {
+        total_force_ += total_force(l);
+        total_moment_about_start_ += moment_about_start(l);
+        load_scale_ += std::abs(total_force(l)) + std::abs(moment_about_start(l)) / span_;
+    }
+    if (layout_ == beam_layout::cantilever) {
+        // The load state with a rigid root, and a unit root rotation: a
+        // rigid-body turn about the root, w = x (no moment, no shear).
+        const load_state s0 = integrate_cantilever();
+        for (const auto& c : s0.w)
+            for (double v : c)
+                if (!finite(v)) throw internal_error("beam solution is not finite");
+        for (std::size_t e = 0; e < elements_.size(); ++e) {
+            elements_[e].w_load = s0.w[e];
+            elements_[e].w_start = element_polynomial{elements_[e].x0, 1.0, 0, 0, 0, 0};
+            elements_[e].w_end = element_polynomial{};
+        }
+        root_moment_ = total_moment_about_start_;
+        reaction0_ = {s0.reaction_start, 0.0};
+        rot0_ = {0.0, s0.rotation_end};
+        closure_ = {s0.closure_shear, s0.closure_moment, 0, 0, 0, 0};
+        return;
+    }
+
     // The load state, and the states of a unit hogging moment at each end
     // (a unit anticlockwise couple at the start, a unit clockwise couple at the end).
     const load_state s0 = integrate(loads_, 0.0, 0.0);
@@ -79,12 +103,6 @@ beam_model::beam_model(double span, double EI, std::vector<load> loads)
     flex_ = {{{-sa.rotation_start, -sb.rotation_start}, {-sa.rotation_end, -sb.rotation_end}}};
     closure_ = {s0.closure_shear, s0.closure_moment, sa.closure_shear, sa.closure_moment, sb.closure_shear,
                 sb.closure_moment};
-
-    for (const auto& l : loads_) {
-        total_force_ += total_force(l);
-        total_moment_about_start_ += moment_about_start(l);
-        load_scale_ += std::abs(total_force(l)) + std::abs(moment_about_start(l)) / span_;
-    }
 }
 
 std::size_t beam_model::nearest_node(double v) const
@@ -131,29 +149,8 @@ beam_model::load_state beam_model::integrate(const std::vector<load>& loads, dou
 
     // Shear (upward on the left-hand part) and sagging moment just right of a
     // node; a clockwise couple raises the sagging moment by its value.
-    double V = out.reaction_start - P.front();
-    double M = C.front();
-    double slope = 0.0, w = 0.0;
-    for (std::size_t e = 0; e < elements_.size(); ++e) {
-        const auto& el = elements_[e];
-        const double l = el.length;
-        const double qa = loads.empty() ? 0.0 : el.qa, t = loads.empty() ? 0.0 : el.qb - el.qa;
-        // M(s) = M + V s - qa s^2/2 - t s^3/(6 l) and w = w + slope s - (1/EI) double integral of M(s).
-        element_polynomial c{};
-        c[0] = w;
-        c[1] = slope;
-        c[2] = -M / (2 * EI_);
-        c[3] = -V / (6 * EI_);
-        c[4] = qa / (24 * EI_);
-        c[5] = t / (120 * l * EI_);
-        out.w[e] = c;
-        w = polynomial::value(c, l);
-        slope = polynomial::value(polynomial::derivative(c), l);
-        const double V_end = V - qa * l - t * l / 2;
-        const double M_end = M + V * l - qa * l * l / 2 - t * l * l / 6;
-        V = V_end - P[e + 1];
-        M = M_end + C[e + 1];
-    }
+    const element_run run = integrate_elements(P, C, out.reaction_start - P.front(), C.front(), !loads.empty(), out.w);
+    const double V = run.shear, M = run.moment, w = run.w, slope = run.slope;
     // Past the end support nothing may remain: these residuals are the
     // equilibrium of the whole beam, reached by a path independent of statics.
     out.closure_shear = V + out.reaction_end;
@@ -168,9 +165,80 @@ beam_model::load_state beam_model::integrate(const std::vector<load>& loads, dou
     return out;
 }
 
+// EI w'' = -M integrated element by element from w = 0 and slope 0 at the
+// start, with the shear V and the sagging moment M just right of the start,
+// the point forces P and clockwise couples C at the nodes, and the elements'
+// line loads where `with_loads`: on each element M(s) = M + V s - qa s^2/2 -
+// t s^3/(6 l) and w = w + slope s - (1/EI) times the double integral of M(s),
+// exactly. Returns the shear and moment just past the last node, and the
+// deflection and slope there.
+beam_model::element_run beam_model::integrate_elements(const std::vector<double>& P, const std::vector<double>& C,
+                                                      double V, double M, bool with_loads,
+                                                      std::vector<element_polynomial>& w_out) const
+{
+    double slope = 0.0, w = 0.0;
+    for (std::size_t e = 0; e < elements_.size(); ++e) {
+        const auto& el = elements_[e];
+        const double l = el.length;
+        const double qa = with_loads ? el.qa : 0.0, t = with_loads ? el.qb - el.qa : 0.0;
+        element_polynomial c{};
+        c[0] = w;
+        c[1] = slope;
+        c[2] = -M / (2 * EI_);
+        c[3] = -V / (6 * EI_);
+        c[4] = qa / (24 * EI_);
+        c[5] = t / (120 * l * EI_);
+        w_out[e] = c;
+        w = polynomial::value(c, l);
+        slope = polynomial::value(polynomial::derivative(c), l);
+        const double V_end = V - qa * l - t * l / 2;
+        const double M_end = M + V * l - qa * l * l / 2 - t * l * l / 6;
+        V = V_end - P[e + 1];
+        M = M_end + C[e + 1];
+    }
+    return {V, M, w, slope};
+}
+
+// Exact deflection of the cantilever with a rigid root under the beam's loads.
+// Statics gives the root reaction (the total load) and the hogging root moment
+// (the loads' clockwise moment about the root); EI w'' = -M is integrated
+// element by element from w(0) = 0, theta(0) = 0, as in integrate(). What is
+// left past the free tip is the closure: equilibrium by a second path.
+beam_model::load_state beam_model::integrate_cantilever() const
+{
+    load_state out;
+    out.w.resize(elements_.size());
+    double force = 0, moment = 0;
+    for (const auto& l : loads_) {
+        force += total_force(l);
+        moment += moment_about_start(l);
+    }
+    out.reaction_start = force;
+    out.reaction_end = 0.0;
+    std::vector<double> P(nodes_.size(), 0.0), C(nodes_.size(), 0.0);
+    for (const auto& l : loads_) {
+        if (l.kind == load_kind::point) P[nearest_node(l.from)] += l.value;
+        if (l.kind == load_kind::moment) C[nearest_node(l.from)] += l.value;
+    }
+    // Just right of the root: the root's anticlockwise couple (hogging) makes
+    // the sagging moment -M_root; a clockwise couple there raises it.
+    const element_run run = integrate_elements(P, C, out.reaction_start - P.front(), -moment + C.front(), true, out.w);
+    out.closure_shear = run.shear;  // no support at the tip
+    out.closure_moment = run.moment;
+    out.rotation_start = 0.0;
+    out.rotation_end = -run.slope;
+    return out;
+}
+
 void beam_model::end_moments_grid(const std::vector<stiffness>& starts, const std::vector<stiffness>& ends,
                                   std::vector<std::array<double, 2>>& out) const
 {
+    if (layout_ == beam_layout::cantilever) {
+        for (const stiffness& s : starts)
+            if (s.is_pinned()) throw std::invalid_argument("a cantilever with a pinned root is a mechanism");
+        out.assign(starts.size() * ends.size(), {root_moment_, 0.0});
+        return;
+    }
     std::vector<condensed_row> rows_end(ends.size());
     for (std::size_t j = 0; j < ends.size(); ++j) rows_end[j] = row_for(1, ends[j]);
     out.resize(starts.size() * ends.size());
@@ -195,6 +263,14 @@ void beam_model::end_moments_grid(const std::vector<stiffness>& starts, const st
 
 beam_state beam_model::solve(stiffness start, stiffness end) const
 {
+    if (layout_ == beam_layout::cantilever) {
+        if (start.is_pinned()) throw std::invalid_argument("a cantilever with a pinned root is a mechanism");
+        if (!end.is_pinned()) throw std::invalid_argument("a cantilever's tip is free: it takes no end joint");
+        beam_state s = state_for_root_rotation(start.is_rigid() ? 0.0 : root_moment_ / start.value());
+        s.stiffness_start = start;
+        s.stiffness_end = end;
+        return s;
+    }
     const auto m = end_moments(start, end);
     beam_state s = state_for_end_moments(m[0], m[1]);
     s.stiffness_start = start;
@@ -219,14 +295,44 @@ std::size_t beam_model::element_index(double x) const
     return static_cast<std::size_t>(std::clamp<std::ptrdiff_t>(i, 0, static_cast<std::ptrdiff_t>(elements_.size()) - 1));
 }
 
+std::array<double, 2> beam_model::coefficients(const beam_state& s) const
+{
+    if (layout_ == beam_layout::cantilever) return {s.rotation_start, 0.0};
+    return {s.moment_start, s.moment_end};
+}
+
+double beam_model::deflection_at(double x, const beam_state& s) const
+{
+    const auto k = coefficients(s);
+    const element& e = elements_[element_index(x)];
+    return polynomial::value(combined(e, k[0], k[1]), x - e.x0);
+}
+
+double beam_model::moment_at(double x, const beam_state& s) const
+{
+    const auto k = coefficients(s);
+    const element& e = elements_[element_index(x)];
+    return -EI_ * polynomial::value(polynomial::derivative(polynomial::derivative(combined(e, k[0], k[1]))), x - e.x0);
+}
+
+double beam_model::shear_at(double x, const beam_state& s) const
+{
+    const auto k = coefficients(s);
+    const element& e = elements_[element_index(x)];
+    const auto w3 = polynomial::derivative(polynomial::derivative(polynomial::derivative(combined(e, k[0], k[1]))));
+    return -EI_ * polynomial::value(w3, x - e.x0);
+}
+
 double beam_model::deflection_at(double x, double m_start, double m_end) const
 {
+    if (layout_ == beam_layout::cantilever) throw std::logic_error("deflection_at(x, moments) on a cantilever");
     const element& e = elements_[element_index(x)];
     return polynomial::value(combined(e, m_start, m_end), x - e.x0);
 }
 
 double beam_model::moment_at(double x, double m_start, double m_end) const
 {
+    if (layout_ == beam_layout::cantilever) throw std::logic_error("moment_at(x, moments) on a cantilever");
     const element& e = elements_[element_index(x)];
     const auto w2 = polynomial::derivative(polynomial::derivative(combined(e, m_start, m_end)));
     return -EI_ * polynomial::value(w2, x - e.x0);
@@ -234,6 +340,7 @@ double beam_model::moment_at(double x, double m_start, double m_end) const
 
 double beam_model::shear_at(double x, double m_start, double m_end) const
 {
+    if (layout_ == beam_layout::cantilever) throw std::logic_error("shear_at(x, moments) on a cantilever");
     const element& e = elements_[element_index(x)];
     const auto w3 = polynomial::derivative(polynomial::derivative(polynomial::derivative(combined(e, m_start, m_end))));
     return -EI_ * polynomial::value(w3, x - e.x0);
@@ -241,6 +348,7 @@ double beam_model::shear_at(double x, double m_start, double m_end) const
 
 beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
 {
+    if (layout_ == beam_layout::cantilever) throw std::logic_error("state_for_end_moments on a cantilever");
     if (!finite(m_start) || !finite(m_end)) throw internal_error("end moments are not finite");
     beam_state s;
     s.moment_start = m_start;
@@ -249,6 +357,28 @@ beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
     s.reaction_end = reaction0_[1] + m_start * reaction_per_start_[1] + m_end * reaction_per_end_[1];
     s.rotation_start = rot0_[0] - flex_[0][0] * m_start - flex_[0][1] * m_end;
     s.rotation_end = rot0_[1] - flex_[1][0] * m_start - flex_[1][1] * m_end;
+    return fill_extremes(s, m_start, m_end);
+}
+
+beam_state beam_model::state_for_root_rotation(double theta) const
+{
+    if (layout_ != beam_layout::cantilever) throw std::logic_error("state_for_root_rotation on a beam on two supports");
+    if (!finite(theta)) throw internal_error("root rotation is not finite");
+    beam_state s;
+    s.moment_start = root_moment_;
+    s.moment_end = 0.0;
+    s.reaction_start = reaction0_[0];
+    s.reaction_end = 0.0;
+    s.rotation_start = theta;
+    // -theta(L): the rigid-root tip slope plus the root's turn.
+    s.rotation_end = rot0_[1] - theta;
+    return fill_extremes(s, theta, 0.0);
+}
+
+// The span extremes of the state whose deflection is w_load + a w_start + b w_end.
+beam_state beam_model::fill_extremes(beam_state s, double a, double b) const
+{
+    const double m_start = s.moment_start, m_end = s.moment_end;
 
     bool first = true;
     bool first_w = true;
@@ -257,7 +387,7 @@ beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
     // two zero-moment ends of a pinned beam under uplift).
     const double moment_tol = 1e-12 * (load_scale_ * span_ + std::abs(m_start) + std::abs(m_end));
     for (const auto& e : elements_) {
-        const auto w = combined(e, m_start, m_end);
+        const auto w = combined(e, a, b);
         const auto w1 = polynomial::derivative(w);
         const auto w2 = polynomial::derivative(w1);
         const auto w3 = polynomial::derivative(w2);
@@ -296,19 +426,20 @@ beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
         s.max_hogging_moment = 0.0;
         s.max_hogging_at = 0.0;
     }
-    check_equilibrium(s);
+    check_equilibrium(s, a, b);
     return s;
 }
 
-void beam_model::check_equilibrium(const beam_state& s) const
+void beam_model::check_equilibrium(const beam_state& s, double a, double b) const
 {
     const double vertical = s.reaction_start + s.reaction_end - total_force_;
     // Clockwise moments about the start: loads, the end reaction, the joints'
     // couples on the beam (anticlockwise hogging at the start, clockwise at the end).
     const double rotational = total_moment_about_start_ - s.reaction_end * span_ - s.moment_start + s.moment_end;
     // The shear and moment left over past the end support after integrating
-    // along the beam: equilibrium reached by the second, independent path.
-    const double a = s.moment_start, b = s.moment_end;
+    // along the beam: equilibrium reached by the second, independent path
+    // (a and b scale the unit states: the end moments, or a cantilever's root
+    // rotation, whose rigid-body turn leaves nothing past the tip).
     const double shear_left = closure_[0] + a * closure_[2] + b * closure_[4];
     const double moment_left = closure_[1] + a * closure_[3] + b * closure_[5];
     const double scale = load_scale_ + std::abs(s.reaction_start) + std::abs(s.reaction_end) +

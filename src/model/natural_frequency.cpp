@@ -104,8 +104,12 @@ double lowest_by_inverse_iteration(const Eigen::MatrixXd& K, const Eigen::Matrix
 
 }  // namespace
 
-double first_natural_frequency(double span, double EI, const std::vector<load>& loads, stiffness start, stiffness end)
+double first_natural_frequency(double span, double EI, const std::vector<load>& loads, stiffness start, stiffness end,
+                               beam_layout layout)
 {
+    const bool cantilever = layout == beam_layout::cantilever;
+    if (cantilever && (start.is_pinned() || !end.is_pinned()))
+        throw std::invalid_argument("a cantilever needs a root with stiffness and a free tip");
     if (!(std::isfinite(span) && span > 0) || !(std::isfinite(EI) && EI > 0))
         throw std::invalid_argument("span and EI must be finite and > 0");
     for (const load& l : loads)
@@ -150,7 +154,8 @@ double first_natural_frequency(double span, double EI, const std::vector<load>& 
 
     std::vector<Eigen::Index> kept;
     for (Eigen::Index d = 0; d < full; ++d) {
-        if (d == 0 || d == full - 2) continue;  // end deflections held by the supports
+        if (d == 0) continue;                    // the start's deflection held by its support
+        if (d == full - 2 && !cantilever) continue;  // the end's too, unless it is a free tip
         if (d == rot_start && start.is_rigid()) continue;
         if (d == rot_end && end.is_rigid()) continue;
         kept.push_back(d);

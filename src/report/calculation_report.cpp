@@ -12,6 +12,7 @@
 #include "pinproof/joints/nonlinear_analysis.hpp"
 #include "pinproof/checks/governing_check.hpp"
 #include "pinproof/report/beam_elevation.hpp"
+#include "pinproof/report/cantilever_elevation.hpp"
 #include "pinproof/report/beam_line_chart.hpp"
 #include "pinproof/report/report_style.hpp"
 #include "pinproof/report/detail_drawing.hpp"
@@ -193,7 +194,7 @@ private:
     std::string derived_joint_block(const joint& jt, const derived_joint& d) const;
     void connection_inputs(const beam& b);
     void combination_block(const beam& b, const combination_result& r);
-    void results_table(const combination_result& r);
+    void results_table(const beam& b, const combination_result& r);
     void frequency_rows(const combination_result& r);
     void span_diagrams(const beam& b, const combination_result& r);
     void sweep_chart(const beam& b);
@@ -281,13 +282,21 @@ void report_writer::title_block()
        << "</table>\n";
     const auto holding = std::count_if(a_.beams.begin(), a_.beams.end(), [](const beam_assessment& b) { return b.holds(); });
     const bool all = a_.all_hold();
+    // The assumption the verdict speaks of: pinned ends for beams on two
+    // supports, a fixed root for cantilevers, both where the project has both.
+    std::size_t cantilevers = 0;
+    for (const auto& b : a_.beams) cantilevers += b.input && b.input->layout == beam_layout::cantilever ? 1 : 0;
+    const std::string assumption = cantilevers == 0 ? "the simple-support (pinned) assumption"
+                                   : cantilevers == a_.beams.size()
+                                       ? "the fixed-root assumption"
+                                       : "the assumed supports (pinned ends; fixed roots of the cantilevers)";
     o_ << "<div class=\"verdict " << (all ? "pass" : "fail") << "\" id=\"overall-verdict\">Verdict: ";
     if (all)
-        o_ << "the simple-support (pinned) assumption HOLDS for every beam (" << a_.beams.size() << " of "
-           << a_.beams.size() << ").";
+        o_ << assumption << (cantilevers == 0 || cantilevers == a_.beams.size() ? " HOLDS" : " HOLD") << " for every beam ("
+           << a_.beams.size() << " of " << a_.beams.size() << ").";
     else
-        o_ << "the simple-support (pinned) assumption DOES NOT HOLD for " << a_.beams.size() - holding << " of "
-           << a_.beams.size() << " beams.";
+        o_ << assumption << (cantilevers == 0 || cantilevers == a_.beams.size() ? " DOES NOT HOLD" : " DO NOT HOLD")
+           << " for " << a_.beams.size() - holding << " of " << a_.beams.size() << " beams.";
     // The summary sheet: per beam its verdict, the check that governs (the
     // largest utilisation, or a failure: checks/governing_check.hpp), the
     // classes of its joints over their stiffness ranges, and what fails.
@@ -304,10 +313,13 @@ void report_writer::title_block()
             governing = g->id + (u ? " (" + format_number(*u, 3) + ")" : std::string());
         }
         std::string classes;
-        for (const auto* j : {&b.start, &b.end})
-            classes += (classes.empty() ? "" : "; ") + to_string(j->end) + ": " +
+        const bool cantilever = b.input && b.input->layout == beam_layout::cantilever;
+        for (const auto* j : {&b.start, &b.end}) {
+            if (cantilever && j == &b.end) continue;  // a free tip has no joint
+            classes += (classes.empty() ? "" : "; ") + (cantilever ? std::string("root") : to_string(j->end)) + ": " +
                        (en ? to_string(j->en_lower) + " .. " + to_string(j->en_upper)
                            : to_string(j->aisc_lower) + " .. " + to_string(j->aisc_upper));
+        }
         o_ << "<tr><td class=\"id\">" << esc(b.id) << "</td><td class=\"status " << (b.holds() ? "pass\">HOLDS" : "fail\">DOES NOT HOLD")
            << "</td><td><code>" << esc(governing) << "</code></td><td>" << esc(classes) << "</td><td>"
            << (failed.empty() ? "none" : esc(failed)) << "</td></tr>\n";
@@ -342,8 +354,17 @@ void report_writer::method()
           "linearly from M<sub>F</sub> (this joint rigid) at zero rotation to zero at &theta;<sub>s</sub> (this joint "
           "pinned). A joint carries M = S &theta;; where the lines meet is the analysed state.</li>\n"
        << "<li>The verdict for a beam holds when no check fails. A warning is information to pass on; it does not "
-          "change the verdict.</li>\n"
-       << "</ul>\n</section>\n";
+          "change the verdict.</li>\n";
+    if (std::any_of(p_.beams.begin(), p_.beams.end(), [](const beam& b) { return b.layout == beam_layout::cantilever; }))
+        o_ << "<li>A cantilever has one support, its root at the start, restrained by the root joint's spring; its "
+              "end is a free tip. It is statically determinate: the root moment and reaction follow from statics, and "
+              "a spring root of stiffness S turns through &theta; = M<sub>root</sub> / S, which adds &theta; x to "
+              "the deflection of the cantilever with a rigid root. The ideal bound is the rigid root; a pinned root "
+              "is a mechanism and is not shown. The fixed root holds where the root's least &kappa; = S L / EI "
+              "(L the cantilever's length) reaches the rigid boundary of the standard and the root's flexibility "
+              "raises the deflection by no more than the root-flexibility limit (docs/method/layouts.md). Its tip "
+              "rotation is -dw/dx at the tip, negative as the tip drops under gravity.</li>\n";
+    o_ << "</ul>\n</section>\n";
 }
 
 void report_writer::inputs(const beam& b)
@@ -351,7 +372,13 @@ void report_writer::inputs(const beam& b)
     o_ << "<h3>Inputs</h3>\n<table class=\"kv\">\n"
        << "<tr><th>Description</th><td>" << esc(b.description) << "</td></tr>\n"
        << "<tr><th>Section</th><td>" << esc(b.sec.name) << "</td></tr>\n"
-       << "<tr><th>Span L</th><td>" << u_.pos(b.span) << "</td></tr>\n"
+       << (b.layout == beam_layout::cantilever
+               ? "<tr><th>Layout</th><td>cantilever: root at the start, free tip at the end</td></tr>\n"
+                 "<tr><th>Length L (root to tip)</th><td>" + u_.pos(b.span) + "</td></tr>\n" +
+                     "<tr><th>Root flexibility limit</th><td>" + format_number(100 * b.root_flexibility_limit, 3) +
+                     " % of the rigid-root deflection" + (b.root_flexibility_is_default ? " (the default)" : "") +
+                     "</td></tr>\n"
+               : "<tr><th>Span L</th><td>" + u_.pos(b.span) + "</td></tr>\n")
        << "<tr><th>Young's modulus E</th><td>" << u_.q(b.E, dims::pressure)
        << (b.E_is_default ? " (not given: the standard's value)" : "") << "</td></tr>\n"
        << "<tr><th>Second moment of area I</th><td>" << u_.q(b.sec.I, dims::second_moment) << "</td></tr>\n"
@@ -399,9 +426,14 @@ void report_writer::joints(const beam& b, const beam_assessment& ba)
     o_ << "<h4>Joints</h4>\n<table>\n<thead><tr><th>End</th><th>S<sub>min</sub> .. S<sub>max</sub></th>"
           "<th>&kappa; = S L / EI</th><th>Fixity r</th><th>Class (lower .. upper bound)</th>"
           "<th>Moment resistance</th></tr></thead>\n";
+    const bool cantilever = b.layout == beam_layout::cantilever;
     for (const auto* j : {&ba.start, &ba.end}) {
+        if (cantilever && j->end == beam_end::end) {
+            o_ << "<tr><td>end</td><td colspan=\"5\">free tip: no joint</td></tr>\n";
+            continue;
+        }
         const auto& mr = b.at(j->end).moment_resistance;
-        o_ << "<tr><td>" << to_string(j->end) << "</td><td>" << esc(u_.stiff(j->range.min)) << " .. "
+        o_ << "<tr><td>" << (cantilever ? std::string("start (root)") : to_string(j->end)) << "</td><td>" << esc(u_.stiff(j->range.min)) << " .. "
            << esc(u_.stiff(j->range.max)) << "</td><td class=\"num\">" << ratio(j->ratio_lower) << " .. "
            << ratio(j->ratio_upper) << "</td><td class=\"num\">" << format_number(j->fixity_lower, 3) << " .. "
            << format_number(j->fixity_upper, 3) << "</td><td>"
@@ -503,17 +535,21 @@ void report_writer::combination_block(const beam& b, const combination_result& r
 {
     o_ << "<h3>Combination " << esc(r.comb.name) << " (" << esc(to_string(r.comb.use)) << "): "
        << esc(combination_text(r.comb)) << "</h3>\n";
-    results_table(r);
+    results_table(b, r);
     span_diagrams(b, r);
 }
 
 // Each result with ideal pins, over the stiffness range, and with fixed ends.
-void report_writer::results_table(const combination_result& r)
+// A cantilever: over the range and with a rigid root (its pinned bound is a mechanism).
+void report_writer::results_table(const beam& b, const combination_result& r)
 {
-    o_ << "<table>\n<thead><tr><th>Result</th><th>Unit</th><th>Pinned</th><th>Range min</th><th>Range max</th>"
-          "<th>Fixed</th></tr></thead>\n";
+    const bool cantilever = b.layout == beam_layout::cantilever;
+    o_ << "<table>\n<thead><tr><th>Result</th><th>Unit</th>" << (cantilever ? "" : "<th>Pinned</th>")
+       << "<th>Range min</th><th>Range max</th><th>" << (cantilever ? "Rigid root" : "Fixed") << "</th></tr></thead>\n";
     const auto& f = result_fields();
     for (std::size_t i = 0; i < f.size(); ++i) {
+        // A free tip has neither reaction nor moment: their rows are left out.
+        if (cantilever && (f[i].member == &beam_state::reaction_end || f[i].member == &beam_state::moment_end)) continue;
         const bool position = f[i].member == &beam_state::max_sagging_at || f[i].member == &beam_state::max_hogging_at ||
                               f[i].member == &beam_state::max_deflection_at;
         auto cell = [&](double v) {
@@ -521,8 +557,9 @@ void report_writer::results_table(const combination_result& r)
         };
         std::string label = f[i].label;
         while (!label.empty() && label.front() == ' ') label.erase(0, 1);
-        o_ << "<tr><td>" << esc(label) << "</td><td>" << esc(position ? u_.pos_unit() : u_.sym(f[i].dim))
-           << "</td><td class=\"num\">" << cell(r.pinned.*(f[i].member)) << "</td><td class=\"num\">"
+        o_ << "<tr><td>" << esc(label) << "</td><td>" << esc(position ? u_.pos_unit() : u_.sym(f[i].dim)) << "</td>"
+           << (r.pinned ? "<td class=\"num\">" + cell((*r.pinned).*(f[i].member)) + "</td>" : std::string())
+           << "<td class=\"num\">"
            << cell(r.envelope.ranges[i].min) << "</td><td class=\"num\">" << cell(r.envelope.ranges[i].max)
            << "</td><td class=\"num\">" << cell(r.fixed.*(f[i].member)) << "</td></tr>\n";
     }
@@ -537,17 +574,20 @@ void report_writer::frequency_rows(const combination_result& r)
     const auto& fr = *r.frequency;
     const auto row = [&](const std::string& label, const std::string (&cells)[4]) {
         o_ << "<tr><td>" << esc(label) << "</td><td>" << esc(u_.sym(dims::frequency)) << "</td>";
-        for (const auto& c : cells) o_ << "<td class=\"num\">" << c << "</td>";
+        for (std::size_t i = r.pinned ? 0 : 1; i < 4; ++i) o_ << "<td class=\"num\">" << cells[i] << "</td>";
         o_ << "</tr>\n";
     };
-    const std::string exact[4] = {u_.num(fr.pinned, dims::frequency), u_.num(fr.range.min, dims::frequency),
-                                  u_.num(fr.range.max, dims::frequency), u_.num(fr.fixed, dims::frequency)};
+    const std::string exact[4] = {fr.pinned ? u_.num(*fr.pinned, dims::frequency) : std::string(),
+                                  u_.num(fr.range.min, dims::frequency), u_.num(fr.range.max, dims::frequency),
+                                  u_.num(fr.fixed, dims::frequency)};
     row("first natural frequency", exact);
+    // The estimate belongs to a beam on two supports (natural_frequency.hpp).
+    if (!r.pinned) return;
     const auto estimate = [](double d) {
         return d > 0 ? format_number(frequency_from_deflection(d), 4) : std::string("-");
     };
     const auto& deflection = r.envelope.of(&beam_state::max_deflection);
-    const std::string est[4] = {estimate(r.pinned.max_deflection), estimate(deflection.max), estimate(deflection.min),
+    const std::string est[4] = {estimate(r.pinned->max_deflection), estimate(deflection.max), estimate(deflection.min),
                                 estimate(r.fixed.max_deflection)};
     row("estimate 18/sqrt(delta mm)", est);
 }
@@ -555,7 +595,8 @@ void report_writer::frequency_rows(const combination_result& r)
 // Diagrams, pointwise over the span, from the same model the assessment used.
 void report_writer::span_diagrams(const beam& b, const combination_result& r)
 {
-    const beam_model model(b.span, b.EI(), factored_loads(b.loads, r.comb));
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, r.comb), b.layout);
+    const bool cantilever = b.layout == beam_layout::cantilever;
     std::vector<double> xs;
     const int n = 160;
     for (int i = 0; i <= n; ++i) xs.push_back(b.span * i / n);
@@ -574,22 +615,22 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
         const dimension d = kind == diagram::moment ? dims::moment : kind == diagram::shear ? dims::force : dims::length;
         auto value = [&](double x, const beam_state& s) {
             switch (kind) {
-            case diagram::moment: return model.moment_at(x, s.moment_start, s.moment_end);
-            case diagram::shear: return model.shear_at(x, s.moment_start, s.moment_end);
+            case diagram::moment: return model.moment_at(x, s);
+            case diagram::shear: return model.shear_at(x, s);
             case diagram::deflection: break;
             }
-            return model.deflection_at(x, s.moment_start, s.moment_end);
+            return model.deflection_at(x, s);
         };
         // Deflection is drawn downward, as the beam deflects (sign_conventions.hpp).
         const double drawn = kind == diagram::deflection ? -1.0 : 1.0;
         const bool w = kind == diagram::deflection;
         chart_series pinned{"pinned ends", {}, chart_colour::pinned, true};
-        chart_series fixed{"fixed ends", {}, chart_colour::fixed, true};
+        chart_series fixed{cantilever ? "rigid root" : "fixed ends", {}, chart_colour::fixed, true};
         chart_series lo{w ? "range envelope, least deflection" : "range envelope, min", {}, chart_colour::range_lower, false};
         chart_series hi{w ? "range envelope, most deflection" : "range envelope, max", {}, chart_colour::range_upper, false};
         for (double x : kind == diagram::shear ? xs_shear : xs) {
             const double px = u_.pos_in(x);
-            pinned.points.emplace_back(px, drawn * u_.in(value(x, r.pinned), d));
+            if (r.pinned) pinned.points.emplace_back(px, drawn * u_.in(value(x, *r.pinned), d));
             fixed.points.emplace_back(px, drawn * u_.in(value(x, r.fixed), d));
             double mn = 0, mx = 0;
             for (std::size_t k = 0; k < r.corners.size(); ++k) {
@@ -601,16 +642,19 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
             hi.points.emplace_back(px, drawn * u_.in(mx, d));
         }
         line_chart c;
-        c.x.label = "x from the start support (" + u_.pos_unit() + ")";
+        c.x.label = (cantilever ? "x from the root, tip at the right (" : "x from the start support (") + u_.pos_unit() + ")";
         c.x.min = 0.0;
         c.x.max = u_.pos_in(b.span);
         c.series = {pinned, fixed, lo, hi};
+        if (cantilever) c.series = {fixed, lo, hi};
         c.width = 760;
         c.height = 380;
         return c;
     };
     const std::string envelope =
-        ": ideal pinned and fixed ends, and the pointwise envelope over the four corners of the stiffness range.";
+        cantilever ? ": the rigid root, and the pointwise envelope over the root's stiffness range (the tip is free, "
+                     "at the right)."
+                   : ": ideal pinned and fixed ends, and the pointwise envelope over the four corners of the stiffness range.";
     // A strength combination's moments and shears act on the members; a
     // service combination's deflection is what is checked.
     if (r.comb.use == limit_state::strength) {
@@ -623,8 +667,11 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
         v.y.label = "V (" + u_.sym(dims::force) + "), V = dM/dx";
         figure("shear", to_svg(v),
                "Shear force along the span, combination " + r.comb.name +
-                   " (V = dM/dx: the start reaction at the start, minus the end reaction at the end; a point load is "
-                   "a step)" + envelope);
+                   (cantilever ? std::string(" (V = dM/dx: the root reaction at the root, zero at the free tip; a point "
+                                             "load is a step)")
+                               : std::string(" (V = dM/dx: the start reaction at the start, minus the end reaction at "
+                                             "the end; a point load is a step)")) +
+                   envelope);
         return;
     }
     line_chart w = curves(diagram::deflection);
@@ -636,7 +683,8 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
 
 void report_writer::sweep_chart(const beam& b)
 {
-    if (b.combinations.empty()) return;
+    // The sweep asks when a pinned end stops being one: not worked out for a cantilever.
+    if (b.combinations.empty() || b.layout == beam_layout::cantilever) return;
     sweep_settings settings;
     settings.combination = b.combinations.front().name;
     const sweep_result s = sweep_beam(p_, b, settings);
@@ -659,7 +707,8 @@ void report_writer::beam_lines(const beam& b)
     for (const auto& x : b.combinations)
         if (!c && x.use == limit_state::strength) c = &x;
     if (!c && !b.combinations.empty()) c = &b.combinations.front();
-    if (c) {
+    // A cantilever's root moment is fixed by statics: its beam line would be a horizontal line.
+    if (c && b.layout != beam_layout::cantilever) {
         o_ << "<h3>Beam lines</h3>\n";
         for (beam_end e : {beam_end::start, beam_end::end}) {
             if (b.at(e).behaviour) law_beam_line_chart(b, e);
@@ -776,8 +825,11 @@ void report_writer::checks(const beam_assessment& ba)
 void report_writer::verdict(const beam_assessment& ba)
 {
     o_ << "<div class=\"verdict " << (ba.holds() ? "pass" : "fail") << "\">Verdict for beam " << esc(ba.id) << ": ";
+    const std::string assumption = ba.input->layout == beam_layout::cantilever
+                                       ? "the fixed-root assumption"
+                                       : "the simple-support (pinned) assumption";
     if (ba.holds()) {
-        o_ << "the simple-support (pinned) assumption HOLDS; no check fails.";
+        o_ << assumption << " HOLDS; no check fails.";
     } else {
         std::string ids;
         int n = 0;
@@ -786,7 +838,7 @@ void report_writer::verdict(const beam_assessment& ba)
                 ids += (ids.empty() ? "" : ", ") + c.id;
                 ++n;
             }
-        o_ << "the simple-support (pinned) assumption DOES NOT HOLD. " << n << " check" << (n == 1 ? " fails" : "s fail")
+        o_ << assumption << " DOES NOT HOLD. " << n << " check" << (n == 1 ? " fails" : "s fail")
            << ": " << esc(ids) << ".";
     }
     o_ << "</div>\n";
@@ -798,10 +850,16 @@ void report_writer::beam_section(const beam_assessment& ba)
     o_ << "<section class=\"beam\" id=\"beam-" << ++beams_ << "\">\n<h2>Beam " << esc(b.id) << "</h2>\n";
     verdict(ba);  // first, as a checker reads it; the checks below give the reasons
     inputs(b);
-    figure("elevation", beam_elevation_svg(b, p_.units),
-           "Beam " + b.id + " as analysed: each end drawn as its idealisation (pin, roller, rotational spring with "
-           "its stiffness range, or fixed), the unfactored loads of every case drawn to scale within their kind, and "
-           "the span and load positions.");
+    if (b.layout == beam_layout::cantilever)
+        figure("elevation", cantilever_elevation_svg(b, p_.units),
+               "Elevation of cantilever " + b.id +
+                   ": the root joint's spring at the supporting member on the left, the free tip on the right, the "
+                   "unfactored loads by case (not to scale vertically).");
+    else
+        figure("elevation", beam_elevation_svg(b, p_.units),
+               "Beam " + b.id + " as analysed: each end drawn as its idealisation (pin, roller, rotational spring "
+               "with its stiffness range, or fixed), the unfactored loads of every case drawn to scale within their "
+               "kind, and the span and load positions.");
     joints(b, ba);
     connection_inputs(b);
     derived_joints(b);

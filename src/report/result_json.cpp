@@ -209,6 +209,10 @@ json to_json(const beam_assessment& a)
     const beam& b = *a.input;
     json out;
     out["id"] = a.id;
+    // Written for a layout other than the default only, so that the result
+    // of a beam on two supports reads as it always has (absent: "two-supports").
+    const bool cantilever = b.layout == beam_layout::cantilever;
+    if (cantilever) out["layout"] = to_string(b.layout);
     out["verdict"] = a.holds() ? "holds" : "does-not-hold";
     out["span"] = number(b.span);
     out["E"] = number(b.E);
@@ -225,14 +229,16 @@ json to_json(const beam_assessment& a)
                           {"message", c.message}});
     }
     out["checks"] = checks;
-    out["joints"] = {{"start", joint_json(a.start, b)}, {"end", joint_json(a.end, b)}};
+    // A cantilever's tip is free: it has no end joint.
+    out["joints"] = {{"start", joint_json(a.start, b)}, {"end", cantilever ? json(nullptr) : joint_json(a.end, b)}};
     json combos = json::array();
     for (const auto& r : a.combinations) {
         json c;
         c["name"] = r.comb.name;
         c["use"] = to_string(r.comb.use);
         c["factors"] = r.comb.factors;
-        c["pinned"] = to_json(r.pinned);
+        // A cantilever's pinned bound is a mechanism: null.
+        c["pinned"] = r.pinned ? to_json(*r.pinned) : json(nullptr);
         c["fixed"] = to_json(r.fixed);
         json corners = json::array();
         for (const auto& s : r.corners) corners.push_back(to_json(s));
@@ -242,7 +248,7 @@ json to_json(const beam_assessment& a)
             env[f[i].key] = {{"min", number(r.envelope.ranges[i].min)}, {"max", number(r.envelope.ranges[i].max)}};
         // A vibration combination: the first natural frequency (Hz) of each state.
         if (r.frequency) {
-            c["pinned"]["frequency"] = number(r.frequency->pinned);
+            if (r.frequency->pinned) c["pinned"]["frequency"] = number(*r.frequency->pinned);
             c["fixed"]["frequency"] = number(r.frequency->fixed);
             for (std::size_t i = 0; i < corners.size(); ++i) corners[i]["frequency"] = number(r.frequency->corners.at(i));
             env["frequency"] = {{"min", number(r.frequency->range.min)}, {"max", number(r.frequency->range.max)}};
@@ -271,8 +277,12 @@ json to_json(const project_assessment& a)
     for (const auto& b : a.beams) {
         beams.push_back(to_json(b));
         const beam& in = *b.input;
+        // Thresholds and probabilities ask when a pinned end stops being one:
+        // not worked out for a cantilever (null).
         beams.back()["sensitivity"] =
-            sensitivity_json(*a.input, in, {in.start.distribution, in.end.distribution, in.stiffness_correlation});
+            in.layout == beam_layout::cantilever
+                ? nlohmann::json(nullptr)
+                : sensitivity_json(*a.input, in, {in.start.distribution, in.end.distribution, in.stiffness_correlation});
     }
     out["beams"] = beams;
     out["caution"] = "Results support, and do not replace, the judgement of a qualified engineer; local codes and "

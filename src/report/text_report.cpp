@@ -88,7 +88,9 @@ void beam_heading(std::ostringstream& o, const project& p, const beam_assessment
     const units_view u{p.units};
     o << std::string(100, '=') << "\n";
     o << "Beam " << b.id << (b.description.empty() ? "" : "  " + b.description) << "\n";
-    o << "  " << b.sec.name << ", span " << u.span(b.span) << ", E = " << u.num(b.E, dims::pressure) << " "
+    const bool cantilever = b.layout == beam_layout::cantilever;
+    if (cantilever) o << "  Cantilever: root at the start (its joint the only restraint), free tip at the end\n";
+    o << "  " << b.sec.name << (cantilever ? ", length " : ", span ") << u.span(b.span) << ", E = " << u.num(b.E, dims::pressure) << " "
       << u.unit(dims::pressure) << ", I = " << u.num(b.sec.I, dims::second_moment) << " "
       << u.unit(dims::second_moment) << ", depth " << u.num(b.sec.depth, dims::length) << " "
       << u.unit(dims::length) << "\n";
@@ -112,8 +114,13 @@ void joint_table(std::ostringstream& o, const project& p, const beam_assessment&
     const units_view u{p.units};
     o << "\n  Joints (stiffness in " << u.unit(dims::rotational_stiffness) << ")\n";
     o << "    " << pad("end", 7) << pad("S min .. S max", 22) << pad("S*L/EI", 18) << pad("fixity r", 18) << "class (lower .. upper bound)\n";
+    const bool cantilever = b.layout == beam_layout::cantilever;
     for (const auto* j : {&a.start, &a.end}) {
-        o << "    " << pad(to_string(j->end), 7) << pad(u.stiff(j->range.min) + " .. " + u.stiff(j->range.max), 22)
+        if (cantilever && j->end == beam_end::end) {
+            o << "    " << pad("end", 7) << "free tip: no joint\n";
+            continue;
+        }
+        o << "    " << pad(cantilever ? std::string("root") : to_string(j->end), 7) << pad(u.stiff(j->range.min) + " .. " + u.stiff(j->range.max), 22)
           << pad(ratio_text(j->ratio_lower) + " .. " + ratio_text(j->ratio_upper), 18)
           << pad(format_number(j->fixity_lower, 3) + " .. " + format_number(j->fixity_upper, 3), 18)
           << "EN 1993-1-8 (" << to_string(p.frame) << "): " << to_string(j->en_lower) << " .. " << to_string(j->en_upper)
@@ -253,19 +260,25 @@ std::string estimate_cell(double deflection)
     return deflection > 0 ? format_number(frequency_from_deflection(deflection), 4) : std::string("-");
 }
 
-// Each combination: every result pinned, over the range and fixed.
+// Each combination: every result pinned, over the range and fixed (a
+// cantilever: over the range and with a rigid root; its pinned bound is a
+// mechanism and has no column).
 void combination_tables(std::ostringstream& o, const project& p, const beam_assessment& a)
 {
     const units_view u{p.units};
+    const bool cantilever = a.input->layout == beam_layout::cantilever;
     for (const auto& r : a.combinations) {
         o << "\n  Combination " << r.comb.name << " (" << to_string(r.comb.use) << "): " << combination_text(r.comb)
           << "\n";
-        o << "    " << pad("result", 32) << pad("unit", 10) << rpad("pinned", 11) << rpad("range min", 12)
-          << rpad("range max", 12) << rpad("fixed", 11) << "\n";
+        o << "    " << pad("result", 32) << pad("unit", 10) << (cantilever ? "" : rpad("pinned", 11)) << rpad("range min", 12)
+          << rpad("range max", 12) << rpad(cantilever ? "rigid root" : "fixed", 11) << "\n";
         const auto& f = result_fields();
         for (std::size_t i = 0; i < f.size(); ++i) {
+            // A free tip has neither reaction nor moment: their rows are left out.
+            if (cantilever && (f[i].member == &beam_state::reaction_end || f[i].member == &beam_state::moment_end))
+                continue;
             o << "    " << pad(f[i].label, 32) << pad(units_view::is_position(f[i]) ? u.pos_unit() : u.unit(f[i].dim), 10)
-              << rpad(u.cell(r.pinned.*(f[i].member), f[i]), 11)
+              << (r.pinned ? rpad(u.cell(r.pinned.value().*(f[i].member), f[i]), 11) : std::string())
               << rpad(u.cell(r.envelope.ranges[i].min, f[i]), 12)
               << rpad(u.cell(r.envelope.ranges[i].max, f[i]), 12)
               << rpad(u.cell(r.fixed.*(f[i].member), f[i]), 11) << "\n";
@@ -273,10 +286,13 @@ void combination_tables(std::ostringstream& o, const project& p, const beam_asse
         if (r.frequency) {
             const auto& fr = *r.frequency;
             o << "    " << pad("first natural frequency", 32) << pad(u.unit(dims::frequency), 10)
-              << rpad(u.num(fr.pinned, dims::frequency), 11) << rpad(u.num(fr.range.min, dims::frequency), 12)
+              << (fr.pinned ? rpad(u.num(*fr.pinned, dims::frequency), 11) : std::string())
+              << rpad(u.num(fr.range.min, dims::frequency), 12)
               << rpad(u.num(fr.range.max, dims::frequency), 12) << rpad(u.num(fr.fixed, dims::frequency), 11) << "\n";
+            // The estimate is for a beam on two supports (natural_frequency.hpp).
+            if (!r.pinned) continue;
             o << "    " << pad("  estimate 18/sqrt(delta mm)", 32) << pad(u.unit(dims::frequency), 10)
-              << rpad(estimate_cell(r.pinned.max_deflection), 11)
+              << rpad(estimate_cell(r.pinned->max_deflection), 11)
               << rpad(estimate_cell(r.envelope.of(&beam_state::max_deflection).max), 12)
               << rpad(estimate_cell(r.envelope.of(&beam_state::max_deflection).min), 12)
               << rpad(estimate_cell(r.fixed.max_deflection), 11) << "\n";
@@ -319,6 +335,7 @@ void check_list(std::ostringstream& o, const project& p, const beam_assessment& 
 void sensitivity(std::ostringstream& o, const project& p, const beam_assessment& a)
 {
     const beam& b = *a.input;
+    if (b.layout == beam_layout::cantilever) return;  // thresholds are not worked out for a cantilever
     const auto thresholds = threshold_report_lines(p, b);
     if (!thresholds.empty()) {
         o << "\n  Thresholds (the stiffness, both joints together, at which a check changes its answer)\n";
@@ -351,13 +368,15 @@ void verdict_line(std::ostringstream& o, const beam_assessment& a)
     const auto failed = std::count_if(a.checks.begin(), a.checks.end(),
                                       [](const check& c) { return c.status == check_status::fail; });
     o << "\n  Verdict for beam " << b.id << ": ";
+    const std::string assumption = b.layout == beam_layout::cantilever ? "the fixed-root assumption"
+                                                                       : "the simple-support (pinned) assumption";
     if (a.holds()) {
-        o << "the simple-support (pinned) assumption HOLDS; no check fails.\n";
+        o << assumption << " HOLDS; no check fails.\n";
     } else {
         std::string ids;
         for (const auto& c : a.checks)
             if (c.status == check_status::fail) ids += (ids.empty() ? "" : ", ") + c.id;
-        o << "the simple-support (pinned) assumption DOES NOT HOLD.\n    " << failed << " check"
+        o << assumption << " DOES NOT HOLD.\n    " << failed << " check"
           << (failed == 1 ? " fails" : "s fail") << ": " << wrap(ids, 90, "    ") << "\n";
     }
 }
@@ -423,7 +442,12 @@ std::string text_report(const project_assessment& a, const std::string& version)
          "  signs            reactions up +, end moments hogging +, deflection down +, end rotations + in the\n"
          "                   sense a simply supported beam rotates under gravity load\n"
          "  statuses         pass, FAIL, warn (to pass on or to look at; does not change the verdict),\n"
-         "                   n/a (not applicable: the reason is given)\n\n";
+         "                   n/a (not applicable: the reason is given)\n";
+    if (std::any_of(p.beams.begin(), p.beams.end(), [](const beam& b) { return b.layout == beam_layout::cantilever; }))
+        o << "  cantilever       the start joint is the root, the end a free tip; rigid root is the ideal bound, a\n"
+             "                   pinned root a mechanism (no column); the tip deflection is down +, the tip's\n"
+             "                   rotation_end is -dw/dx, negative as a tip drops under gravity\n";
+    o << "\n";
     o << "Caution: " << wrap(caution_text, 90, "         ") << "\n";
     // Ids, titles and descriptions come from the input: nothing in them may act on a terminal.
     return terminal_text(o.str());

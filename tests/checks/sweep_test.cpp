@@ -54,9 +54,9 @@ TEST_CASE("sweep end points equal the pinned and fixed states of check [check]: 
         CHECK(r.rows.back().at.end.is_rigid());
         for (const auto& f : result_fields()) {
             CAPTURE(f.key);
-            CHECK(r.rows.front().state.*(f.member) == a.combinations[ci].pinned.*(f.member));
+            CHECK(r.rows.front().state.*(f.member) == a.combinations[ci].pinned.value().*(f.member));
             CHECK(r.rows.back().state.*(f.member) == a.combinations[ci].fixed.*(f.member));
-            CHECK(r.pinned.*(f.member) == a.combinations[ci].pinned.*(f.member));
+            CHECK(r.pinned.*(f.member) == a.combinations[ci].pinned.value().*(f.member));
             CHECK(r.fixed.*(f.member) == a.combinations[ci].fixed.*(f.member));
         }
         CHECK(r.rows.front().fixity_start == 0.0);

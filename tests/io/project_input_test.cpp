@@ -334,7 +334,7 @@ TEST_CASE("US and SI input of the same beam give the same SI results to 1e-12 re
     for (std::size_t c = 0; c < ru.combinations.size(); ++c) {
         const auto& cu = ru.combinations[c];
         const auto& cs = rs.combinations[c];
-        std::vector<std::pair<const beam_state*, const beam_state*>> states{{&cu.pinned, &cs.pinned},
+        std::vector<std::pair<const beam_state*, const beam_state*>> states{{&cu.pinned.value(), &cs.pinned.value()},
                                                                             {&cu.fixed, &cs.fixed}};
         REQUIRE(cu.corners.size() == cs.corners.size());
         for (std::size_t k = 0; k < cu.corners.size(); ++k) states.push_back({&cu.corners[k], &cs.corners[k]});

@@ -239,3 +239,29 @@ TEST_CASE("a catalogue entry's geometry is read afresh when another catalogue ta
         c.reset();
     }
 }
+
+TEST_CASE("schedule: a layout column - a cantilever row takes its root at start and leaves end empty - refusals at line and column [the project's rules]")
+{
+    const std::string text = "id,span,section,g,q,start,end,layout\n"
+                             "B1,6 m,IPE 300,10 kN/m,5 kN/m,FP-3-M20,FP-3-M20,\n"
+                             "C1,1.8 m,IPE 240,6 kN/m,6 kN/m,FP-3-M20,,cantilever\n"
+                             "C2,1.8 m,IPE 240,6 kN/m,6 kN/m,FP-3-M20,FP-3-M20,cantilever\n"
+                             "C3,1.8 m,IPE 240,6 kN/m,6 kN/m,FP-3-M20,FP-3-M20,overhang\n";
+    const schedule s = parse_schedule(text);
+    const auto b1 = read_schedule_row(s, 0, test_catalogue());
+    REQUIRE(b1.input);
+    CHECK(b1.input->layout == beam_layout::two_supports);
+    const auto c1 = read_schedule_row(s, 1, test_catalogue());
+    REQUIRE(c1.input);
+    CHECK(c1.input->layout == beam_layout::cantilever);
+    CHECK(c1.input->end.range.max.is_pinned());
+    CHECK(c1.input->start.range.min.value() == doctest::Approx(300e3).epsilon(1e-12));
+    const auto c2 = read_schedule_row(s, 2, test_catalogue());
+    CHECK_FALSE(c2.input);
+    CHECK(where_of(c2) == "line 4, column 7 (end)");
+    CHECK(message_of(c2).find("free tip") != std::string::npos);
+    const auto c3 = read_schedule_row(s, 3, test_catalogue());
+    CHECK_FALSE(c3.input);
+    CHECK(where_of(c3) == "line 5, column 8 (layout)");
+    CHECK(message_of(c3).find("not supported yet") != std::string::npos);
+}

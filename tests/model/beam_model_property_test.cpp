@@ -572,7 +572,7 @@ TEST_CASE("properties: the same beam in SI and in US customary units gives the s
         ++compared;
         for (std::size_t k = 0; k < x.combinations.size(); ++k) {
             const auto &p = x.combinations[k], &q = y.combinations[k];
-            std::vector<const beam_state*> ps{&p.pinned, &p.fixed}, qs{&q.pinned, &q.fixed};
+            std::vector<const beam_state*> ps{&p.pinned.value(), &p.fixed}, qs{&q.pinned.value(), &q.fixed};
             REQUIRE(p.corners.size() == q.corners.size());
             for (std::size_t n = 0; n < p.corners.size(); ++n) {
                 ps.push_back(&p.corners[n]);

@@ -8,6 +8,12 @@
 //           J. Struct. Div. ASCE 89(ST6), 1963: fixity factor r = 1/(1 + 3EI/(S L)),
 //           equal springs, symmetric load: M = MF 3r/(2 + r), pack section 5.
 //   [WC5]   Worked case of pack section 5 (IPE 300, L = 6 m, w = 20 kN/m) [D].
+//   [C8]    Cantilever with a rigid root: tip deflection wL^4/(8EI) (UDL) and PL^3/(3EI)
+//           (tip load), tip slope wL^3/(6EI) and PL^2/(2EI), deflection under a UDL
+//           w x^2 (6L^2 - 4Lx + x^2)/(24EI): Roark's Formulas, 7th ed., Table 8.1
+//           (cantilever cases, from memory); reference pack 11.5 [D]. The root-spring
+//           terms (wL^2/2) L/S and P L L/S are derived in the tests: statics gives the
+//           root moment, the spring turns through M/S, the tip moves by that times L.
 // Tolerances are relative unless stated; the engine is exact for these loads,
 // so 1e-9 is used where the closed form is exact.
 #include <doctest/doctest.h>
@@ -559,4 +565,104 @@ TEST_CASE("shear force [R8.1] and statics: V = R_start - w x under a UDL with en
     CHECK(before == doctest::Approx(P * (L - a) / L).epsilon(1e-9));
     CHECK(after == doctest::Approx(-P * a / L).epsilon(1e-9));
     CHECK(sp.reaction_start == doctest::Approx(before).epsilon(1e-9));
+}
+
+// ---- Cantilevers (beam_layout::cantilever): the start is the root, the end a free tip.
+
+TEST_CASE("cantilever - UDL - rigid root [C8]: R = wL - M_root = wL^2/2 - tip wL^4/(8EI) - tip slope wL^3/(6EI) - tol 1e-9")
+{
+    const beam_model m(L, EI, {udl(w)}, beam_layout::cantilever);
+    const beam_state s = m.solve(stiffness::rigid(), stiffness::pinned());
+    CHECK(s.reaction_start == doctest::Approx(w * L).epsilon(1e-9));
+    CHECK(s.reaction_end == 0.0);
+    CHECK(s.moment_start == doctest::Approx(w * L * L / 2).epsilon(1e-9));
+    CHECK(s.moment_end == 0.0);
+    CHECK(s.max_hogging_moment == doctest::Approx(-w * L * L / 2).epsilon(1e-9));
+    CHECK(s.max_hogging_at == 0.0);
+    CHECK(s.max_deflection == doctest::Approx(w * std::pow(L, 4) / (8 * EI)).epsilon(1e-9));
+    CHECK(s.max_deflection_at == doctest::Approx(L).epsilon(1e-12));
+    CHECK(s.rotation_start == 0.0);
+    // rotation_end = -theta(L) (sign_conventions.hpp): the dropping tip turns negative.
+    CHECK(s.rotation_end == doctest::Approx(-w * std::pow(L, 3) / (6 * EI)).epsilon(1e-9));
+    for (double x : {0.25 * L, 0.5 * L, 0.8 * L}) {
+        CAPTURE(x);
+        CHECK(m.deflection_at(x, s) ==
+              doctest::Approx(w * x * x * (6 * L * L - 4 * L * x + x * x) / (24 * EI)).epsilon(1e-9));
+        CHECK(m.moment_at(x, s) == doctest::Approx(-w * (L - x) * (L - x) / 2).epsilon(1e-9));  // statics
+        CHECK(m.shear_at(x, s) == doctest::Approx(w * (L - x)).epsilon(1e-9));                   // statics
+    }
+}
+
+TEST_CASE("cantilever - tip load - rigid root [C8]: M_root = PL - tip PL^3/(3EI) - tip slope PL^2/(2EI) - tol 1e-9")
+{
+    const double P = 25e3;
+    const beam_model m(L, EI, {point(P, L)}, beam_layout::cantilever);
+    const beam_state s = m.solve(stiffness::rigid(), stiffness::pinned());
+    CHECK(s.reaction_start == doctest::Approx(P).epsilon(1e-9));
+    CHECK(s.moment_start == doctest::Approx(P * L).epsilon(1e-9));
+    CHECK(s.max_deflection == doctest::Approx(P * std::pow(L, 3) / (3 * EI)).epsilon(1e-9));
+    CHECK(s.rotation_end == doctest::Approx(-P * L * L / (2 * EI)).epsilon(1e-9));
+}
+
+TEST_CASE("cantilever - UDL - spring root [C8 + derived]: tip wL^4/(8EI) + (wL^2/2) L/S - root rotation (wL^2/2)/S - tol 1e-9")
+{
+    const beam_model m(L, EI, {udl(w)}, beam_layout::cantilever);
+    for (double kappa : {2.0, 8.0, 40.0}) {
+        CAPTURE(kappa);
+        const double S = kappa * EI / L;
+        const beam_state s = m.solve(stiffness::spring(S), stiffness::pinned());
+        const double M = w * L * L / 2;  // root moment from statics
+        CHECK(s.moment_start == doctest::Approx(M).epsilon(1e-9));
+        CHECK(s.rotation_start == doctest::Approx(M / S).epsilon(1e-9));
+        CHECK(s.max_deflection == doctest::Approx(w * std::pow(L, 4) / (8 * EI) + M / S * L).epsilon(1e-9));
+        CHECK(s.rotation_end == doctest::Approx(-(w * std::pow(L, 3) / (6 * EI) + M / S)).epsilon(1e-9));
+        // The increase over the rigid root is 4 EI/(S L) = 4/kappa (derived from the two terms).
+        const double rigid = m.solve(stiffness::rigid(), stiffness::pinned()).max_deflection;
+        CHECK(s.max_deflection / rigid - 1 == doctest::Approx(4 / kappa).epsilon(1e-9));
+    }
+}
+
+TEST_CASE("cantilever - tip load - spring root [C8 + derived]: tip PL^3/(3EI) + P L L/S - increase 3/kappa - tol 1e-9")
+{
+    const double P = 25e3, S = 12.0 * EI / L;
+    const beam_model m(L, EI, {point(P, L)}, beam_layout::cantilever);
+    const beam_state s = m.solve(stiffness::spring(S), stiffness::pinned());
+    CHECK(s.max_deflection == doctest::Approx(P * std::pow(L, 3) / (3 * EI) + P * L * L / S).epsilon(1e-9));
+    const double rigid = m.solve(stiffness::rigid(), stiffness::pinned()).max_deflection;
+    CHECK(s.max_deflection / rigid - 1 == doctest::Approx(3.0 / 12.0).epsilon(1e-9));
+}
+
+TEST_CASE("cantilever - mixed loads - statics: root reaction and moment from every load kind - tol 1e-9")
+{
+    // Statics of the free body (common practice, no source): R = sum of forces,
+    // M_root = sum of their moments about the root, a clockwise couple adding its value.
+    const double P = 10e3, a = 0.4 * L, C = 5e3, q0 = 2e3, q1 = 6e3;
+    load lin;
+    lin.kind = load_kind::linear;
+    lin.value = q0;
+    lin.value_end = q1;
+    lin.from = 0.5 * L;
+    lin.to = L;
+    const beam_model m(L, EI, {point(P, a), couple(C, 0.7 * L), lin, udl(w, 0.1 * L, 0.3 * L)}, beam_layout::cantilever);
+    const beam_state s = m.solve(stiffness::spring(5.0 * EI / L), stiffness::pinned());
+    const double l = 0.5 * L;
+    const double lin_force = (q0 + q1) / 2 * l;
+    const double lin_arm = 0.5 * L + l * (q0 + 2 * q1) / (3 * (q0 + q1));
+    const double udl_force = w * 0.2 * L;
+    CHECK(s.reaction_start == doctest::Approx(P + lin_force + udl_force).epsilon(1e-9));
+    CHECK(s.moment_start == doctest::Approx(P * a + C + lin_force * lin_arm + udl_force * 0.2 * L).epsilon(1e-9));
+    CHECK(std::abs(m.moment_at(L, s)) <= 1e-9 * s.moment_start);  // nothing left at the free tip
+}
+
+TEST_CASE("cantilever - a pinned root is a mechanism - a tip joint is refused - the two-support calls are refused")
+{
+    const beam_model m(L, EI, {udl(w)}, beam_layout::cantilever);
+    CHECK_THROWS_AS(m.solve(stiffness::pinned(), stiffness::pinned()), std::invalid_argument);
+    CHECK_THROWS_AS(m.solve(stiffness::rigid(), stiffness::rigid()), std::invalid_argument);
+    CHECK_THROWS_AS(m.state_for_end_moments(1.0, 0.0), std::logic_error);
+    CHECK_THROWS_AS(m.deflection_at(1.0, 0.0, 0.0), std::logic_error);
+    const beam_model two(L, EI, {udl(w)});
+    CHECK_THROWS_AS(two.state_for_root_rotation(0.0), std::logic_error);
+    std::vector<std::array<double, 2>> out;
+    CHECK_THROWS_AS(m.end_moments_grid({stiffness::pinned()}, {stiffness::pinned()}, out), std::invalid_argument);
 }

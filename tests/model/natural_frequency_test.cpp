@@ -7,9 +7,13 @@
 //              4.73004074 (fixed-fixed), 3.92660231 (fixed-pinned); lambda^2 = 9.8696, 22.373,
 //              15.418 in the reference pack 11.4 (values to 9 figures from memory; the
 //              frequency equations cos(l) cosh(l) = 1 and tan(l) = tanh(l) solved in the test).
+//              Clamped-free (cantilever): lambda = 1.87510407, lambda^2 = 3.5160 (pack 11.4),
+//              the root of cos(l) cosh(l) = -1 solved in the test.
 //   [scipy]    python3-scipy brentq on the determinant of the four boundary conditions of
 //              W = A cos + B sin + C cosh + D sinh with springs EI W'' = +-k W' at the ends,
 //              written out in the test.
+//   [scipy, cantilever] the same for a cantilever: root W = 0, W'' = kappa W'; free tip
+//              W'' = W''' = 0.
 //   [static]   a point mass M on a massless pinned beam: omega^2 = 48 EI/(M L^3) (the beam's
 //              central stiffness 48 EI/L^3, Roark Table 8.1 from memory; pack 6).
 //   [pack]     reference pack 11.4 [D]: f = 18/sqrt(delta mm) within about 1.5 % for a UDL beam
@@ -143,4 +147,68 @@ TEST_CASE("a partial load adds its mass where it lies: a stiffer end rises the f
     CHECK_THROWS_AS(first_natural_frequency(L, EI, {udl(-w)}, stiffness::pinned(), stiffness::pinned()),
                     std::invalid_argument);
     CHECK_THROWS_AS(first_natural_frequency(L, EI, {}, stiffness::pinned(), stiffness::pinned()), std::invalid_argument);
+}
+
+TEST_CASE("cantilever - rigid root - UDL [Blevins]: lambda = 1.87510407 (cos l cosh l = -1) - f = 3.516/(2 pi) sqrt(EI/m)/L^2 - tol 1e-7")
+{
+    const double lambda = root([](double l) { return std::cos(l) * std::cosh(l) + 1; }, 1.5, 2.2);
+    CHECK(std::abs(lambda - 1.87510407) <= 1e-8);
+    CHECK(std::abs(lambda * lambda - 3.5160) <= 5e-4);  // pack 11.4, 5 figures
+    const double f = first_natural_frequency(L, EI, {udl(w)}, stiffness::rigid(), stiffness::pinned(),
+                                             beam_layout::cantilever);
+    CHECK(std::abs(f / classical(lambda) - 1) <= 1e-7);
+}
+
+TEST_CASE("cantilever - spring root: below the rigid root - tends to it as S grows - a pinned root is refused")
+{
+    // Adding stiffness never lowers an eigenvalue (Rayleigh quotient; common practice, no source).
+    const auto f = [](stiffness s) {
+        return first_natural_frequency(L, EI, {udl(w)}, s, stiffness::pinned(), beam_layout::cantilever);
+    };
+    const double rigid = f(stiffness::rigid());
+    double previous = 0;
+    for (double kappa : {0.5, 2.0, 8.0, 40.0}) {
+        const double v = f(stiffness::spring(kappa * EI / L));
+        CHECK(v > previous);
+        CHECK(v < rigid);
+        previous = v;
+    }
+    CHECK(std::abs(f(stiffness::spring(1e9 * EI / L)) / rigid - 1) <= 1e-6);
+    CHECK_THROWS_AS(f(stiffness::pinned()), std::invalid_argument);
+}
+
+TEST_CASE("cantilever - spring root against scipy brentq on the frequency determinant [scipy] - tol 1e-6")
+{
+    // W = A cos + B sin + C cosh + D sinh in x/L; root: W = 0 and W'' = kappa W' (the spring,
+    // as in the end-spring case above); free tip: W'' = 0 and W''' = 0. The first sign change
+    // of the determinant above 0.02 is bracketed on a grid, then solved with brentq.
+    const double kappas[] = {0.5, 2, 8, 40};
+    std::ostringstream py;
+    py.precision(17);
+    py << "import numpy as np\nfrom scipy.optimize import brentq\n"
+          "def det(l,a):\n"
+          "  c,s,ch,sh=np.cos(l),np.sin(l),np.cosh(l),np.sinh(l)\n"
+          "  A=np.array([[1,0,1,0],[-l*l,-a*l,l*l,-a*l],[-c,-s,ch,sh],[s,-c,sh,ch]])\n"
+          "  return np.linalg.det(A)\n"
+          "for a in [";
+    for (double k : kappas) py << k << ",";
+    py << "]:\n"
+          "  g=np.arange(0.02,1.9,0.005); v=[det(x,a) for x in g]\n"
+          "  i=next(i for i in range(len(g)-1) if v[i]*v[i+1]<0)\n"
+          "  print(repr(brentq(lambda l: det(l,a), g[i], g[i+1], xtol=1e-15)))\n";
+    const auto out = test_data::python_output(py.str());
+    if (!out) {
+        MESSAGE("scipy not available at /usr/bin/python3: cross-check skipped");
+        return;
+    }
+    std::istringstream in(*out);
+    for (double k : kappas) {
+        double lambda = 0;
+        in >> lambda;
+        REQUIRE(static_cast<bool>(in));
+        CAPTURE(k);
+        const double f = first_natural_frequency(L, EI, {udl(w)}, stiffness::spring(k * EI / L), stiffness::pinned(),
+                                                 beam_layout::cantilever);
+        CHECK(std::abs(f / classical(lambda) - 1) <= 1e-6);
+    }
 }

@@ -54,7 +54,10 @@ struct state_envelope {
 
 struct combination_result {
     combination comb;
-    beam_state pinned, fixed;
+    // The ideal bounds: both ends pinned, both fixed. A cantilever's "fixed"
+    // is its rigid root; its "pinned" is a mechanism and is not solved (nullopt).
+    std::optional<beam_state> pinned;
+    beam_state fixed;
     // Corners of the range box, in the order (min,min), (min,max), (max,min),
     // (max,max) for (start, end).
     std::vector<beam_state> corners;
@@ -64,7 +67,8 @@ struct combination_result {
     // A vibration combination: the first natural frequency of each state
     // (model/natural_frequency.hpp), Hz.
     struct frequencies {
-        double pinned = 0, fixed = 0;
+        std::optional<double> pinned;  // nullopt for a cantilever (a mechanism)
+        double fixed = 0;
         std::vector<double> corners;  // in the order of `corners`
         // Over the range box. Adding end stiffness never lowers an eigenvalue
         // (the Rayleigh quotient of K + dK with dK >= 0), so the frequency grows

@@ -1,5 +1,7 @@
-// Linear elastic analysis of a uniform straight beam between two vertical
-// supports, each end restrained by a rotational spring (pin, spring or rigid).
+// Linear elastic analysis of a uniform straight beam in one of the layouts of
+// beam_layout.hpp: between two vertical supports, each end restrained by a
+// rotational spring (pin, spring or rigid), or a cantilever whose root is
+// restrained by a spring or rigid and whose tip is free.
 //
 // Method (docs/method/beam-model.md):
 //  1. Nodes at each end, at every point load or point moment and at every
@@ -15,10 +17,16 @@
 //     a unit moment at each end are computed once; this static condensation onto
 //     the two end rotations makes any pair of end springs a 2x2 solve, and a
 //     rigid end the exact constraint rotation = 0, not a large spring number.
+//  A cantilever is statically determinate: the root moment and reaction follow
+//  from statics whatever the root's stiffness. The beam is integrated from the
+//  root with w(0) = 0 and theta(0) = 0 (the rigid root), element by element
+//  with the same polynomials, and a spring root adds the rigid-body rotation
+//  theta_root = M_root / S about the root: w(x) += theta_root x
+//  (docs/method/layouts.md).
 //  3. Every state is checked for equilibrium of vertical forces and of moments
 //     about the start, and by the shear and moment left over past the end
-//     support after integrating along the beam; a residual above 1e-9 of the
-//     load scale throws internal_error.
+//     support (for a cantilever: past the free tip) after integrating along the
+//     beam; a residual above 1e-9 of the load scale throws internal_error.
 // Signs: sign_conventions.hpp. Units: SI base units.
 #pragma once
 
@@ -27,6 +35,7 @@
 #include <vector>
 
 #include "pinproof/core/errors.hpp"
+#include "pinproof/model/beam_layout.hpp"
 #include "pinproof/model/loads.hpp"
 #include "pinproof/model/sign_conventions.hpp"
 #include "pinproof/model/stiffness.hpp"
@@ -48,10 +57,12 @@ struct beam_state {
     // the start is kept, for both extremes.
     double max_hogging_moment = 0;
     double max_hogging_at = 0;      // m from the start
-    double max_deflection = 0;      // m, downward positive: w(x) of largest magnitude
+    // m, downward positive: w(x) of largest magnitude (for a cantilever under
+    // loads of one sign, the tip's deflection)
+    double max_deflection = 0;
     double max_deflection_at = 0;   // m from the start
-    double rotation_start = 0;      // rad, positive as a simply supported beam under gravity
-    double rotation_end = 0;        // rad, same sense
+    double rotation_start = 0;      // rad, positive as a simply supported beam under gravity (a cantilever: the root's)
+    double rotation_end = 0;        // rad, same sense (a cantilever: at the tip, -theta(L))
 };
 
 // Polynomial in the local coordinate s of one element: c[0] + c[1] s + ... + c[5] s^5.
@@ -62,21 +73,33 @@ public:
     // Throws std::invalid_argument for span <= 0, EI <= 0, non-finite values or
     // a load outside [0, span] (the project loader reports these to the user
     // with field names before a model is built).
-    beam_model(double span, double EI, std::vector<load> loads);
+    beam_model(double span, double EI, std::vector<load> loads, beam_layout layout = beam_layout::two_supports);
 
     double span() const noexcept { return span_; }
+    beam_layout layout() const noexcept { return layout_; }
     double EI() const noexcept { return EI_; }
     const std::vector<double>& nodes() const noexcept { return nodes_; }
 
-    // The full linear state for a pair of end joints.
+    // The full linear state for a pair of end joints. A cantilever takes its
+    // root's stiffness as `start` and a pin (no joint) as `end`; a pinned root
+    // is a mechanism and throws std::invalid_argument (the reader refuses it
+    // at the root joint's field first).
     beam_state solve(stiffness start, stiffness end) const;
 
-    // The state for given hogging end moments (N*m), whatever joint produced
-    // them. Used by non-linear joint models (gap closure) that iterate on the
-    // end moments.
+    // Two supports: the state for given hogging end moments (N*m), whatever
+    // joint produced them. Used by non-linear joint models (gap closure) that
+    // iterate on the end moments. Throws std::logic_error on a cantilever,
+    // whose root moment is fixed by statics (state_for_root_rotation).
     beam_state state_for_end_moments(double moment_start, double moment_end) const;
 
-    // The condensed form: end rotations are
+    // A cantilever: the state for a root rotation theta (rad, sign_conventions.hpp);
+    // a spring root S turns through root_moment() / S, a rigid one through 0.
+    // Throws std::logic_error on a beam on two supports.
+    beam_state state_for_root_rotation(double theta) const;
+    // A cantilever: the hogging root moment (N*m), from statics.
+    double root_moment() const noexcept { return root_moment_; }
+
+    // Two supports only (pinned_rotations, flexibility): the condensed form: end rotations are
     //   rotation = pinned_rotations() - flexibility() * {moment_start, moment_end}
     // with rotations and hogging moments in the sign convention.
     std::array<double, 2> pinned_rotations() const noexcept { return rot0_; }
@@ -92,14 +115,19 @@ public:
     void end_moments_grid(const std::vector<stiffness>& starts, const std::vector<stiffness>& ends,
                           std::vector<std::array<double, 2>>& out) const;
 
-    // Deflection (m, downward) and bending moment (N*m, sagging) at x for the
-    // state with the given hogging end moments.
+    // Two supports: deflection (m, downward) and bending moment (N*m,
+    // sagging) at x for the state with the given hogging end moments (throw
+    // std::logic_error on a cantilever).
     double deflection_at(double x, double moment_start, double moment_end) const;
     double moment_at(double x, double moment_start, double moment_end) const;
     // Shear force (N, sign_conventions.hpp) at x. At a point load it jumps:
     // the value just after x (to its right) is returned; ask for x less a
     // small step for the value just before it.
     double shear_at(double x, double moment_start, double moment_end) const;
+    // The same for a state of this model, in any layout.
+    double deflection_at(double x, const beam_state& s) const;
+    double moment_at(double x, const beam_state& s) const;
+    double shear_at(double x, const beam_state& s) const;
 
 private:
     // Row j of the condensed system a[j][j] m_j + a[j][k] m_k = b_j for joint
@@ -113,7 +141,8 @@ private:
         double x0 = 0, length = 0;
         double qa = 0, qb = 0;  // line load at the element's ends, N/m
         // Deflection polynomials for the load state and for unit hogging end
-        // moments at the start and at the end.
+        // moments at the start and at the end (a cantilever: the load state
+        // with a rigid root, a unit root rotation, and 0).
         element_polynomial w_load{}, w_start{}, w_end{};
     };
     struct load_state {
@@ -122,12 +151,24 @@ private:
         double closure_shear = 0, closure_moment = 0;  // what is left past the end support
     };
     load_state integrate(const std::vector<load>& loads, double couple_start, double couple_end) const;
+    load_state integrate_cantilever() const;
+    struct element_run {
+        double shear = 0, moment = 0, w = 0, slope = 0;  // just past the last node
+    };
+    element_run integrate_elements(const std::vector<double>& P, const std::vector<double>& C, double V, double M,
+                                   bool with_loads, std::vector<element_polynomial>& w_out) const;
+    // The state whose deflection is w_load + a w_start + b w_end (two
+    // supports: a, b the end moments; a cantilever: a the root rotation, b 0).
+    beam_state fill_extremes(beam_state s, double a, double b) const;
+    std::array<double, 2> coefficients(const beam_state& s) const;
     std::size_t nearest_node(double x) const;
     element_polynomial combined(const element& e, double m_start, double m_end) const;
     std::size_t element_index(double x) const;
-    void check_equilibrium(const beam_state& s) const;
+    void check_equilibrium(const beam_state& s, double a, double b) const;
 
     double span_ = 0, EI_ = 0;
+    beam_layout layout_ = beam_layout::two_supports;
+    double root_moment_ = 0;  // a cantilever's hogging root moment, N*m
     std::vector<load> loads_;
     std::vector<double> nodes_;
     std::vector<element> elements_;
@@ -157,6 +198,7 @@ inline beam_model::condensed_row beam_model::row_for(int j, stiffness s) const n
 
 inline std::array<double, 2> beam_model::end_moments(stiffness start, stiffness end) const
 {
+    if (layout_ == beam_layout::cantilever) return {root_moment_, 0.0};  // statics, whatever the root's stiffness
     const condensed_row r0 = row_for(0, start), r1 = row_for(1, end);
     const double det = r0.own * r1.own - r0.other * r1.other;
     if (!(std::abs(det) > 0.0) || !std::isfinite(det)) throw internal_error("end-spring system is singular");

@@ -16,13 +16,14 @@
 // distributed loads give distributed mass (taken as each element's mean),
 // point loads point masses; point moments carry none. For a uniform mass the
 // first eigenvalue lambda^2 = omega L^2 sqrt(m/EI) is pi^2 pinned-pinned,
-// 22.373 fixed-fixed, 15.418 fixed-pinned (Blevins, Formulas for Natural
+// 22.373 fixed-fixed, 15.418 fixed-pinned, 3.516 clamped-free (Blevins, Formulas for Natural
 // Frequency and Mode Shape, Table 8-1; reference pack 11.4).
 // Units: SI (Hz, kg/m, m, N*m^2).
 #pragma once
 
 #include <vector>
 
+#include "pinproof/model/beam_layout.hpp"
 #include "pinproof/model/loads.hpp"
 #include "pinproof/model/stiffness.hpp"
 
@@ -34,8 +35,10 @@ inline constexpr double standard_gravity = 9.80665;  // m/s^2
 // (already factored: a load's value times its combination factor). Throws
 // std::invalid_argument for a span or EI that is not finite and > 0, a load
 // outside the span, an upward load (negative mass) or no mass at all.
+// A cantilever (beam_layout.hpp) holds only the root's deflection: its tip
+// is free (`end` must be a pin, `start` not: std::invalid_argument otherwise).
 double first_natural_frequency(double span, double EI, const std::vector<load>& loads, stiffness start,
-                               stiffness end);
+                               stiffness end, beam_layout layout = beam_layout::two_supports);
 
 // The engineers' estimate f = 18 / sqrt(delta), delta the largest deflection in mm
 // under the vibrating mass (f = 0.18 sqrt(g / delta) for a simply supported

@@ -8,6 +8,7 @@
 #include <string>
 #include <vector>
 
+#include "pinproof/model/beam_layout.hpp"
 #include "pinproof/model/design_standard.hpp"
 #include "pinproof/model/joint.hpp"
 #include "pinproof/model/loads.hpp"
@@ -28,7 +29,11 @@ struct deflection_limit {
 struct beam {
     std::string id;
     std::string description;
-    double span = 0;   // m
+    double span = 0;   // m (a cantilever: root to tip)
+    // How the beam is supported (beam_layout.hpp). A cantilever's start joint
+    // is its root; its end is a free tip whose joint is a pin by construction
+    // (the file gives none).
+    beam_layout layout = beam_layout::two_supports;
     double E = 0;      // Pa
     bool E_is_default = false;  // E was not given; the standard's value is used
     section sec;
@@ -38,6 +43,11 @@ struct beam {
     std::optional<deflection_limit> deflection;
     // The least first natural frequency under a vibration combination (Hz).
     std::optional<double> frequency_limit;
+    // A cantilever: the largest increase of the tip deflection over the
+    // rigid-root value that still counts as a fixed root (a fraction; 0.10
+    // unless given, docs/method/layouts.md).
+    double root_flexibility_limit = 0.10;
+    bool root_flexibility_is_default = true;
     // 1: both joints are the same connection type, one stiffness draw for both;
     // 0: independent (docs/method/sweep-and-probability.md).
     int stiffness_correlation = 1;
