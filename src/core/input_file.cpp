@@ -74,6 +74,12 @@ public:
     descriptor(const descriptor&) = delete;
     descriptor& operator=(const descriptor&) = delete;
     int get() const { return fd_; }
+    int release()
+    {
+        const int fd = fd_;
+        fd_ = -1;
+        return fd;
+    }
 
 private:
     int fd_;
@@ -81,9 +87,8 @@ private:
 
 }  // namespace
 
-std::string read_input_file(const std::string& path, const std::string& what)
+input_file_stream::input_file_stream(const std::string& path, const std::string& what) : path_(path), what_(what)
 {
-    const std::string limit = "the limit is " + size_text(max_input_bytes);
     if (path.empty()) throw input_error("(command line)", "expected the path of the " + what + ", found an empty name");
     // Look before opening: opening a FIFO with no writer would block, and a
     // directory opens fine on Linux.
@@ -109,24 +114,51 @@ std::string read_input_file(const std::string& path, const std::string& what)
     if (::fstat(fd.get(), &opened) != 0 || (!S_ISREG(opened.st_mode) && !S_ISFIFO(opened.st_mode)))
         throw input_error(path, std::string("expected the ") + what + " as a file, found " + kind_of(opened.st_mode));
     remember(opened, path, what);
+    if (S_ISREG(opened.st_mode)) size_ = static_cast<std::uintmax_t>(opened.st_size);
+    fd_ = fd.release();
+}
 
-    std::string text;
-    if (S_ISREG(opened.st_mode)) text.reserve(static_cast<std::size_t>(opened.st_size));
-    char buf[1 << 16];
+input_file_stream::~input_file_stream()
+{
+    if (fd_ >= 0) ::close(fd_);
+}
+
+std::size_t input_file_stream::read_more(std::string& text, std::size_t max)
+{
+    if (fd_ < 0) return 0;
+    const std::size_t before = text.size();
+    text.resize(before + max);
     for (;;) {
-        const ssize_t n = ::read(fd.get(), buf, sizeof buf);
-        if (n == 0) break;
+        const ssize_t n = ::read(fd_, text.data() + before, max);
         if (n < 0) {
             if (errno == EINTR) continue;
             const int e = errno;
-            throw input_error(path, "cannot read the " + what + ": " + std::strerror(e));
+            text.resize(before);
+            throw input_error(path_, "cannot read the " + what_ + ": " + std::strerror(e));
+        }
+        text.resize(before + static_cast<std::size_t>(n));
+        if (n == 0) {
+            note_bytes(path_, read_);
+            ::close(fd_);
+            fd_ = -1;
+            return 0;
         }
         // A file that grows while it is read, or a pipe, is still held to the limit.
-        if (text.size() + static_cast<std::size_t>(n) > max_input_bytes)
-            throw input_error(path, "expected a " + what + " of at most 512 MiB, found more; " + limit);
-        text.append(buf, static_cast<std::size_t>(n));
+        if (read_ + static_cast<std::size_t>(n) > max_input_bytes)
+            throw input_error(path_, "expected a " + what_ + " of at most 512 MiB, found more; the limit is " +
+                                         size_text(max_input_bytes));
+        read_ += static_cast<std::size_t>(n);
+        return static_cast<std::size_t>(n);
     }
-    note_bytes(path, text.size());
+}
+
+std::string read_input_file(const std::string& path, const std::string& what)
+{
+    input_file_stream in(path, what);
+    std::string text;
+    if (in.size() > 0) text.reserve(static_cast<std::size_t>(in.size()));
+    while (in.read_more(text, 1 << 16) > 0) {
+    }
     return text;
 }
 
