@@ -159,7 +159,6 @@ schedule_stream::schedule_stream(const std::string& path) : s_(std::make_unique<
         }
     }
     schedule first = parse_schedule(std::string_view(s.text).substr(0, bytes), path);
-    if (bytes == s.text.size()) s.next_line = 0;  // not used: nothing is left
     s.text.erase(0, bytes);
     s.records = std::move(first.rows);
     s.head = std::move(first);

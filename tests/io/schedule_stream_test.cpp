@@ -70,6 +70,19 @@ TEST_CASE("schedule stream: every record and line and duplicate id as the whole-
     check_same_as_whole(text, 100000);
 }
 
+TEST_CASE("schedule stream: a first part that ends exactly at a line end keeps the line count [parse_schedule] - exact")
+{
+    // The first read of first_part_bytes ends on a line feed: the rows after it keep their lines.
+    std::string text = "id,span,section,g,q,start,end\n";
+    const std::string row_tail = ",6.0 m,IPE 300,8 kN/m,5 kN/m,FP,FP\n";
+    int i = 0;
+    while (text.size() + 40 < schedule_stream::first_part_bytes) text += "B" + std::to_string(i++) + row_tail;
+    text += "# " + std::string(schedule_stream::first_part_bytes - text.size() - 3, 'x') + "\n";
+    REQUIRE(text.size() == schedule_stream::first_part_bytes);
+    for (int k = 0; k < 5000; ++k) text += "B" + std::to_string(i++) + row_tail;
+    check_same_as_whole(text, 4096);
+}
+
 TEST_CASE("schedule stream: a small file is read whole as parse_schedule reads it [parse_schedule] - exact")
 {
     pinproof::testing::temp_dir dir("schedule-stream");
