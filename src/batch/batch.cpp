@@ -331,37 +331,47 @@ std::string batch_counts_text(const batch_summary& s)
            std::to_string(s.refused) + " refused";
 }
 
-std::string batch_summary_csv(const batch_result& r)
+std::string batch_summary_csv_header(unit_system units)
 {
-    std::string out;
-    out.reserve(r.rows.size() * 160 + 512);
     // The header first, so that a spreadsheet reads it as the header; the
     // run's counts go to standard error and the JSON result, the meaning of
     // each column to docs/batch-and-catalogues.md. Units as in the sweep CSV.
-    const csv_units u(r.units);
+    const csv_units u(units);
     const auto col = [](const std::string& name, const std::string& unit) { return name + " [" + unit + "]"; };
-    out += "line,id,verdict,governing_check," + col("worst_ratio", "1") + "," + col("reaction_start", u.force_symbol) +
+    return "line,id,verdict,governing_check," + col("worst_ratio", "1") + "," + col("reaction_start", u.force_symbol) +
            "," + col("reaction_end", u.force_symbol) + "," + col("moment_start", u.moment_symbol) + "," +
            col("moment_end", u.moment_symbol) + "," + col("rotation_start", u.angle_symbol) + "," +
            col("rotation_end", u.angle_symbol) + "," + col("closure_rotation_start", u.angle_symbol) + "," +
            col("closure_rotation_end", u.angle_symbol) + ",failed_checks,message\n";
-    for (const auto& row : r.rows)
-        out += row.summary_line.empty() || row.units != r.units ? summary_line(row, r.units) : row.summary_line;
+}
+
+std::string batch_summary_line(const batch_row& row, unit_system units)
+{
+    return row.summary_line.empty() || row.units != units ? summary_line(row, units) : row.summary_line;
+}
+
+std::string batch_summary_csv(const batch_result& r)
+{
+    std::string out;
+    out.reserve(r.rows.size() * 160 + 512);
+    out += batch_summary_csv_header(r.units);
+    for (const auto& row : r.rows) out += batch_summary_line(row, r.units);
     return out;
 }
 
-std::string batch_result_json(const batch_result& r, const schedule& s, const detail_catalogue& catalogue)
+std::string batch_result_json_head(const batch_summary& summary, const std::string& schedule_source,
+                                  const detail_catalogue& catalogue)
 {
     json head;
     head["format"] = batch_result_format;
-    head["schedule"] = s.source;
+    head["schedule"] = schedule_source;
     head["details"] = {{"source", catalogue.source}, {"title", catalogue.title}};
-    head["summary"] = {{"rows", r.summary.rows},
-                       {"checked", r.summary.checked},
-                       {"passed", r.summary.passed},
-                       {"failed", r.summary.failed},
-                       {"refused", r.summary.refused}};
-    head["verdict"] = r.summary.refused ? "refused" : r.summary.failed ? "does-not-hold" : "holds";
+    head["summary"] = {{"rows", summary.rows},
+                       {"checked", summary.checked},
+                       {"passed", summary.passed},
+                       {"failed", summary.failed},
+                       {"refused", summary.refused}};
+    head["verdict"] = summary.refused ? "refused" : summary.failed ? "does-not-hold" : "holds";
     head["notes"] = json::array({closure_note});
     head["caution"] = "Results support, and do not replace, the judgement of a qualified engineer; local codes and "
                       "licensed practice govern.";
@@ -370,13 +380,19 @@ std::string batch_result_json(const batch_result& r, const schedule& s, const de
     text.pop_back();  // the closing brace
     while (!text.empty() && (text.back() == '\n' || text.back() == ' ')) text.pop_back();
     text += ",\n \"beams\": [\n";
+    return text;
+}
+
+std::string batch_result_json(const batch_result& r, const schedule& s, const detail_catalogue& catalogue)
+{
+    std::string text = batch_result_json_head(r.summary, s.source, catalogue);
     for (std::size_t i = 0; i < r.rows.size(); ++i) {
         if (r.rows[i].json.empty()) throw internal_error("batch row has no JSON result");
         text += "  ";
         text += r.rows[i].json;
         text += i + 1 < r.rows.size() ? ",\n" : "\n";
     }
-    text += " ]\n}\n";
+    text += batch_result_json_tail;
     return text;
 }
 

@@ -33,6 +33,11 @@ constexpr double rest_angle = 1e-9;
 std::vector<double> trig_roots(double A, double B, double d)
 {
     std::vector<double> out;
+    // Most pairs of an outline point and a support edge never touch, |d| far
+    // above rho: a squared comparison (with a margin far above round-off, so
+    // that it settles only what the test below would) spares them the hypot.
+    const double rho2 = A * A + B * B;
+    if (rho2 > 1e-280 && rho2 < 1e280 && d * d > rho2 * (1.0 + 1e-7)) return out;
     const double rho = std::hypot(A, B);
     if (!(rho > 1e-300)) return out;
     double x = d / rho;

@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <atomic>
 #include <chrono>
+#include <memory>
 #include <ostream>
 
 #include "cli.hpp"
@@ -12,10 +13,11 @@
 #include "interruption.hpp"
 #include "pinproof/core/printable_text.hpp"
 #include "pinproof/batch/batch.hpp"
+#include "pinproof/batch/streamed_batch.hpp"
 #include "pinproof/io/detail_catalogue.hpp"
 #include "pinproof/core/errors.hpp"
 #include "pinproof/core/output_file.hpp"
-#include "pinproof/io/schedule.hpp"
+#include "pinproof/io/schedule_stream.hpp"
 
 namespace pinproof::cli {
 namespace {
@@ -27,16 +29,16 @@ constexpr std::size_t problems_shown = 50;
 class progress_bar {
 public:
     explicit progress_bar(std::ostream& err) : err_(err), terminal_(isatty(STDERR_FILENO) == 1) {}
-    void operator()(std::size_t done, std::size_t total)
+    void operator()(std::size_t done, double fraction)
     {
-        if (!terminal_ || total == 0) return;
+        if (!terminal_) return;
         const auto elapsed = std::chrono::steady_clock::now() - start_;
         if (!drawn_ && elapsed < std::chrono::seconds(1)) return;
         const int width = 40;
-        const int filled = static_cast<int>(width * done / total);
+        const int filled = static_cast<int>(width * std::clamp(fraction, 0.0, 1.0));
         std::string bar = "\r[" + std::string(filled, '#') + std::string(width - filled, '.') + "] " +
-                          std::to_string(100 * done / total) + "% " + std::to_string(done) + "/" +
-                          std::to_string(total) + " beams";
+                          std::to_string(static_cast<int>(100 * std::clamp(fraction, 0.0, 1.0))) + "% " +
+                          std::to_string(done) + " beams";
         err_ << bar << std::flush;
         drawn_ = true;
     }
@@ -102,22 +104,30 @@ int batch_command(const batch_command_options& o, std::ostream& out, std::ostrea
         outputs.check();
 
         const detail_catalogue catalogue = load_detail_catalogue_file(o.details);
-        const schedule s = load_schedule_file(o.schedule);
+        // The schedule is read part by part and the rows written to scratch
+        // files as they are done (streamed_batch.hpp): memory stays flat.
+        schedule_stream in(o.schedule);
 
         progress_bar bar(err);
-        batch_options options;
-        options.jobs = o.jobs;
-        options.json = !o.out_json.empty();
-        options.cancel = &interruption_requested();
-        if (!o.quiet) options.progress = [&bar](std::size_t done, std::size_t total) { bar(done, total); };
+        streamed_batch_options options;
+        options.batch.jobs = o.jobs;
+        options.batch.json = !o.out_json.empty();
+        options.batch.cancel = &interruption_requested();
+        options.problems_kept = problems_shown;
+        if (!o.quiet) options.progress = [&bar](std::size_t done, double fraction) { bar(done, fraction); };
+        streamed_batch_outputs scratch;
+        if (!csv_target.empty()) {
+            scratch.csv_si = std::make_shared<scratch_file>(csv_target);
+            scratch.csv_us = std::make_shared<scratch_file>(csv_target);
+        }
+        if (!o.out_json.empty()) scratch.json = std::make_shared<scratch_file>(o.out_json);
         // A signal stops the workers after their current row (interruption.hpp).
         stop_cooperatively(true);
-        const batch_result r = run_batch(s, catalogue, options);
+        const streamed_batch_result r = run_streamed_batch(in, catalogue, options, scratch);
         bar.clear();
         if (r.cancelled || interruption_requested().load()) {
-            err << "pinproof: interrupted by " << interruption_name() << " after "
-                << std::count_if(r.rows.begin(), r.rows.end(), [](const batch_row& x) { return x.line != 0; })
-                << " of " << s.rows.size() << " beams; nothing was written.\n";
+            err << "pinproof: interrupted by " << interruption_name() << " after " << r.summary.rows
+                << " beams; nothing was written.\n";
             return interruption_exit_code();
         }
         // From here a signal ends the run at once, removing the temporaries.
@@ -126,30 +136,33 @@ int batch_command(const batch_command_options& o, std::ostream& out, std::ostrea
             err << "pinproof: note: the system could start only " << r.workers << " of " << r.workers_asked
                 << " worker threads; the batch ran with " << r.workers << ".\n";
 
-        // Everything is computed before anything is written.
-        std::string csv_text, json_text;
-        if (!csv_target.empty()) csv_text = batch_summary_csv(r);
-        if (!o.out_json.empty()) json_text = batch_result_json(r, s, catalogue);
+        // Every row is done before anything is written.
+        std::string csv_head, json_head;
+        const auto csv_body = r.units == unit_system::us_customary ? scratch.csv_us : scratch.csv_si;
+        if (!csv_target.empty()) csv_head = batch_summary_csv_header(r.units);
+        if (!o.out_json.empty()) json_head = batch_result_json_head(r.summary, o.schedule, catalogue);
         // Every file output is written, or none; then standard output.
         output_set files;
         files.add_input(o.schedule);
         files.add_input(o.details);
-        if (!csv_target.empty() && csv_target != "-") files.add("--out-csv", csv_target, std::move(csv_text));
-        if (!o.out_json.empty() && o.out_json != "-") files.add("--out-json", o.out_json, std::move(json_text));
+        if (!csv_target.empty() && csv_target != "-") files.add("--out-csv", csv_target, csv_head, csv_body, "");
+        if (!o.out_json.empty() && o.out_json != "-")
+            files.add("--out-json", o.out_json, json_head, scratch.json, batch_result_json_tail);
         if (!files.empty()) files.commit();
-        if (csv_target == "-") out << csv_text;
-        if (o.out_json == "-") out << json_text;
-
-        std::size_t shown = 0, refused_problems = 0;
-        for (const auto& row : r.rows) {
-            if (row.verdict != batch_verdict::refused) continue;
-            for (const auto& p : row.problems) {
-                ++refused_problems;
-                if (shown++ < problems_shown) err << "error: " << message_text(p.where) << ": " << message_text(p.message) << "\n";
-            }
+        if (csv_target == "-") {
+            out << csv_head;
+            csv_body->copy_to(out);
         }
-        if (refused_problems > problems_shown)
-            err << "... and " << refused_problems - problems_shown << " more problems (see the summary).\n";
+        if (o.out_json == "-") {
+            out << json_head;
+            scratch.json->copy_to(out);
+            out << batch_result_json_tail;
+        }
+
+        for (const auto& p : r.problems)
+            err << "error: " << message_text(p.where) << ": " << message_text(p.message) << "\n";
+        if (r.problem_count > problems_shown)
+            err << "... and " << r.problem_count - problems_shown << " more problems (see the summary).\n";
         const bool data_on_stdout = csv_target == "-" || o.out_json == "-";
         if (!o.quiet) (data_on_stdout ? err : out) << "pinproof batch: " << batch_counts_text(r.summary) << ".\n";
         if (r.summary.refused > 0) return exit_error;

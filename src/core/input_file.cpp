@@ -74,6 +74,12 @@ public:
     descriptor(const descriptor&) = delete;
     descriptor& operator=(const descriptor&) = delete;
     int get() const { return fd_; }
+    int release()
+    {
+        const int fd = fd_;
+        fd_ = -1;
+        return fd;
+    }
 
 private:
     int fd_;
@@ -104,6 +110,7 @@ void read_to_end(int fd, const std::string& path, const std::string& what, std::
 // second kind of input named "-" is refused.
 struct standard_input_read {
     bool done = false;
+    bool streamed = false;  // read part by part: its text was not kept
     std::string what, text;
 };
 standard_input_read& standard_input()
@@ -112,28 +119,53 @@ standard_input_read& standard_input()
     return in;
 }
 
+// Marks standard input as read as `what`, for a reader that streams it (its
+// text is not kept); refuses it when it was read already.
+void claim_standard_input(const std::string& what)
+{
+    std::lock_guard<std::mutex> lock(registry_mutex);
+    auto& in = standard_input();
+    if (in.done)
+        throw input_error("-", "standard input can be read once, and it is already the " + in.what + "; give the " +
+                                   what + " as a file");
+    in.done = true;
+    in.what = what;
+    in.streamed = true;
+    registry().push_back({file_identity{}, "-", what + " (standard input)", 0});
+}
+
 std::string read_standard_input(const std::string& what)
 {
     std::lock_guard<std::mutex> lock(registry_mutex);
     auto& in = standard_input();
     if (in.done) {
-        if (in.what == what) return in.text;
+        if (in.what == what && !in.streamed) return in.text;
         throw input_error("-", "standard input can be read once, and it is already the " + in.what +
                                    "; give the " + what + " as a file");
     }
     std::string text;
     read_to_end(STDIN_FILENO, "-", what, text);
-    in = {true, what, text};
+    in.done = true;
+    in.what = what;
+    in.text = text;
     registry().push_back({file_identity{}, "-", what + " (standard input)", text.size()});
     return text;
 }
 
 }  // namespace
 
-std::string read_input_file(const std::string& path, const std::string& what)
+input_file_stream::input_file_stream(const std::string& path, const std::string& what) : path_(path), what_(what)
 {
     if (path.empty()) throw input_error("(command line)", "expected the path of the " + what + ", found an empty name");
-    if (path == "-") return read_standard_input(what);
+    if (path == "-") {
+        claim_standard_input(what);
+        fd_ = ::dup(STDIN_FILENO);
+        if (fd_ < 0) {
+            const int e = errno;
+            throw input_error(path, "cannot read the " + what + " from standard input: " + std::strerror(e));
+        }
+        return;
+    }
     // Look before opening: opening a FIFO with no writer would block, and a
     // directory opens fine on Linux.
     struct stat st {};
@@ -158,11 +190,52 @@ std::string read_input_file(const std::string& path, const std::string& what)
     if (::fstat(fd.get(), &opened) != 0 || (!S_ISREG(opened.st_mode) && !S_ISFIFO(opened.st_mode)))
         throw input_error(path, std::string("expected the ") + what + " as a file, found " + kind_of(opened.st_mode));
     remember(opened, path, what);
+    if (S_ISREG(opened.st_mode)) size_ = static_cast<std::uintmax_t>(opened.st_size);
+    fd_ = fd.release();
+}
 
+input_file_stream::~input_file_stream()
+{
+    if (fd_ >= 0) ::close(fd_);
+}
+
+std::size_t input_file_stream::read_more(std::string& text, std::size_t max)
+{
+    if (fd_ < 0) return 0;
+    const std::size_t before = text.size();
+    text.resize(before + max);
+    for (;;) {
+        const ssize_t n = ::read(fd_, text.data() + before, max);
+        if (n < 0) {
+            if (errno == EINTR) continue;
+            const int e = errno;
+            text.resize(before);
+            throw input_error(path_, "cannot read the " + what_ + ": " + std::strerror(e));
+        }
+        text.resize(before + static_cast<std::size_t>(n));
+        if (n == 0) {
+            note_bytes(path_, read_);
+            ::close(fd_);
+            fd_ = -1;
+            return 0;
+        }
+        // A file that grows while it is read, or a pipe, is still held to the limit.
+        if (read_ + static_cast<std::size_t>(n) > max_input_bytes)
+            throw input_error(path_, "expected a " + what_ + " of at most 512 MiB, found more; the limit is " +
+                                         size_text(max_input_bytes));
+        read_ += static_cast<std::size_t>(n);
+        return static_cast<std::size_t>(n);
+    }
+}
+
+std::string read_input_file(const std::string& path, const std::string& what)
+{
+    if (path == "-") return read_standard_input(what);
+    input_file_stream in(path, what);
     std::string text;
-    if (S_ISREG(opened.st_mode)) text.reserve(static_cast<std::size_t>(opened.st_size));
-    read_to_end(fd.get(), path, what, text);
-    note_bytes(path, text.size());
+    if (in.size() > 0) text.reserve(static_cast<std::size_t>(in.size()));
+    while (in.read_more(text, 1 << 16) > 0) {
+    }
     return text;
 }
 

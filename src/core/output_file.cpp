@@ -11,7 +11,9 @@
 #include <climits>
 #include <cstdlib>
 #include <cstring>
+#include <algorithm>
 #include <memory>
+#include <ostream>
 #include <optional>
 
 #include "pinproof/core/errors.hpp"
@@ -181,6 +183,19 @@ std::vector<resolved_target> resolve_all(const std::vector<std::pair<std::string
     return out;
 }
 
+void write_bytes(int fd, const char* p, std::size_t left, const std::string& shown)
+{
+    while (left > 0) {
+        const ssize_t n = ::write(fd, p, left);
+        if (n < 0) {
+            if (errno == EINTR) continue;
+            throw error("cannot write " + shown + ": " + why(errno));
+        }
+        p += n;
+        left -= static_cast<std::size_t>(n);
+    }
+}
+
 // A temporary beside its target, removed on destruction unless renamed.
 class temporary {
 public:
@@ -229,19 +244,14 @@ public:
     temporary(const temporary&) = delete;
     temporary& operator=(const temporary&) = delete;
 
-    void write(const std::string& content, const std::string& shown)
+    void write(const std::string& content, const std::string& shown) { write(content, nullptr, "", shown); }
+
+    // `head`, the bytes of `body` (when given) and `tail`, then to the disk.
+    void write(const std::string& head, scratch_file* body, const std::string& tail, const std::string& shown)
     {
-        const char* p = content.data();
-        std::size_t left = content.size();
-        while (left > 0) {
-            const ssize_t n = ::write(fd_, p, left);
-            if (n < 0) {
-                if (errno == EINTR) continue;
-                throw error("cannot write " + shown + ": " + why(errno));
-            }
-            p += n;
-            left -= static_cast<std::size_t>(n);
-        }
+        write_bytes(fd_, head.data(), head.size(), shown);
+        if (body) body->copy_to(fd_, shown);
+        write_bytes(fd_, tail.data(), tail.size(), shown);
         if (::fsync(fd_) != 0) throw error("cannot write " + shown + ": " + why(errno));
         const int fd = fd_;
         fd_ = -1;
@@ -275,7 +285,13 @@ void sync_directory(const std::string& path)
 
 void output_set::add(std::string option, std::string path, std::string content)
 {
-    outputs_.push_back({std::move(option), std::move(path), std::move(content)});
+    outputs_.push_back({std::move(option), std::move(path), std::move(content), nullptr, ""});
+}
+
+void output_set::add(std::string option, std::string path, std::string head, std::shared_ptr<scratch_file> body,
+                     std::string tail)
+{
+    outputs_.push_back({std::move(option), std::move(path), std::move(head), std::move(body), std::move(tail)});
 }
 
 void output_set::add_input(std::string path)
@@ -300,7 +316,7 @@ void output_set::commit()
     std::vector<std::unique_ptr<temporary>> temps;
     for (std::size_t i = 0; i < outputs_.size(); ++i) {
         temps.push_back(std::make_unique<temporary>(resolved[i]));
-        temps.back()->write(outputs_[i].content, outputs_[i].path);
+        temps.back()->write(outputs_[i].content, outputs_[i].body.get(), outputs_[i].tail, outputs_[i].path);
     }
     std::string failed;
     {
@@ -327,6 +343,97 @@ void write_file_atomically(const std::string& path, const std::string& content)
     output_set s;
     s.add("(output)", path, content);
     s.commit();
+}
+
+scratch_file::scratch_file(const std::string& target)
+{
+    std::string dir;
+    if (target == "-" || target.empty()) {
+        const char* tmp = std::getenv("TMPDIR");
+        dir = tmp && *tmp ? tmp : "/tmp";
+    } else {
+        dir = directory_of(target);
+    }
+    shown_ = "a scratch file in " + dir;
+    // Unnamed where the file system allows (Linux O_TMPFILE): nothing to
+    // remove, whatever ends the process. Else a named file removed at once.
+    fd_ = ::open(dir.c_str(), O_TMPFILE | O_RDWR | O_CLOEXEC, 0600);
+    if (fd_ < 0) {
+        std::string name = dir + "/.pinproof-scratch-XXXXXX";
+        signals_blocked blocked;
+        fd_ = ::mkostemp(name.data(), O_CLOEXEC);
+        if (fd_ < 0) throw error("cannot write " + shown_ + ": " + why(errno));
+        ::unlink(name.c_str());
+    }
+    buffer_.reserve(buffer_bytes);
+}
+
+scratch_file::~scratch_file()
+{
+    if (fd_ >= 0) ::close(fd_);
+}
+
+void scratch_file::append(std::string_view text)
+{
+    if (buffer_.size() + text.size() > buffer_bytes) flush();
+    if (text.size() > buffer_bytes) {
+        write_bytes(fd_, text.data(), text.size(), shown_);
+        written_ += text.size();
+    } else {
+        buffer_.append(text);
+    }
+}
+
+void scratch_file::flush()
+{
+    write_bytes(fd_, buffer_.data(), buffer_.size(), shown_);
+    written_ += buffer_.size();
+    buffer_.clear();
+}
+
+void scratch_file::clear()
+{
+    buffer_.clear();
+    buffer_.shrink_to_fit();
+    written_ = 0;
+    if (::ftruncate(fd_, 0) != 0 || ::lseek(fd_, 0, SEEK_SET) != 0) throw error("cannot write " + shown_ + ": " + why(errno));
+}
+
+void scratch_file::copy_to(int fd, const std::string& shown)
+{
+    flush();
+    off_t from = 0;
+    std::uintmax_t left = written_;
+    // In the kernel where it can (copy_file_range), else through a buffer.
+    while (left > 0) {
+        const ssize_t n = ::copy_file_range(fd_, &from, fd, nullptr, left, 0);
+        if (n <= 0) break;
+        left -= static_cast<std::uintmax_t>(n);
+    }
+    std::string buf(std::size_t{1} << 16, '\0');
+    while (left > 0) {
+        const ssize_t n = ::pread(fd_, buf.data(), std::min<std::uintmax_t>(left, buf.size()), from);
+        if (n < 0 && errno == EINTR) continue;
+        if (n <= 0) throw error("cannot write " + shown + ": cannot read back " + shown_ + ": " + why(n < 0 ? errno : EIO));
+        write_bytes(fd, buf.data(), static_cast<std::size_t>(n), shown);
+        from += n;
+        left -= static_cast<std::uintmax_t>(n);
+    }
+}
+
+void scratch_file::copy_to(std::ostream& out)
+{
+    flush();
+    std::string buf(std::size_t{1} << 16, '\0');
+    off_t from = 0;
+    for (std::uintmax_t left = written_; left > 0;) {
+        const ssize_t n = ::pread(fd_, buf.data(), std::min<std::uintmax_t>(left, buf.size()), from);
+        if (n < 0 && errno == EINTR) continue;
+        if (n <= 0) throw error("cannot read back " + shown_ + ": " + why(n < 0 ? errno : EIO));
+        out.write(buf.data(), n);
+        from += n;
+        left -= static_cast<std::uintmax_t>(n);
+    }
 }
 
 void remove_output_temporaries() noexcept

@@ -448,6 +448,8 @@ std::string format_number(double value, int significant)
     // decimal digits there and so print the same; the shown figures are then
     // taken from those digits, half away from zero. At 9 figures and beyond the
     // value's own nearest decimal is used.
+    // Every message of every check goes through here: the figures are kept in
+    // fixed buffers on the stack, not in strings.
     constexpr int decimal_figures = 9;
     const int figures = std::max(significant, decimal_figures);
     char buf[64];
@@ -456,49 +458,75 @@ std::string format_number(double value, int significant)
     const char* e = std::find(buf, r.ptr, 'e');
     int exponent = 0;
     std::from_chars(e + 1 + (e[1] == '+'), r.ptr, exponent);
-    std::string digits;
+    char digits[32];  // the `figures` significant digits, without the point
+    int nd = 0;
     for (const char* c = buf; c != e; ++c)
-        if (*c != '.') digits += *c;
-    // The first n figures of `digits`, rounded half away from zero; a carry
-    // out of the first figure (9.9996 -> 10.00) raises the exponent by one.
-    auto round_to = [&](int n, int& exp) {
-        std::string out = digits.substr(0, static_cast<std::size_t>(n));
+        if (*c != '.') digits[nd++] = *c;
+    // The first n figures of `digits` (all of them when there are fewer) into
+    // `out`, rounded half away from zero; a carry out of the first figure
+    // (9.9996 -> 10.00) raises the exponent by one. Returns how many figures.
+    auto round_to = [&](int n, char* out, int& exp) {
+        int len = std::min(n, nd);
+        std::copy(digits, digits + len, out);
         exp = exponent;
-        if (n < static_cast<int>(digits.size()) && digits[static_cast<std::size_t>(n)] >= '5') {
+        if (n < nd && digits[n] >= '5') {
             int i = n - 1;
-            while (i >= 0 && out[static_cast<std::size_t>(i)] == '9') out[static_cast<std::size_t>(i--)] = '0';
+            while (i >= 0 && out[i] == '9') out[i--] = '0';
             if (i >= 0) {
-                ++out[static_cast<std::size_t>(i)];
+                ++out[i];
             } else {
-                out = "1" + out.substr(0, out.size() - 1);
+                if (len > 0) std::copy_backward(out, out + len - 1, out + len);
+                out[0] = '1';
+                len = std::max(len, 1);
                 ++exp;
             }
         }
-        return out;
+        return len;
     };
+    char shown[32];
     int rounded_exponent = exponent;
-    std::string shown = round_to(significant, rounded_exponent);
+    const int ns = round_to(significant, shown, rounded_exponent);
     // The exponent of the rounded value decides the layout.
     const int decimals = std::max(0, significant - 1 - rounded_exponent);
-    std::string out = value < 0 ? "-" : "";
+    char text[96];
+    int k = 0;
+    if (value < 0) text[k++] = '-';
+    const auto put = [&](const char* from, int n) {
+        std::copy(from, from + n, text + k);
+        k += n;
+    };
     if (rounded_exponent >= 9 || decimals > 6) {
-        out += shown.substr(0, 1);
-        if (significant > 1) out += "." + shown.substr(1);
-        char exp[16];  // "e+" and at most the digits of an int
-        std::snprintf(exp, sizeof exp, "e%c%02d", rounded_exponent < 0 ? '-' : '+', std::abs(rounded_exponent));
-        return out + exp;
+        text[k++] = shown[0];
+        if (significant > 1) {
+            text[k++] = '.';
+            put(shown + 1, ns - 1);
+        }
+        k += std::snprintf(text + k, sizeof text - static_cast<std::size_t>(k), "e%c%02d",
+                           rounded_exponent < 0 ? '-' : '+', std::abs(rounded_exponent));
+        return std::string(text, static_cast<std::size_t>(k));
     }
     if (decimals == 0) {
         // Every figure before the decimal point is shown (12345 stays "12345"):
         // the value rounded to a whole number.
         int whole_exponent = exponent;
-        const std::string whole = round_to(exponent + 1, whole_exponent);
-        return out + whole + std::string(static_cast<std::size_t>(whole_exponent + 1) - whole.size(), '0');
+        char whole[32];
+        const int nw = round_to(exponent + 1, whole, whole_exponent);
+        put(whole, nw);
+        for (int z = whole_exponent + 1 - nw; z > 0; --z) text[k++] = '0';
+        return std::string(text, static_cast<std::size_t>(k));
     }
-    if (rounded_exponent < 0)
-        return out + "0." + std::string(static_cast<std::size_t>(-rounded_exponent - 1), '0') + shown;
-    const std::size_t point = static_cast<std::size_t>(rounded_exponent + 1);
-    return out + shown.substr(0, point) + "." + shown.substr(point);
+    if (rounded_exponent < 0) {
+        text[k++] = '0';
+        text[k++] = '.';
+        for (int z = -rounded_exponent - 1; z > 0; --z) text[k++] = '0';
+        put(shown, ns);
+        return std::string(text, static_cast<std::size_t>(k));
+    }
+    const int point = rounded_exponent + 1;
+    put(shown, point);
+    text[k++] = '.';
+    put(shown + point, ns - point);
+    return std::string(text, static_cast<std::size_t>(k));
 }
 
 }  // namespace pinproof

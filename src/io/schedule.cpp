@@ -101,9 +101,40 @@ namespace {
 // lines, quoted and unquoted cells.
 class csv_reader {
 public:
-    explicit csv_reader(std::string_view text_) : text(text_), n(text_.size())
+    explicit csv_reader(std::string_view text_, std::size_t first_line = 1, bool at_start = true)
+        : text(text_), n(text_.size()), line(first_line)
     {
-        if (n >= 3 && text.substr(0, 3) == "\xEF\xBB\xBF") pos = 3;
+        if (at_start && n >= 3 && text.substr(0, 3) == "\xEF\xBB\xBF") pos = 3;
+    }
+
+    // The records that end within the text, for a text that is a part of a
+    // file: unless `at_end`, a record is complete only once its line feed is
+    // read (a CR at the end of the part may be the first half of a CRLF, a
+    // quoted cell may go on in the next part).
+    csv_part read_part(std::vector<csv_record>& out, bool at_end)
+    {
+        while (pos < n) {
+            const std::size_t pos0 = pos, line0 = line;
+            bool complete = true;
+            try {
+                if (!skip_blank_or_comment()) {
+                    csv_record r = record();
+                    complete = at_end || text[pos - 1] == '\n';
+                    if (complete) out.push_back(std::move(r));
+                } else {
+                    complete = at_end || text[pos - 1] == '\n';
+                }
+            } catch (const input_error&) {
+                if (at_end) throw;
+                complete = false;  // a quoted cell open at the end of the part
+            }
+            if (!complete) {
+                pos = pos0;
+                line = line0;
+                break;
+            }
+        }
+        return {pos, line};
     }
 
     std::vector<csv_record> read()
@@ -249,6 +280,12 @@ private:
 }  // namespace
 
 std::vector<csv_record> read_csv(std::string_view text) { return csv_reader(text).read(); }
+
+csv_part read_csv_part(std::string_view text, std::size_t first_line, bool at_start, bool at_end,
+                       std::vector<csv_record>& out)
+{
+    return csv_reader(text, first_line, at_start).read_part(out, at_end);
+}
 
 std::string to_string(combination_set c) { return c == combination_set::en1990 ? "EN1990" : "ASCE7"; }
 

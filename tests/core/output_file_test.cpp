@@ -17,6 +17,7 @@
 
 #include <filesystem>
 #include <fstream>
+#include <memory>
 #include <sstream>
 #include <string>
 
@@ -169,4 +170,47 @@ TEST_CASE("input file - a file larger than 512 MiB is refused before it is read"
     } catch (const input_error& e) {
         CHECK(e.problems().front().message.find("at most 512 MiB") != std::string::npos);
     }
+}
+
+TEST_CASE("output set [POSIX] - content held in a scratch file is written as head and body and tail and no file is left")
+{
+    pinproof::testing::temp_dir d("output-file");
+    const std::string target = (d.path / "big.csv").string();
+    auto body = std::make_shared<pinproof::scratch_file>(target);
+    std::string expected;
+    for (int i = 0; i < 200000; ++i) {  // a few megabytes: more than the scratch file's buffer
+        const std::string line = std::to_string(i) + ",row\n";
+        body->append(line);
+        expected += line;
+    }
+    CHECK(body->size() == expected.size());
+    output_set s;
+    s.add("--out", target, "head\n", body, "tail\n");
+    s.commit();
+    CHECK(contents(d.path / "big.csv") == "head\n" + expected + "tail\n");
+    std::ostringstream copy;
+    body->copy_to(copy);
+    CHECK(copy.str() == expected);
+    body->clear();
+    CHECK(body->size() == 0);
+    // Only the target: the scratch file has no name, the temporary was renamed.
+    CHECK(entries(d.path) == 1);
+}
+
+TEST_CASE("input file - read part by part with the size and the identity of read_input_file")
+{
+    pinproof::testing::temp_dir d("output-file");
+    const std::string path = (d.path / "in.csv").string();
+    std::ofstream(path) << "0123456789";
+    pinproof::input_file_stream in(path, "schedule");
+    CHECK(in.size() == 10);
+    std::string text;
+    CHECK(in.read_more(text, 4) == 4);
+    CHECK(in.read_more(text, 100) == 6);
+    CHECK(in.read_more(text, 100) == 0);
+    CHECK(text == "0123456789");
+    CHECK(in.bytes_read() == 10);
+    output_set s;
+    s.add("--out", path, "x");
+    CHECK_THROWS_AS(s.check(), input_error);
 }

@@ -97,11 +97,21 @@ batch_result run_batch(const schedule& s, const detail_catalogue& catalogue, con
 // and what the closure rotations are), a header row, then one row per beam.
 // Moments in kN*m, rotations in mrad.
 std::string batch_summary_csv(const batch_result& r);
+// Its parts, for a summary written row by row: the header row (with its
+// newline) and one row's line in the given units.
+std::string batch_summary_csv_header(unit_system units);
+std::string batch_summary_line(const batch_row& row, unit_system units);
 
 // The JSON result: counts, and per beam the summary fields in SI base units
 // and, for an assessed beam, its full result (result_json.hpp) under "result".
 // Needs rows built with batch_options::json.
 std::string batch_result_json(const batch_result& r, const schedule& s, const detail_catalogue& catalogue);
+// Its parts, for a result written row by row: the text before the first beam,
+// then each row's `json` indented by two spaces, separated by ",\n", then a
+// newline and the tail.
+std::string batch_result_json_head(const batch_summary& summary, const std::string& schedule_source,
+                                  const detail_catalogue& catalogue);
+inline constexpr const char* batch_result_json_tail = " ]\n}\n";
 
 // One line: "312 rows: 300 checked (280 passed, 20 failed), 12 refused".
 std::string batch_counts_text(const batch_summary& s);

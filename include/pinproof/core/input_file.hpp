@@ -7,6 +7,7 @@
 // hard link) is refused before anything is written (output_file.hpp).
 #pragma once
 
+#include <cstddef>
 #include <cstdint>
 #include <string>
 #include <vector>
@@ -30,6 +31,26 @@ struct file_identity {
 // not exist, is a directory, a device or a socket, is larger than
 // max_input_bytes, or cannot be read. A pipe (FIFO) is read up to the same limit.
 std::string read_input_file(const std::string& path, const std::string& what);
+
+// An input file read part by part (a schedule too large to hold whole), with
+// the checks, the size limit and the identity record of read_input_file.
+class input_file_stream {
+public:
+    input_file_stream(const std::string& path, const std::string& what);  // throws as read_input_file
+    ~input_file_stream();
+    input_file_stream(const input_file_stream&) = delete;
+    input_file_stream& operator=(const input_file_stream&) = delete;
+
+    // Appends at most `max` bytes to `text`; returns how many, 0 at the end of the file.
+    std::size_t read_more(std::string& text, std::size_t max);
+    std::uintmax_t size() const { return size_; }  // of a regular file; 0 for a pipe
+    std::uintmax_t bytes_read() const { return read_; }
+
+private:
+    std::string path_, what_;
+    int fd_ = -1;
+    std::uintmax_t size_ = 0, read_ = 0;
+};
 
 // The identities of the files read by read_input_file in this process (since
 // the last forget_input_files_read) that are still found under the name they

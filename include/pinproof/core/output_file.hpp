@@ -22,16 +22,49 @@
 #pragma once
 
 #include <cstddef>
+#include <cstdint>
+#include <iosfwd>
+#include <memory>
 #include <string>
+#include <string_view>
 #include <vector>
 
 namespace pinproof {
+
+// Output too large to hold in memory (the summary of a batch of a million
+// rows): an unnamed file, created beside the output it is for (in $TMPDIR or
+// /tmp for standard output) and gone when closed or when the process ends,
+// however it ends; an output_set copies it into place.
+class scratch_file {
+public:
+    explicit scratch_file(const std::string& target);  // throws error when it cannot be created
+    ~scratch_file();
+    scratch_file(const scratch_file&) = delete;
+    scratch_file& operator=(const scratch_file&) = delete;
+
+    void append(std::string_view text);  // buffered; throws error (disk full)
+    void clear();                        // forgets everything appended
+    std::uintmax_t size() const { return written_ + buffer_.size(); }
+    // Every byte appended, to a file descriptor (`shown` names it in errors) or a stream.
+    void copy_to(int fd, const std::string& shown);
+    void copy_to(std::ostream& out);
+
+private:
+    static constexpr std::size_t buffer_bytes = std::size_t{1} << 20;
+    int fd_ = -1;
+    std::string buffer_, shown_;
+    std::uintmax_t written_ = 0;
+    void flush();
+};
 
 class output_set {
 public:
     // `option` names the output in messages ("--json", "-o"); "-" is not a file
     // and must be handled by the caller.
     void add(std::string option, std::string path, std::string content);
+    // Content held in a scratch file: `head`, the scratch file's bytes, `tail`.
+    void add(std::string option, std::string path, std::string head, std::shared_ptr<scratch_file> body,
+             std::string tail);
 
     // Inputs named by the caller, compared by identity in addition to every
     // file read by read_input_file (input_file.hpp).
@@ -50,6 +83,8 @@ public:
 private:
     struct output {
         std::string option, path, content;
+        std::shared_ptr<scratch_file> body;  // between content and tail, when set
+        std::string tail;
     };
     std::vector<output> outputs_;
     std::vector<std::string> inputs_;

@@ -40,6 +40,20 @@ struct csv_record {
 // marks only that record.
 std::vector<csv_record> read_csv(std::string_view text);
 
+// The records of a part of a CSV file (a file read part by part): `text`
+// starts at the start of a record, on line `first_line`; `at_start` when it is
+// the start of the file (a byte-order mark is skipped), `at_end` when it ends
+// the file. Appends the records that end within `text` to `out`; a record that
+// may go on past the end of the part is left for the next part. Returns the
+// bytes read and the line the next part starts on. Throws as read_csv, and for
+// an open quote only `at_end`.
+struct csv_part {
+    std::size_t bytes = 0;
+    std::size_t next_line = 1;
+};
+csv_part read_csv_part(std::string_view text, std::size_t first_line, bool at_start, bool at_end,
+                       std::vector<csv_record>& out);
+
 // Named sets of load combinations for the cases G (permanent, "D" in ASCE 7)
 // and Q (imposed, "L" in ASCE 7):
 //   EN1990: strength 1.35G + 1.5Q (EN 1990 Eq. 6.10 with Table A1.2(B):
