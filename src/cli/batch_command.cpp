@@ -94,6 +94,12 @@ int batch_command(const batch_command_options& o, std::ostream& out, std::ostrea
         err << "pinproof: --out-csv and --out-json cannot both write to stdout ('-'); nothing was written.\n";
         return exit_error;
     }
+    if (o.schedule == "-" && o.details == "-") {
+        err << "pinproof: the input has 1 problem; nothing was written.\n"
+            << "error: --details: standard input can be read once, and the schedule is read from it ('-'); give the "
+               "detail catalogue as a file\n";
+        return exit_error;
+    }
     try {
         // The outputs are refused before any work when they name an input.
         output_set outputs;

@@ -315,6 +315,9 @@ else fail "batch --details -: a different summary"; fi
 "$bin" check - --details - <p.json >/dev/null 2>../err; code=$?
 if [ "$code" = 2 ] && grep -q "standard input can be read once" ../err; then pass "two inputs named '-' refused"
 else fail "two inputs named '-': exit $code, $(head -2 ../err)"; fi
+"$bin" batch - --details - <s.csv >/dev/null 2>../err; code=$?
+if [ "$code" = 2 ] && grep -q "standard input can be read once" ../err; then pass "batch - --details - refused"
+else fail "batch - --details -: exit $code, $(head -2 ../err)"; fi
 "$bin" sweep - --beam MZ-C/3-4 --csv - <p.json >../sw.csv 2>/dev/null; code=$?
 if [ "$code" -le 1 ] && head -1 ../sw.csv | grep -q 'kappa\|stiffness'; then pass "sweep - --csv -"
 else fail "sweep - --csv -: exit $code, $(head -c 80 ../sw.csv)"; fi
