@@ -103,7 +103,9 @@ nonlinear_solution solve_with_laws(const beam_model& model, const beam& b, const
                                    stiffness e, double load_factor = 1.0)
 {
     try {
-        return solve_nonlinear(model, end_for_joint(b.start, s), end_for_joint(b.end, e), load_factor);
+        // The states need no yield load factors: the joint-moment check
+        // finds its own (joint_strength.cpp).
+        return solve_nonlinear(model, end_for_joint(b.start, s), end_for_joint(b.end, e), load_factor, false);
     } catch (const nonlinear_failure& f) {
         throw input_error(b.pointer + "/joints",
                           std::string("no state of the beam with its joints' moment-rotation laws could be found "

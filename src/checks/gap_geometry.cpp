@@ -196,7 +196,7 @@ rotation_demand rotation_demand::from_end_rotation(double signed_rotation)
 // ---------------------------------------------------------------------------
 // Closure.
 
-closure find_closure(const beam_end_geometry& g, rotation_sense sense)
+closure find_closure(const beam_end_geometry& g, rotation_sense sense, bool verify)
 {
     closure result;
     result.sense = sense;
@@ -218,9 +218,9 @@ closure find_closure(const beam_end_geometry& g, rotation_sense sense)
     // The engine's own check: nothing overlaps before the contact found, and
     // the outline touches at it.
     const double tol = check_tolerance(g);
-    check_no_overlap_before(g, sense, first, tol);
+    if (verify) check_no_overlap_before(g, sense, first, tol);
     if (first) {
-        const double at_contact = clearance(g, sense, first->angle);
+        const double at_contact = verify ? clearance(g, sense, first->angle) : 0.0;
         if (std::abs(at_contact) > tol) {
             std::ostringstream m;
             m << "gap closure: clearance at the contact found is " << at_contact << " m, expected zero";
@@ -247,12 +247,15 @@ double closure_or_max(const closure& c) { return c.rotation.value_or(max_searche
 
 // Worst shortfall of closure below demand over the senses with a demand, at a
 // worst-case gap `gap_in_place`.
-double shortfall(const connection_detail& d, const section& beam, const rotation_demand& demand, double gap_in_place)
+double shortfall(const connection_detail& d, const section& beam, const rotation_demand& demand, double gap_in_place,
+                 bool verify)
 {
     const beam_end_geometry g = build_geometry(d, beam, gap_in_place);
     double worst = std::numeric_limits<double>::max();
-    if (demand.sagging > 0) worst = std::min(worst, closure_or_max(find_closure(g, rotation_sense::sagging)) - demand.sagging);
-    if (demand.hogging > 0) worst = std::min(worst, closure_or_max(find_closure(g, rotation_sense::hogging)) - demand.hogging);
+    if (demand.sagging > 0)
+        worst = std::min(worst, closure_or_max(find_closure(g, rotation_sense::sagging, verify)) - demand.sagging);
+    if (demand.hogging > 0)
+        worst = std::min(worst, closure_or_max(find_closure(g, rotation_sense::hogging, verify)) - demand.hogging);
     return worst;
 }
 
@@ -282,28 +285,55 @@ std::optional<double> min_gap_required(const connection_detail& d, const section
     const double lo = 1e-5;
     const double hi = std::max(0.05, 3.0 * d.gap);
     constexpr int steps = 64;
-    auto f = [&](double gap) { return shortfall(d, beam, demand, gap); };
+    // The trial geometries skip the engine's own check; the answer is
+    // verified at the end.
+    auto f = [&](double gap) { return shortfall(d, beam, demand, gap, false); };
     double a = lo, fa = f(lo);
     if (fa >= 0) {
         say("passes at any gap down to " + mm(lo) + " in place");
         return lo + d.gap_tolerance;
     }
-    for (int k = 1; k <= steps; ++k) {
-        const double b = lo + (hi - lo) * k / steps;
-        const double fb = f(b);
-        if (fb >= 0) {
-            std::uintmax_t iterations = 200;
-            const auto tol = [](double x, double y) { return std::abs(x - y) <= 1e-10 * std::max(std::abs(x), std::abs(y)); };
-            const auto bracket = boost::math::tools::toms748_solve(f, a, b, fa, fb, tol, iterations);
-            say("");
-            // The upper end of the bracket passes.
-            return bracket.second + d.gap_tolerance;
-        }
-        a = b;
-        fa = fb;
+    // The closure grows with the gap: moving the support away from the beam
+    // end only removes material from the beam end's path (every support
+    // outline is closed under a shift away from the beam). So the first of
+    // the `steps` equal steps that passes is found by doubling the step
+    // (1, 2, 4, ...; the answer is usually within the first few) and then
+    // halving, in at most 2 log2(steps) trials instead of up to `steps`, and
+    // the root is refined inside that one step.
+    const auto at_step = [&](int k) { return lo + (hi - lo) * k / steps; };
+    int failing = 0, passing = 1;  // f(step failing) < 0 <= f(step passing)
+    double f_passing = f(at_step(passing));
+    while (f_passing < 0 && passing < steps) {
+        failing = passing;
+        fa = f_passing;
+        passing = std::min(2 * passing, steps);
+        f_passing = f(at_step(passing));
     }
-    say("no gap up to " + mm(hi) + " in place passes; the closure is limited by something the gap does not move");
-    return std::nullopt;
+    if (f_passing < 0) {
+        say("no gap up to " + mm(hi) + " in place passes; the closure is limited by something the gap does not move");
+        return std::nullopt;
+    }
+    while (passing - failing > 1) {
+        const int mid = (failing + passing) / 2;
+        const double fm = f(at_step(mid));
+        if (fm >= 0) {
+            passing = mid;
+            f_passing = fm;
+        } else {
+            failing = mid;
+            fa = fm;
+        }
+    }
+    a = at_step(failing);
+    const double b = at_step(passing);
+    std::uintmax_t iterations = 200;
+    const auto tol = [](double x, double y) { return std::abs(x - y) <= 1e-10 * std::max(std::abs(x), std::abs(y)); };
+    const auto bracket = boost::math::tools::toms748_solve(f, a, b, fa, f_passing, tol, iterations);
+    if (shortfall(d, beam, demand, bracket.second, true) < 0)
+        throw internal_error("gap search: the gap found does not pass on the verified geometry");
+    say("");
+    // The upper end of the bracket passes.
+    return bracket.second + d.gap_tolerance;
 }
 
 std::string gap_check::critical_point() const
@@ -339,7 +369,10 @@ const closing_geometry& geometry_of(const connection_detail& d, const section& b
 
 }  // namespace
 
-gap_check check_gap(const connection_detail& d, const section& beam, const rotation_demand& demand, bool find_min_gap)
+namespace {
+
+gap_check compute_gap_check(const connection_detail& d, const section& beam, const rotation_demand& demand,
+                            bool find_min_gap)
 {
     gap_check r;
     r.gap = d.gap;
@@ -381,6 +414,28 @@ gap_check check_gap(const connection_detail& d, const section& beam, const rotat
     r.passes = r.sagging.passes && r.hogging.passes;
     if (find_min_gap) r.min_gap_required = min_gap_required(d, beam, demand, &r.min_gap_note);
     else r.min_gap_note.clear();  // not searched: nothing to say
+    return r;
+}
+
+}  // namespace
+
+// The check depends on nothing but the detail, the section and the demand,
+// and the demand of the default basis (the pinned beam's rotation) does not
+// change with the joint's stiffness: a threshold search or a sweep asks for
+// the same check at every probe. Kept per thread, keyed by the bits of every
+// input, so a repeat is bit-identical to the first answer.
+gap_check check_gap(const connection_detail& d, const section& beam, const rotation_demand& demand, bool find_min_gap)
+{
+    thread_local std::map<std::string, gap_check> cache;
+    std::string key = detail_key(d, beam);
+    const double parts[2] = {demand.sagging, demand.hogging};
+    key.append(reinterpret_cast<const char*>(parts), sizeof parts);
+    key.push_back(find_min_gap ? '1' : '0');
+    const auto it = cache.find(key);
+    if (it != cache.end()) return it->second;
+    if (cache.size() > 4096) cache.clear();
+    gap_check r = compute_gap_check(d, beam, demand, find_min_gap);
+    cache.emplace(std::move(key), r);
     return r;
 }
 

@@ -166,7 +166,7 @@ nonlinear_end nonlinear_end::capped_at(double cap) const
 }
 
 nonlinear_solution solve_nonlinear(const beam_model& model, const nonlinear_end& start, const nonlinear_end& end,
-                                   double load_factor)
+                                   double load_factor, bool find_yield)
 {
     if (!std::isfinite(load_factor) || load_factor < 0)
         throw nonlinear_failure("the load factor must be finite and >= 0");
@@ -204,7 +204,7 @@ nonlinear_solution solve_nonlinear(const beam_model& model, const nonlinear_end&
         }
         // The load factor at which an end first reaches its cap, by bisection
         // between the last two converged steps.
-        for (int j = 0; j < 2; ++j) {
+        for (int j = 0; j < 2 && find_yield; ++j) {
             std::optional<double>& yield = j == 0 ? out.start_yield_factor : out.end_yield_factor;
             if (yield || !at_cap(ends[j], trial[j])) continue;
             double lo = lambda, hi = next;
@@ -257,7 +257,7 @@ std::optional<collapse_point> beam_collapse(const beam_model& model, const nonli
     if (!(pinned_sagging > 0)) return std::nullopt;
     const nonlinear_end s = start.capped_at(plastic_moment), e = end.capped_at(plastic_moment);
     auto excess = [&](double lambda) {
-        return solve_nonlinear(model, s, e, lambda).state.max_sagging_moment - plastic_moment;
+        return solve_nonlinear(model, s, e, lambda, false).state.max_sagging_moment - plastic_moment;
     };
     // Bracket: at lambda = 2 M_pl / M_0 the sagging moment is at least
     // lambda M_0 - M_pl = M_pl whatever end moments (each at most M_pl) act.
@@ -284,7 +284,7 @@ std::optional<collapse_point> beam_collapse(const beam_model& model, const nonli
             side = 1;
         }
     }
-    const nonlinear_solution at = solve_nonlinear(model, s, e, hi);
+    const nonlinear_solution at = solve_nonlinear(model, s, e, hi, false);
     collapse_point c;
     c.load_factor = hi;
     c.rotation_start = at.state.rotation_start;

@@ -4,6 +4,7 @@
 #include <algorithm>
 #include <cmath>
 #include <stdexcept>
+#include <vector>
 
 #include "pinproof/core/errors.hpp"
 
@@ -102,6 +103,107 @@ double lowest_by_inverse_iteration(const Eigen::MatrixXd& K, const Eigen::Matrix
     return 0.0;
 }
 
+// A symmetric band matrix of half-bandwidth `width`, held as its lower band:
+// row i keeps A(i, i - width) ... A(i, i). The beam's element matrices couple
+// a node's two degrees of freedom with the next node's only, so in any
+// ordering that keeps the nodes in sequence the half-bandwidth is 3.
+struct band_matrix {
+    static constexpr int width = 3;
+    Eigen::Index n = 0;
+    std::vector<double> lower;  // n rows of width + 1; entry (i, j), j in [i - width, i], at i * (width + 1) + (j - i + width)
+    void resize(Eigen::Index rows)
+    {
+        n = rows;
+        lower.assign(static_cast<std::size_t>(n * (width + 1)), 0.0);
+    }
+    double& at(Eigen::Index i, Eigen::Index j) { return lower[static_cast<std::size_t>(i * (width + 1) + (j - i + width))]; }
+    double at(Eigen::Index i, Eigen::Index j) const
+    {
+        return lower[static_cast<std::size_t>(i * (width + 1) + (j - i + width))];
+    }
+    // y = A x, from the lower band and its mirror.
+    void multiply(const std::vector<double>& x, std::vector<double>& y) const
+    {
+        y.assign(x.size(), 0.0);
+        for (Eigen::Index i = 0; i < n; ++i)
+            for (Eigen::Index j = std::max<Eigen::Index>(0, i - width); j <= i; ++j) {
+                const double a = at(i, j);
+                y[static_cast<std::size_t>(i)] += a * x[static_cast<std::size_t>(j)];
+                if (j != i) y[static_cast<std::size_t>(j)] += a * x[static_cast<std::size_t>(i)];
+            }
+    }
+    // In place, A = L L^T (banded Cholesky; Golub and Van Loan, Matrix
+    // Computations, 4th ed., 4.3.5). False where a pivot is not positive, that
+    // is where A is not positive definite.
+    bool factorise()
+    {
+        for (Eigen::Index j = 0; j < n; ++j) {
+            const Eigen::Index first = std::max<Eigen::Index>(0, j - width);
+            double d = at(j, j);
+            for (Eigen::Index k = first; k < j; ++k) d -= at(j, k) * at(j, k);
+            if (!(d > 0)) return false;
+            const double root = std::sqrt(d);
+            at(j, j) = root;
+            for (Eigen::Index i = j + 1; i <= std::min(n - 1, j + width); ++i) {
+                double v = at(i, j);
+                for (Eigen::Index k = std::max<Eigen::Index>(0, i - width); k < j; ++k) v -= at(i, k) * at(j, k);
+                at(i, j) = v / root;
+            }
+        }
+        return true;
+    }
+    // x = A^-1 b with the factor from factorise().
+    void solve(std::vector<double>& x) const
+    {
+        for (Eigen::Index i = 0; i < n; ++i) {
+            double v = x[static_cast<std::size_t>(i)];
+            for (Eigen::Index k = std::max<Eigen::Index>(0, i - width); k < i; ++k) v -= at(i, k) * x[static_cast<std::size_t>(k)];
+            x[static_cast<std::size_t>(i)] = v / at(i, i);
+        }
+        for (Eigen::Index i = n - 1; i >= 0; --i) {
+            double v = x[static_cast<std::size_t>(i)];
+            for (Eigen::Index k = i + 1; k <= std::min(n - 1, i + width); ++k) v -= at(k, i) * x[static_cast<std::size_t>(k)];
+            x[static_cast<std::size_t>(i)] = v / at(i, i);
+        }
+    }
+};
+
+double dot(const std::vector<double>& a, const std::vector<double>& b)
+{
+    double s = 0;
+    for (std::size_t i = 0; i < a.size(); ++i) s += a[i] * b[i];
+    return s;
+}
+
+// The same inverse iteration as lowest_by_inverse_iteration, on band
+// matrices (k is factorised in place): the cost of a step is linear in the
+// number of elements instead of quadratic, and the factorisation linear
+// instead of cubic. Used where every degree of freedom carries mass, so that
+// nothing is condensed and the matrices keep their band.
+double lowest_by_band_inverse_iteration(band_matrix& k, const band_matrix& m, const std::vector<double>& u)
+{
+    thread_local std::vector<double> x, Mx, y, My;
+    if (!k.factorise()) return 0.0;
+    m.multiply(u, Mx);
+    x = Mx;
+    k.solve(x);
+    double previous = 0.0;
+    for (int step = 0; step < 200; ++step) {
+        m.multiply(x, Mx);
+        y = Mx;
+        k.solve(y);
+        m.multiply(y, My);
+        const double yMy = dot(y, My);
+        if (!(std::isfinite(yMy) && yMy > 0)) return 0.0;
+        const double mu = dot(y, Mx) / yMy;  // Rayleigh quotient y'Ky / y'My, with K y = M x
+        const double scale = 1.0 / std::sqrt(yMy);
+        for (std::size_t i = 0; i < y.size(); ++i) x[i] = y[i] * scale;
+        if (step > 0 && std::abs(mu - previous) <= 1e-14 * mu) return mu;
+        previous = mu;
+    }
+    return 0.0;
+}
+
 }  // namespace
 
 double first_natural_frequency(double span, double EI, const std::vector<load>& loads, stiffness start, stiffness end,
@@ -128,80 +230,123 @@ double first_natural_frequency(double span, double EI, const std::vector<load>& 
     const std::size_t n_nodes = mm.nodes.size();
     // DOFs: node i -> w (2i), theta (2i + 1); the end deflections are held.
     const Eigen::Index full = static_cast<Eigen::Index>(2 * n_nodes);
-    thread_local Eigen::MatrixXd K, M;
-    K.setZero(full, full);
-    M.setZero(full, full);
-    for (std::size_t e = 0; e + 1 < n_nodes; ++e) {
+    const Eigen::Index rot_start = 1, rot_end = full - 1;
+    // The element matrices (Przemieniecki, Theory of Matrix Structural
+    // Analysis, 1968, from memory: the cubic Hermite element's stiffness and
+    // consistent mass), nondimensional.
+    const auto element = [&](std::size_t e, Eigen::Matrix4d& k, Eigen::Matrix4d& m) {
         const double l = (mm.nodes[e + 1] - mm.nodes[e]) / span;
         const double mu = mm.line_mass[e] / m_ref;
-        Eigen::Matrix4d k, m;
         k << 12, 6 * l, -12, 6 * l, 6 * l, 4 * l * l, -6 * l, 2 * l * l, -12, -6 * l, 12, -6 * l, 6 * l, 2 * l * l,
             -6 * l, 4 * l * l;
         k /= l * l * l;
         m << 156, 22 * l, 54, -13 * l, 22 * l, 4 * l * l, 13 * l, -3 * l * l, 54, 13 * l, 156, -22 * l, -13 * l,
             -3 * l * l, -22 * l, 4 * l * l;
         m *= mu * l / 420;
-        const Eigen::Index o = static_cast<Eigen::Index>(2 * e);
-        K.block<4, 4>(o, o) += k;
-        M.block<4, 4>(o, o) += m;
-    }
-    for (std::size_t i = 0; i < n_nodes; ++i)
-        M(static_cast<Eigen::Index>(2 * i), static_cast<Eigen::Index>(2 * i)) += mm.point_mass[i] / (m_ref * span);
-    // Springs: kappa = S L / EI on the end rotations.
-    const Eigen::Index rot_start = 1, rot_end = full - 1;
-    if (!start.is_rigid()) K(rot_start, rot_start) += start.ratio(EI, span);
-    if (!end.is_rigid()) K(rot_end, rot_end) += end.ratio(EI, span);
-
-    std::vector<Eigen::Index> kept;
+    };
+    // The degrees of freedom kept, in order, and each one's place among them (-1: held).
+    std::vector<Eigen::Index> kept, place(static_cast<std::size_t>(full), -1);
     for (Eigen::Index d = 0; d < full; ++d) {
         if (d == 0) continue;                    // the start's deflection held by its support
         if (d == full - 2 && !cantilever) continue;  // the end's too, unless it is a free tip
         if (d == rot_start && start.is_rigid()) continue;
         if (d == rot_end && end.is_rigid()) continue;
+        place[static_cast<std::size_t>(d)] = static_cast<Eigen::Index>(kept.size());
         kept.push_back(d);
     }
     const Eigen::Index n = static_cast<Eigen::Index>(kept.size());
-    thread_local Eigen::MatrixXd Kr, Mr;
-    Kr.resize(n, n);
-    Mr.resize(n, n);
-    for (Eigen::Index i = 0; i < n; ++i)
-        for (Eigen::Index j = 0; j < n; ++j) {
-            Kr(i, j) = K(kept[static_cast<std::size_t>(i)], kept[static_cast<std::size_t>(j)]);
-            Mr(i, j) = M(kept[static_cast<std::size_t>(i)], kept[static_cast<std::size_t>(j)]);
+
+    // Where every element carries mass, every degree of freedom does, nothing
+    // is condensed, and the matrices are assembled straight into band form.
+    const bool all_massive =
+        std::all_of(mm.line_mass.begin(), mm.line_mass.end(), [](double v) { return v > 0; });
+    double mu = 0.0;
+    if (all_massive) {
+        thread_local band_matrix kb, mb;
+        kb.resize(n);
+        mb.resize(n);
+        for (std::size_t e = 0; e + 1 < n_nodes; ++e) {
+            Eigen::Matrix4d k, m;
+            element(e, k, m);
+            for (int a = 0; a < 4; ++a)
+                for (int b = 0; b <= a; ++b) {
+                    const Eigen::Index i = place[2 * e + static_cast<std::size_t>(a)];
+                    const Eigen::Index j = place[2 * e + static_cast<std::size_t>(b)];
+                    if (i < 0 || j < 0) continue;
+                    kb.at(i, j) += k(a, b);
+                    mb.at(i, j) += m(a, b);
+                }
         }
-    // Degrees of freedom that carry no mass (all of them but the point masses'
-    // deflections when the beam carries point loads only) are condensed out
-    // statically, which is exact for them: K* = K_mm - K_mo K_oo^-1 K_om.
-    std::vector<Eigen::Index> massive, massless;
-    for (Eigen::Index i = 0; i < n; ++i) (Mr.row(i).cwiseAbs().maxCoeff() > 0 ? massive : massless).push_back(i);
-    if (massive.empty()) throw std::invalid_argument("the vibration combination carries no mass");
-    auto pick = [](const Eigen::MatrixXd& A, const std::vector<Eigen::Index>& r, const std::vector<Eigen::Index>& c) {
-        Eigen::MatrixXd B(static_cast<Eigen::Index>(r.size()), static_cast<Eigen::Index>(c.size()));
-        for (std::size_t i = 0; i < r.size(); ++i)
-            for (std::size_t j = 0; j < c.size(); ++j) B(static_cast<Eigen::Index>(i), static_cast<Eigen::Index>(j)) = A(r[i], c[j]);
-        return B;
-    };
-    thread_local Eigen::MatrixXd Kc, Mc;
-    if (massless.empty()) {
-        Kc = Kr;  // every degree of freedom carries mass (distributed loads): nothing to condense
-        Mc = Mr;
-    } else {
-        Kc = pick(Kr, massive, massive);
-        Mc = pick(Mr, massive, massive);
+        for (std::size_t i = 0; i < n_nodes; ++i) {
+            const Eigen::Index w = place[2 * i];
+            if (w >= 0) mb.at(w, w) += mm.point_mass[i] / (m_ref * span);
+        }
+        // Springs: kappa = S L / EI on the end rotations.
+        if (!start.is_rigid()) kb.at(place[1], place[1]) += start.ratio(EI, span);
+        if (!end.is_rigid()) kb.at(place.back(), place.back()) += end.ratio(EI, span);
+        std::vector<double> gravity(static_cast<std::size_t>(n), 0.0);
+        for (Eigen::Index i = 0; i < n; ++i)
+            if (kept[static_cast<std::size_t>(i)] % 2 == 0) gravity[static_cast<std::size_t>(i)] = 1.0;
+        mu = lowest_by_band_inverse_iteration(kb, mb, gravity);
     }
-    if (!massless.empty()) {
-        const Eigen::MatrixXd Kmo = pick(Kr, massive, massless);
-        Kc -= Kmo * pick(Kr, massless, massless).ldlt().solve(Kmo.transpose());
-    }
-    // The deflection DOFs among those kept: the start vector of the inverse iteration.
-    Eigen::VectorXd gravity = Eigen::VectorXd::Zero(static_cast<Eigen::Index>(massive.size()));
-    for (std::size_t i = 0; i < massive.size(); ++i)
-        if (kept[static_cast<std::size_t>(massive[i])] % 2 == 0) gravity(static_cast<Eigen::Index>(i)) = 1.0;
-    double mu = lowest_by_inverse_iteration(Kc, Mc, gravity);
     if (!(mu > 0)) {
-        Eigen::GeneralizedSelfAdjointEigenSolver<Eigen::MatrixXd> solver(Kc, Mc, Eigen::EigenvaluesOnly);
-        if (solver.info() != Eigen::Success) throw internal_error("the frequency eigenproblem did not converge");
-        mu = solver.eigenvalues()(0);
+        // Otherwise (or should the band iteration not settle) dense matrices,
+        // with the degrees of freedom that carry no mass (all of them but the
+        // point masses' deflections when the beam carries point loads only)
+        // condensed out statically, which is exact for them:
+        // K* = K_mm - K_mo K_oo^-1 K_om.
+        thread_local Eigen::MatrixXd K, M;
+        K.setZero(full, full);
+        M.setZero(full, full);
+        for (std::size_t e = 0; e + 1 < n_nodes; ++e) {
+            Eigen::Matrix4d k, m;
+            element(e, k, m);
+            const Eigen::Index o = static_cast<Eigen::Index>(2 * e);
+            K.block<4, 4>(o, o) += k;
+            M.block<4, 4>(o, o) += m;
+        }
+        for (std::size_t i = 0; i < n_nodes; ++i)
+            M(static_cast<Eigen::Index>(2 * i), static_cast<Eigen::Index>(2 * i)) += mm.point_mass[i] / (m_ref * span);
+        if (!start.is_rigid()) K(rot_start, rot_start) += start.ratio(EI, span);
+        if (!end.is_rigid()) K(rot_end, rot_end) += end.ratio(EI, span);
+        thread_local Eigen::MatrixXd Kr, Mr;
+        Kr.resize(n, n);
+        Mr.resize(n, n);
+        for (Eigen::Index i = 0; i < n; ++i)
+            for (Eigen::Index j = 0; j < n; ++j) {
+                Kr(i, j) = K(kept[static_cast<std::size_t>(i)], kept[static_cast<std::size_t>(j)]);
+                Mr(i, j) = M(kept[static_cast<std::size_t>(i)], kept[static_cast<std::size_t>(j)]);
+            }
+        std::vector<Eigen::Index> massive, massless;
+        for (Eigen::Index i = 0; i < n; ++i) (Mr.row(i).cwiseAbs().maxCoeff() > 0 ? massive : massless).push_back(i);
+        if (massive.empty()) throw std::invalid_argument("the vibration combination carries no mass");
+        auto pick = [](const Eigen::MatrixXd& A, const std::vector<Eigen::Index>& r, const std::vector<Eigen::Index>& c) {
+            Eigen::MatrixXd B(static_cast<Eigen::Index>(r.size()), static_cast<Eigen::Index>(c.size()));
+            for (std::size_t i = 0; i < r.size(); ++i)
+                for (std::size_t j = 0; j < c.size(); ++j)
+                    B(static_cast<Eigen::Index>(i), static_cast<Eigen::Index>(j)) = A(r[i], c[j]);
+            return B;
+        };
+        thread_local Eigen::MatrixXd Kc, Mc;
+        if (massless.empty()) {
+            Kc = Kr;
+            Mc = Mr;
+        } else {
+            Kc = pick(Kr, massive, massive);
+            Mc = pick(Mr, massive, massive);
+            const Eigen::MatrixXd Kmo = pick(Kr, massive, massless);
+            Kc -= Kmo * pick(Kr, massless, massless).ldlt().solve(Kmo.transpose());
+        }
+        // The deflection DOFs among those kept: the start vector of the inverse iteration.
+        Eigen::VectorXd gravity = Eigen::VectorXd::Zero(static_cast<Eigen::Index>(massive.size()));
+        for (std::size_t i = 0; i < massive.size(); ++i)
+            if (kept[static_cast<std::size_t>(massive[i])] % 2 == 0) gravity(static_cast<Eigen::Index>(i)) = 1.0;
+        mu = lowest_by_inverse_iteration(Kc, Mc, gravity);
+        if (!(mu > 0)) {
+            Eigen::GeneralizedSelfAdjointEigenSolver<Eigen::MatrixXd> solver(Kc, Mc, Eigen::EigenvaluesOnly);
+            if (solver.info() != Eigen::Success) throw internal_error("the frequency eigenproblem did not converge");
+            mu = solver.eigenvalues()(0);
+        }
     }
     if (!(std::isfinite(mu) && mu > 0)) throw internal_error("the frequency eigenproblem gave no positive eigenvalue");
     const double omega = std::sqrt(mu * EI / (m_ref * std::pow(span, 4)));

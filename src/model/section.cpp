@@ -9,6 +9,7 @@
 #include <stdexcept>
 #include <string>
 #include <system_error>
+#include <unordered_map>
 #include <utility>
 #include <vector>
 
@@ -300,18 +301,20 @@ section catalogue_section(const section_dimensions& d)
 
 namespace {
 
-// The properties of every catalogue section with its matching key, computed
-// once: a schedule looks up a few names many times.
+// Every catalogue section's matching key, formed once, beside its dimensions.
+// Its properties are computed when a name first asks for them, once per
+// thread: a project names a few sections of several hundred, and a schedule
+// looks up a few names many times.
 struct indexed_section {
     std::string key;
-    section properties;
+    const section_dimensions* dimensions = nullptr;
 };
 
 const std::vector<indexed_section>& catalogue_index()
 {
     static const std::vector<indexed_section> index = [] {
         std::vector<indexed_section> out;
-        for (const auto& d : parsed_catalogue()) out.push_back({lookup_key(d.name), catalogue_section(d)});
+        for (const auto& d : parsed_catalogue()) out.push_back({lookup_key(d.name), &d});
         return out;
     }();
     return index;
@@ -323,8 +326,13 @@ std::optional<section> find_catalogue_section(std::string_view name)
 {
     const std::string key = lookup_key(name);
     if (key.empty()) return std::nullopt;
-    for (const auto& i : catalogue_index()) {
-        if (i.key == key) return i.properties;
+    const auto& index = catalogue_index();
+    for (std::size_t i = 0; i < index.size(); ++i) {
+        if (index[i].key != key) continue;
+        thread_local std::unordered_map<std::size_t, section> computed;
+        auto it = computed.find(i);
+        if (it == computed.end()) it = computed.emplace(i, catalogue_section(*index[i].dimensions)).first;
+        return it->second;
     }
     return std::nullopt;
 }
@@ -344,7 +352,7 @@ std::vector<std::string> similar_catalogue_sections(std::string_view name, std::
     std::vector<std::string> out;
     for (const auto& [d, i] : near) {
         if (out.size() == most) break;
-        if (d == best) out.push_back(i->properties.name);
+        if (d == best) out.push_back(i->dimensions->name);
     }
     return out;
 }

@@ -44,7 +44,10 @@ struct closure {
     std::optional<contact_point> contact;
 };
 
-closure find_closure(const beam_end_geometry& g, rotation_sense sense);
+// `verify` runs the engine's own check (nothing overlaps before the contact
+// found, and the outline touches at it; an internal error otherwise). A root
+// search over many trial geometries leaves it off and verifies its answer.
+closure find_closure(const beam_end_geometry& g, rotation_sense sense, bool verify = true);
 
 // Result of one sense at the worst-case gap.
 struct sense_check {

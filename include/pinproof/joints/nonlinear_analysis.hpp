@@ -61,9 +61,11 @@ public:
 };
 
 // The state of the beam (its loads at factor 1 are the model's) at load_factor,
-// followed from zero in steps.
+// followed from zero in steps. With find_yield the load factor at which each
+// end first reaches its cap is located too (start/end_yield_factor); without
+// it those stay nullopt, and the state is the same.
 nonlinear_solution solve_nonlinear(const beam_model& model, const nonlinear_end& start, const nonlinear_end& end,
-                                   double load_factor = 1.0);
+                                   double load_factor = 1.0, bool find_yield = true);
 
 // The beam line of one end (0 start, 1 end) when the far end follows its law:
 // the rotation of this end when it carries the hogging moment m, at the load
