@@ -966,7 +966,9 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(stiffness_class_check(p, a.joint_at(e)));
     a.plastic_moment = b.plastic_moment();
     for (beam_end e : {beam_end::start, beam_end::end})
-        if (b.at(e).behaviour) (e == beam_end::start ? a.start : a.end).law = law_response_of(b, a.combinations, e);
+        if (b.at(e).behaviour)
+            (e == beam_end::start ? a.start : a.end).law =
+                law_response_of(b, a.combinations, e, options.find_yield_factor);
     for (beam_end e : {beam_end::start, beam_end::end})
         a.checks.push_back(joint_moment_check(p, b, a.combinations, e, a.joint_at(e)));
     for (beam_end e : {beam_end::start, beam_end::end}) a.checks.push_back(strength_class_check(p, b, e));

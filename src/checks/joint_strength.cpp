@@ -18,7 +18,7 @@ std::string stiffness_of(const project& p, stiffness s)
 }  // namespace
 
 std::optional<joint_assessment::law_response> law_response_of(const beam& b, const std::vector<combination_result>& combos,
-                                                              beam_end e)
+                                                              beam_end e, bool find_yield_factor)
 {
     const joint& j = b.at(e);
     if (!j.behaviour) return std::nullopt;
@@ -36,7 +36,7 @@ std::optional<joint_assessment::law_response> law_response_of(const beam& b, con
         const stiffness sec = start ? s.stiffness_start : s.stiffness_end;
         lr.secant_stiffness = sec.is_rigid() ? 0.0 : sec.value();
         lr.yields = j.moment_resistance && m >= *j.moment_resistance * (1 - 1e-9);
-        if (lr.yields) {
+        if (lr.yields && find_yield_factor) {
             // The load factor at which it reached its cap, from the same corner.
             const beam_model model(b.span, b.EI(), factored_loads(b.loads, r.comb));
             const stiffness here = j.range.max, far = b.at(start ? beam_end::end : beam_end::start).range.min;

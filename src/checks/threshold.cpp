@@ -52,6 +52,7 @@ point_evaluation evaluate_at(const project& p, const beam& b, stiffness_pair at)
     assessment_options options;
     options.search_interior = false;
     options.find_min_gap = false;
+    options.find_yield_factor = false;
     beam_assessment a = assess_beam(p, copy, options);
     point_evaluation out;
     out.at = at;

@@ -43,6 +43,7 @@ joint_law joint_law::ec3_curve(double initial_stiffness, double moment_resistanc
     j.k_ = initial_stiffness;
     j.a_ = psi;
     j.b_ = moment_resistance;  // the curve's own M_j,Rd, kept when a lower cap is added
+    j.ec3_log_term_ = psi * std::log(moment_resistance / 1.5);
     j.cap_ = moment_resistance;
     return j;
 }
@@ -154,7 +155,7 @@ double joint_law::uncapped(double a) const
         // 2/3 M_Rd; inverted in closed form: M^(1 + psi) = theta S_j,ini (M_Rd / 1.5)^psi.
         const double M_Rd = b_, elastic = k_ * a;
         if (elastic <= 2.0 / 3.0 * M_Rd) return elastic;
-        return std::exp((std::log(elastic) + a_ * std::log(M_Rd / 1.5)) / (1.0 + a_));
+        return std::exp((std::log(elastic) + ec3_log_term_) / (1.0 + a_));
     }
     case joint_law_kind::power: {
         // Kishi and Chen (1990): M = R theta / [1 + (theta / theta_0)^n]^(1/n).

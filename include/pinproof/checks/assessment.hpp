@@ -185,6 +185,11 @@ struct assessment_options {
     // Search for the smallest end gap that passes (gap_geometry.hpp); off for
     // callers that assess the same beam at many stiffness values.
     bool find_min_gap = true;
+    // Locate the load factor at which a yielding joint law reaches its cap
+    // (joint_assessment::law_response::yield_factor: the joint-moment check's
+    // message and the result file); off where only the checks' values are
+    // wanted, as in threshold and sweep probes.
+    bool find_yield_factor = true;
 };
 
 beam_assessment assess_beam(const project& p, const beam& b, const assessment_options& options = {});

@@ -22,9 +22,10 @@ namespace pinproof {
 
 // The law's response in the governing strength combination (this joint at its
 // upper-bound stiffness, the far joint at its lower bound); nullopt without a
-// behaviour or a strength combination.
+// behaviour or a strength combination. Without find_yield_factor the
+// response's yield_factor stays nullopt (the rest is the same).
 std::optional<joint_assessment::law_response> law_response_of(const beam& b, const std::vector<combination_result>& combos,
-                                                              beam_end e);
+                                                              beam_end e, bool find_yield_factor = true);
 
 check joint_moment_law_check(const project& p, const beam& b, const joint_assessment& ja);
 check strength_class_check(const project& p, const beam& b, beam_end e);

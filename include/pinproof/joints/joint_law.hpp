@@ -90,6 +90,7 @@ private:
     joint_law_kind kind_ = joint_law_kind::linear;
     double k_ = 0;                // initial stiffness
     double a_ = 0, b_ = 0, c_ = 0;  // law parameters (see the factories)
+    double ec3_log_term_ = 0;       // ec3-curve: psi ln(M_j,Rd / 1.5), formed once (uncapped evaluates it often)
     double slip_ = 0;
     std::optional<double> cap_;
     std::vector<law_point> points_;  // multilinear, with the origin first
