@@ -434,8 +434,12 @@ std::optional<joint_assessment::support_response> support_response_of(const beam
                                                                       beam_end e)
 {
     const joint& j = b.at(e);
-    const double ecc = j.support_eccentricity ? *j.support_eccentricity
-                                              : default_support_eccentricity(j.detail ? &*j.detail : nullptr);
+    // A cantilever's root is a moment joint: its shear is taken at the face of
+    // the support, and the nominal 100 mm of simple construction does not
+    // apply (common practice, no source).
+    const double ecc = j.support_eccentricity           ? *j.support_eccentricity
+                       : b.layout == beam_layout::cantilever ? 0.0
+                                                        : default_support_eccentricity(j.detail ? &*j.detail : nullptr);
     std::optional<support_column> column;
     if (j.column)
         column = support_column{j.column->length_above > 0 ? j.column->sec.I : 0.0, j.column->length_above,
@@ -454,8 +458,9 @@ std::optional<joint_assessment::support_response> support_response_of(const beam
                 throw internal_error(std::string("the demand on the support could not be found: ") + x.what());
             }
             if (out && std::abs(d.moment) <= std::abs(out->demand.moment)) continue;
-            out = joint_assessment::support_response{d, r.comb.name, s.*moment, s.*reaction, r.pinned.value().*reaction,
-                                                     !j.support_eccentricity};
+            // A cantilever has no pinned state (a mechanism): no pinned reaction to compare with.
+            out = joint_assessment::support_response{d, r.comb.name, s.*moment, s.*reaction,
+                                                     r.pinned ? (*r.pinned).*reaction : 0.0, !j.support_eccentricity};
         }
     }
     return out;
@@ -477,8 +482,12 @@ check support_moment_check(const project& p, const beam& b, const joint_assessme
     const joint& j = b.at(ja.end);
     const support_demand& d = s.demand;
     c.value = std::abs(d.moment);
+    const bool root = b.layout == beam_layout::cantilever;
     const std::string basis =
-        s.eccentricity_is_default
+        s.eccentricity_is_default && root
+            ? " (the default for a cantilever's root, a moment joint, whose shear the support takes at its face: "
+              "common practice, no source)"
+        : s.eccentricity_is_default
             ? (j.detail && j.detail->support == support_type::beam_web && j.detail->type == detail_type::fin_plate
                    ? " (at the bolt line, gap plus bolt line: common practice, no source)"
                    : p.standard == design_standard::en1993_1_8
@@ -489,9 +498,12 @@ check support_moment_check(const project& p, const beam& b, const joint_assessme
                            "construction, BS 5950-1:2000 4.7.7; give support_eccentricity for this project)")
             : " (as given)";
     c.message = "For the supporting member: up to " + fmt(c.value.value(), dims::moment) + " (combination " +
-                s.combination + ", at a corner of the stiffness range): the joint moment " +
-                fmt(s.joint_moment, dims::moment) + " plus the reaction " + fmt(s.reaction, dims::force) + " at " +
-                fmt(d.eccentricity, dims::length) + basis + ".";
+                s.combination + ", at a corner of the stiffness range): the " + (root ? "root" : "joint") + " moment " +
+                fmt(s.joint_moment, dims::moment) +
+                (d.eccentricity == 0.0 ? ", the reaction " + fmt(s.reaction, dims::force) + " taken at the face" + basis
+                                       : " plus the reaction " + fmt(s.reaction, dims::force) + " at " +
+                                             fmt(d.eccentricity, dims::length) + basis) +
+                ".";
     if (d.moment_above && d.moment_below)
         c.message += " Shared by the column in proportion to I/L: " + fmt(*d.moment_above, dims::moment) + " above, " +
                      fmt(*d.moment_below, dims::moment) + " below.";
@@ -514,6 +526,14 @@ check support_moment_check(const project& p, const beam& b, const joint_assessme
     // Without a resistance it is reported for the designer of the supporting
     // member: a warning where the joint adds a moment the pinned design of that
     // member does not include (the eccentricity moment alone is part of it).
+    // A cantilever's support carries its root moment by design: reported, not
+    // a warning.
+    if (root) {
+        c.status = check_status::pass;
+        c.message += " The support must be designed for the cantilever's root moment: pass these figures to its "
+                     "designer (give support_moment_resistance to check them here).";
+        return c;
+    }
     c.status = std::abs(s.joint_moment) > 0 ? check_status::warn : check_status::pass;
     c.message += c.status == check_status::warn
                      ? " The joint moment is not in a pinned design of the support: pass these on to its designer."
@@ -923,9 +943,11 @@ void assess_cantilever(const project& p, const beam& b, beam_assessment& a)
     a.checks.push_back(root_moment_check(p, b, a.combinations));
     a.checks.push_back(tip_deflection_check(p, b, a.combinations));
     a.checks.push_back(frequency_check(p, b, a.combinations));
+    a.start.support = support_response_of(b, a.combinations, beam_end::start);
+    a.checks.push_back(support_moment_check(p, b, a.start));
     a.notes.push_back("Cantilever: the start joint is the root, the end a free tip. The checks ask whether the fixed "
-                      "root is real; the pinned-end, end-gap and support-demand checks of a beam on two supports are "
-                      "not run (docs/method/layouts.md).");
+                      "root is real, and report the root's demand on its support; the pinned-end and end-gap checks "
+                      "of a beam on two supports are not run (docs/method/layouts.md).");
 }
 
 // Assumptions and defaults applied to the beam, in words.

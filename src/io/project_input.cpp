@@ -677,7 +677,7 @@ struct reader {
     {
         for (const char* key : {"stiffness_distribution", "behaviour", "detail", "support_rotation", "contact_stiffness",
                                 "designed_for_closure", "dependable_lower_bound", "rotation_capacity",
-                                "stiffness_scatter", "support_eccentricity", "column", "support_moment_resistance"})
+                                "stiffness_scatter"})
             if (j.contains(key))
                 problems.add(child(ptr, key), std::string("expected no \"") + key + "\" on a cantilever's root: it is "
                                               "not supported yet for a cantilever, found " + shown(j.at(key)));

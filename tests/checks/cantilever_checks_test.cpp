@@ -141,9 +141,49 @@ TEST_CASE("cantilever deflection [C8] - root moment from statics - frequency [Bl
           doctest::Approx(lambda * lambda / (2 * M_PI * L * L) * std::sqrt(EI / mass)).epsilon(1e-7));
     CHECK(vib.frequency->range.min < vib.frequency->fixed);
     // The checks of a pinned end and of a beam on two supports are not run.
-    for (const char* id : {"stiffness-class-start", "stiffness-class-end", "joint-moment-end", "support-moment-start",
+    for (const char* id : {"stiffness-class-start", "stiffness-class-end", "joint-moment-end", "support-moment-end",
                            "rotation-demand-start", "gap-closure-end"})
         CHECK_FALSE(has(a, id));
+}
+
+// The root's demand on its support, worked by hand: under ULS (1.35 G) the
+// root carries M = 1.35 w L^2/2 = 27 kN*m and V = 1.35 w L = 27 kN (statics).
+// Support demand = M + V e (support_demand.hpp); the share of a continuous
+// column above and below in proportion to I/L (BS 5950-1:2000 4.7.7, reference
+// pack 11.3; the same I both ways, so in proportion to 1/L).
+TEST_CASE("cantilever root support demand: M + V e - column split by 1/L - resistance checked - tol 1e-9")
+{
+    const double M = 1.35 * 10e3 * 2.0 * 2.0 / 2, V = 1.35 * 10e3 * 2.0;
+    {
+        // Default eccentricity 0 for a moment joint: the demand is the root moment.
+        const project p = parse_project(cantilever(R"({"min": "10 EI/L", "max": "40 EI/L"})"));
+        const auto a = assess_beam(p, p.beams[0]);
+        const check& c = find(a, "support-moment-start");
+        CHECK(*c.value == doctest::Approx(M).epsilon(1e-9));
+        CHECK(c.status == check_status::pass);
+        CHECK(c.informative);
+        REQUIRE(a.start.support);
+        CHECK(a.start.support->demand.eccentricity == 0.0);
+        CHECK(c.message.find("root moment") != std::string::npos);
+    }
+    {
+        std::string text = cantilever(R"({"min": "10 EI/L", "max": "40 EI/L"})");
+        const std::string at = R"("moment_resistance": "30 kN*m")";
+        text.replace(text.find(at), at.size(),
+                     at + R"(, "support_eccentricity": "50 mm", "support_moment_resistance": "28 kN*m",
+                     "column": {"section": "HEB 200", "length_above": "3 m", "length_below": "3.5 m"})");
+        const project p = parse_project(text);
+        const auto a = assess_beam(p, p.beams[0]);
+        const check& c = find(a, "support-moment-start");
+        const double d = M + V * 0.05;  // 28.35 kN*m
+        CHECK(*c.value == doctest::Approx(d).epsilon(1e-9));
+        CHECK(c.status == check_status::fail);  // above the declared 28 kN*m
+        CHECK_FALSE(c.informative);
+        REQUIRE(a.start.support);
+        REQUIRE(a.start.support->demand.moment_above);
+        CHECK(*a.start.support->demand.moment_above == doctest::Approx(d * (1 / 3.0) / (1 / 3.0 + 1 / 3.5)).epsilon(1e-9));
+        CHECK(*a.start.support->demand.moment_below == doctest::Approx(d * (1 / 3.5) / (1 / 3.0 + 1 / 3.5)).epsilon(1e-9));
+    }
 }
 
 TEST_CASE("cantilever refusals at the input edge: pinned root - range reaching 0 - an end joint - overhang not supported yet")
