@@ -14,7 +14,8 @@ std::string not_derived(const joint& j)
     if (!j.detail) return "The joint has no detail to derive it from";
     if (j.detail->type != detail_type::fin_plate && j.detail->type != detail_type::end_plate)
         return "The joint's " + to_string(j.detail->type) + " detail is not derived yet (fin plates and EN end plates are)";
-    return "The " + to_string(j.detail->type) + " is not derived (" + (j.not_derived_reason.empty() ? std::string("outside the derivation's scope")
+    const std::string what = j.detail->type == detail_type::fin_plate ? "fin plate" : "end plate";
+    return "The " + what + " is not derived (" + (j.not_derived_reason.empty() ? std::string("outside the derivation's scope")
                                                                               : j.not_derived_reason) + ")";
 }
 

@@ -28,6 +28,9 @@ struct geometry {
     double d = 0, d0 = 0, p = 0, hp = 0, tp = 0, bp = 0, w = 0, tw = 0;
     double e1_top = 0, e1_bottom = 0, e2 = 0;
     double m = 0, e = 0, n = 0;
+    // The column flange, where the support is a column flange of a given section.
+    bool column = false;
+    double mc = 0, ec = 0, nc = 0, tfc = 0, fyc = 0;
     double lever(int r) const { return hp - e1_top - r * p; }  // r from 0 at the top
 };
 
@@ -65,6 +68,16 @@ row_lengths in_group(const geometry& g, int r, int first, int last)
     if (r == 0 && r == first) free_end(g.e1_top);
     if (r == g.rows - 1 && r == last) free_end(g.e1_bottom);
     return l;
+}
+
+// The column flange's rows (Table 6.4, unstiffened column flange, away from
+// the column's end): alone 2 pi m and 4 m + 1.25 e; in a group 2 p and p
+// (inner) or pi m + p and 2 m + 0.625 e + 0.5 p (end of the group).
+row_lengths column_row(const geometry& g, int r, int first, int last)
+{
+    if (first == last) return {2 * pi * g.mc, 4 * g.mc + 1.25 * g.ec};
+    if (r != first && r != last) return {2 * g.p, g.p};
+    return {pi * g.mc + g.p, 2 * g.mc + 0.625 * g.ec + 0.5 * g.p};
 }
 
 struct stub_result {
@@ -139,6 +152,22 @@ geometry geometry_of(const connection_detail& d, const section& beam, const end_
     g.m = 0.5 * (g.w - g.tw) - (in.weld_throat ? 0.8 * *in.weld_throat * sqrt2 : 0.0);
     g.e = g.e2;
     g.n = std::min(g.e, 1.25 * g.m);
+    if (in.column) {
+        // Fig. 6.8: the column flange's m from the bolt to 0.8 of the root radius off its web;
+        // n from the smaller of the plate's and the flange's edge distances (e_min).
+        const column_flange& c = *in.column;
+        g.column = true;
+        g.mc = 0.5 * (g.w - c.web_thickness) - 0.8 * c.root_radius;
+        g.ec = 0.5 * (c.flange_width - g.w);
+        g.tfc = c.flange_thickness;
+        g.fyc = c.fy;
+        const double e_min = std::min(g.e, g.ec);
+        g.n = std::min(e_min, 1.25 * g.m);
+        g.nc = std::min(e_min, 1.25 * g.mc);
+        if (!(g.ec > 0.5 * g.d0)) throw std::invalid_argument("the column flange is too narrow for the gauge");
+        if (!(g.mc > 0.5 * g.d0))
+            throw std::invalid_argument("the gauge leaves no room between the bolt holes and the column's web and root");
+    }
     if (g.rows < 1) throw std::invalid_argument("an end plate joint needs at least one bolt row");
     if (!(g.e1_top > 0.5 * g.d0) || !(g.e1_bottom > 0.5 * g.d0))
         throw std::invalid_argument("a bolt hole lies outside the end plate");
@@ -174,6 +203,29 @@ stub_result stub_of(const geometry& g, int first, int last, double Ft, double As
     out.resistance = modes.resistance();
     out.mode = modes.governing();
     out.governing = out.mode == 3 ? "bolt-tension" : "end-plate-t-stub";
+    if (g.column) {
+        // 6.2.6.4: the column flange in bending, its own T-stub over the same rows.
+        double ccp = 0, cnc = 0;
+        for (int r = first; r <= last; ++r) {
+            const row_lengths l = column_row(g, r, first, last);
+            ccp += l.cp;
+            cnc += l.nc;
+        }
+        t_stub c = s;
+        c.l_eff_1 = std::min(ccp, cnc);
+        c.l_eff_2 = cnc;
+        c.m = g.mc;
+        c.n = g.nc;
+        c.t = g.tfc;
+        c.fy = g.fyc;
+        c.prying = Lb <= t_stub_prying_limit(g.mc, As, nrows, c.l_eff_1, g.tfc);
+        const t_stub_modes cm = t_stub_resistance(c, gamma_M0);
+        if (cm.resistance() < out.resistance) {
+            out.resistance = cm.resistance();
+            out.mode = cm.governing();
+            out.governing = out.mode == 3 ? "bolt-tension" : "column-flange-t-stub";
+        }
+    }
     if (web < out.resistance) {
         out.resistance = web;
         out.governing = "web-tension";
@@ -235,7 +287,18 @@ void stiffness_of(const geometry& g, double As, double Lb, double E, end_plate_j
         tension_row& row = out.rows[static_cast<std::size_t>(r)];
         row.k5 = 0.9 * l_eff * std::pow(g.tp, 3) / std::pow(g.m, 3);
         row.k10 = 1.6 * As / Lb;
-        const double k_eff = 1 / (1 / row.k5 + 1 / row.k10);
+        double flexibility = 1 / row.k5 + 1 / row.k10;
+        if (g.column) {
+            const row_lengths ca = column_row(g, r, r, r);
+            double lc = std::min(ca.cp, ca.nc);
+            if (g.rows > 1) {
+                const row_lengths cb = column_row(g, r, 0, g.rows - 1);
+                lc = std::min({lc, cb.cp, cb.nc});
+            }
+            row.k4 = 0.9 * lc * std::pow(g.tfc, 3) / std::pow(g.mc, 3);
+            flexibility += 1 / row.k4;
+        }
+        const double k_eff = 1 / flexibility;
         sum_kh += k_eff * row.lever_arm;
         sum_kh2 += k_eff * row.lever_arm * row.lever_arm;
     }
@@ -310,6 +373,10 @@ void tension_components(const end_plate_joint& j, double Ft, double E, end_plate
     c.push_back({"web-tension", std::nullopt, std::nullopt, std::nullopt,
                  "EN 1993-1-8 6.2.6.8, the beam web in tension over the T-stub's effective length; resists the "
                  "moment"});
+    if (top.k4 > 0)
+        c.push_back({"column-flange-t-stub", std::nullopt, std::nullopt, E * top.k4,
+                     "EN 1993-1-8 6.2.6.4, Table 6.2, Table 6.4; the column flange in bending; resists the moment; "
+                     "stiffness k_4 of the top row (Table 6.11)"});
 }
 
 }  // namespace
@@ -339,8 +406,8 @@ end_plate_joint derive_end_plate(const connection_detail& d, const section& beam
     out.plate_width = g.bp;
     out.gauge_default = !in.gauge;
     out.width_default = !in.plate_width;
-    out.ply_default = !in.support_ply;
-    const double ply = in.support_ply.value_or(g.tp);
+    out.ply_default = !in.support_ply && !in.column;
+    const double ply = in.column ? in.column->flange_thickness : in.support_ply.value_or(g.tp);
     out.bolt_length = g.tp + ply + 2 * assembly->washer + 0.5 * (assembly->head + assembly->nut);
 
     // Table 3.4: tension, and punching through the plate under the nut or head
@@ -373,8 +440,13 @@ end_plate_joint derive_end_plate(const connection_detail& d, const section& beam
             most = m;
             out.moment_governing = id;
         }
-    out.thickness_limit = 0.36 * g.d * std::sqrt(fub / fy_p);
-    out.rotation_capacity_adequate = out.moment_governing == "end-plate-t-stub" && g.tp <= out.thickness_limit;
+    // 6.4.2(2): the plate or the column flange, whichever governs in bending.
+    const bool column_governs = out.moment_governing == "column-flange-t-stub";
+    out.bending_part = column_governs ? "column flange" : "end plate";
+    out.bending_thickness = column_governs ? g.tfc : g.tp;
+    out.thickness_limit = 0.36 * g.d * std::sqrt(fub / (column_governs ? g.fyc : fy_p));
+    out.rotation_capacity_adequate = (out.moment_governing == "end-plate-t-stub" || column_governs) &&
+                                     out.bending_thickness <= out.thickness_limit;
     return out;
 }
 

@@ -96,7 +96,7 @@ std::optional<double> support_ply(const connection_detail& d)
     return std::nullopt;
 }
 
-derived_joint derive_en_end_plate(const connection_detail& d, const beam& b)
+derived_joint derive_en_end_plate(const connection_detail& d, const beam& b, beam_end end)
 {
     common_inputs c = common_of(d, b, false);
     end_plate_inputs in;
@@ -107,6 +107,19 @@ derived_joint derive_en_end_plate(const connection_detail& d, const beam& b)
     if (d.derivation.weld) in.weld_throat = d.derivation.weld->throat();
     in.support_ply = support_ply(d);
     in.beam_steel = c.beam_steel;
+    const joint& j = b.at(end);
+    const bool column_known = d.support == support_type::column_flange && j.column && j.column->sec.flange_thickness &&
+                              j.column->sec.flange_width && j.column->sec.web_thickness;
+    if (column_known) {
+        const section& s = j.column->sec;
+        column_flange cf;
+        cf.flange_thickness = *s.flange_thickness;
+        cf.flange_width = *s.flange_width;
+        cf.web_thickness = *s.web_thickness;
+        cf.root_radius = s.root_radius.value_or(0.0);
+        cf.fy = c.beam_steel.fy(cf.flange_thickness);
+        in.column = cf;
+    }
     in.E = b.E;
     const end_plate_joint f = derive_end_plate(d, b.sec, in);
     derived_joint out;
@@ -120,17 +133,17 @@ derived_joint derive_en_end_plate(const connection_detail& d, const beam& b)
     out.components = f.components;
     for (const tension_row& r : f.rows)
         out.tension_rows.push_back({r.lever_arm, r.resistance, row_governing(r), b.E / (1 / r.k5 + 1 / r.k10)});
-    const std::string limit = "t_p = " + length_text(d.plate_thickness, false) + (f.rotation_capacity_adequate ? " <= " : ", ") +
+    const std::string limit = "t = " + length_text(f.bending_thickness, false) + (f.rotation_capacity_adequate ? " <= " : ", ") +
                               "0.36 d sqrt(f_ub / f_y) = " + length_text(f.thickness_limit, false);
-    if (f.moment_governing != "end-plate-t-stub") {
-        out.rotation_capacity_basis = "not derived: EN 1993-1-8 6.4.2(2) applies where the end plate in bending "
-                                      "governs the moment resistance; here " + f.moment_governing + " governs";
+    if (f.moment_governing != "end-plate-t-stub" && f.moment_governing != "column-flange-t-stub") {
+        out.rotation_capacity_basis = "not derived: EN 1993-1-8 6.4.2(2) applies where the end plate or the column "
+                                      "flange in bending governs the moment resistance; here " + f.moment_governing +
+                                      " governs";
     } else {
         out.rotation_capacity_adequate = f.rotation_capacity_adequate;
         out.rotation_capacity_basis =
-            std::string(f.rotation_capacity_adequate ? "adequate" : "not shown adequate") +
-            " by EN 1993-1-8 6.4.2(2): the end plate in bending governs and " + limit +
-            "; the clause gives no value of the rotation capacity";
+            std::string(f.rotation_capacity_adequate ? "adequate" : "not shown adequate") + " by EN 1993-1-8 6.4.2(2): the " +
+            f.bending_part + " in bending governs and " + limit + "; the clause gives no value of the rotation capacity";
     }
     out.defaults = std::move(c.defaults);
     if (f.gauge_default) out.defaults.push_back("gauge " + length_text(f.gauge, false) + " (default)");
@@ -138,8 +151,14 @@ derived_joint derive_en_end_plate(const connection_detail& d, const beam& b)
     if (f.ply_default)
         out.defaults.push_back("support ply under the bolts taken as the plate's thickness for the bolts' elongation "
                                "length (default: the support is not described)");
-    out.defaults.push_back("the support taken as rigid: column flange in bending (k_4) and column web (k_1, k_2, k_3) "
-                           "not included, as the detail does not describe the column");
+    if (column_known)
+        out.defaults.push_back("column flange of the joint's column " + j.column->sec.name + " in bending (k_4 and its "
+                               "T-stub) included, its steel taken as the beam's (" + c.beam_steel.name() +
+                               "); column web (k_1, k_2, k_3) not included: taken as rigid");
+    else
+        out.defaults.push_back("the support taken as rigid: column flange in bending (k_4) and column web (k_1, k_2, "
+                               "k_3) not included, as the detail does not describe the column (give the joint's "
+                               "\"column\" for a column-flange support to include k_4)");
     return out;
 }
 
@@ -199,7 +218,7 @@ std::optional<derived_joint> derive_joint(const beam& b, beam_end end, design_st
     }
     const bool asked = j.stiffness_from_detail || j.moment_resistance_from_detail;
     try {
-        derived_joint out = end_plate ? derive_en_end_plate(*j.detail, b)
+        derived_joint out = end_plate ? derive_en_end_plate(*j.detail, b, end)
                                       : (us ? derive_us(*j.detail, b) : derive_en(*j.detail, b));
         if (fin) out.rotation_capacity_basis = "not derived: no published method gives a fin plate's rotation capacity "
                                                "(the gap check covers the rotation)";

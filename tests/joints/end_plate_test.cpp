@@ -21,6 +21,7 @@
 //   [Jaspart] the T-stub's mode boundaries in beta = 4 M_pl / (m sum B_t) and lambda = n / m:
 //             mode 1 for beta <= 2 lambda / (1 + 2 lambda), mode 3 for beta >= 2 (Jaspart's
 //             T-stub studies behind Table 6.2; from memory).
+//   [6.2.6.4] EN 1993-1-8 6.2.6.4 and Table 6.4, the column flange in bending (from memory).
 //   [EN10025] S275 f_y 275 MPa to 16 mm, f_u 410 MPa (EN 10025-2; pack 10.4, from memory).
 #include <doctest/doctest.h>
 
@@ -182,6 +183,47 @@ TEST_CASE("end plate rotation capacity [6.4.2]: 10 mm <= 0.36 x 20 x sqrt(800/27
     thick.plate_thickness = 15 * mm;
     const end_plate_joint t = derive_end_plate(thick, ipe300(), inputs());
     CHECK_FALSE(t.rotation_capacity_adequate);
+}
+
+TEST_CASE("end plate on a given column flange [T6.11] [T6.6] [hand]: HE 200 B - k4 = 0.9 l_eff t_fc^3/m_c^3 in series - L_b 46.25 mm - tol 1e-12")
+{
+    // EN 10365 HE 200 B: b 200, t_w 9, t_f 15, r 18 mm. m_c = (90 - 9)/2 - 0.8 x 18 = 26.1 mm (Fig. 6.8),
+    // e_c = (200 - 90)/2 = 55 mm; e_min = min(30, 55) = 30 mm, so n = 30 mm for both T-stubs.
+    end_plate_inputs in = inputs();
+    in.column = column_flange{15 * mm, 200 * mm, 9 * mm, 18 * mm, 275 * MPa};
+    const end_plate_joint j = derive_end_plate(header_plate(), ipe300(), in);
+    const double mc = 26.1;
+    // The flange's rows alone: 2 pi m_c = 164.0 mm, 4 m_c + 1.25 e_c = 173.2 mm: mode 2
+    // (2 x 0.25 x 173.2 x 15^2 x 275 + 30 x 282.24e3)/(26.1 + 30) = 246.4 kN, above the plate's 98.75 kN.
+    const double flange_row1 = (2 * 0.25 * (4 * mc + 1.25 * 55) * 225 * 275 + 30 * 2 * Ft) / (mc + 30);
+    CHECK(flange_row1 > j.rows[0].resistance);
+    CHECK(j.rows[0].governing == "end-plate-t-stub");
+    CHECK(close(j.bolt_length, 46.25 * mm, 1e-12));  // 10 + 15 + 2 x 3 + (12.5 + 18)/2
+    // k_4: rows 1 and 3 min(164.0, 173.2, pi m_c + p = 152.0, 2 m_c + 0.625 e_c + 0.5 p = 121.6) = 121.575 mm;
+    // row 2 min(164.0, 173.2, 2p, p) = 70 mm.
+    const double k4_end = 0.9 * 121.575 * 3375 / (mc * mc * mc), k4_mid = 0.9 * 70 * 3375 / (mc * mc * mc);
+    CHECK(close(j.rows[0].k4, k4_end * mm, 1e-12));
+    CHECK(close(j.rows[1].k4, k4_mid * mm, 1e-12));
+    const double k5_end = 0.9 * 75 * 1000 / (m * m * m), k5_mid = 0.9 * 70 * 1000 / (m * m * m);
+    const double k10 = 1.6 * 245 / 46.25;
+    const double k1 = 1 / (1 / k5_end + 1 / k10 + 1 / k4_end), k2 = 1 / (1 / k5_mid + 1 / k10 + 1 / k4_mid);
+    const double h1 = 180, h2 = 110, h3 = 40;
+    const double z = (k1 * h1 * h1 + k2 * h2 * h2 + k1 * h3 * h3) / (k1 * h1 + k2 * h2 + k1 * h3);
+    const double keq = (k1 * h1 + k2 * h2 + k1 * h3) / z;
+    CHECK(close(j.initial_stiffness, 210e9 * (z * mm) * (z * mm) * keq * mm, 1e-12));
+    CHECK(j.initial_stiffness < derive_end_plate(header_plate(), ipe300(), inputs()).initial_stiffness);
+}
+
+TEST_CASE("end plate on a thin column flange [6.2.6.4] [6.4.2]: the flange governs the rows - 6.4.2(2) read on its thickness")
+{
+    end_plate_inputs in = inputs();
+    in.column = column_flange{6 * mm, 200 * mm, 5 * mm, 0.0, 275 * MPa};
+    const end_plate_joint j = derive_end_plate(header_plate(), ipe300(), in);
+    CHECK(j.moment_governing == "column-flange-t-stub");
+    CHECK(j.bending_part == "column flange");
+    CHECK(close(j.bending_thickness, 6 * mm, 1e-12));
+    CHECK(j.rotation_capacity_adequate);
+    CHECK(j.moment_resistance < derive_end_plate(header_plate(), ipe300(), inputs()).moment_resistance);
 }
 
 TEST_CASE("T-stub mode boundaries [Jaspart] [T6.2]: modes 1 and 2 meet at beta = 2 lambda/(1 + 2 lambda) - modes 2 and 3 at beta = 2 - tol 1e-12")

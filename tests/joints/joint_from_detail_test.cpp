@@ -294,3 +294,19 @@ TEST_CASE("end plate without from-detail is derived for the report [project rule
     REQUIRE(j.derived);
     CHECK(std::abs(*j.moment_resistance - 10 * kN) <= 1e-9);
 }
+
+TEST_CASE("end plate to a given column [T6.11] [project rules]: k4 of the column flange lowers S_jini - named in the defaults")
+{
+    const std::string with_column = R"({"stiffness": "from-detail", "column": {"section": "HE 200 B", "length_above": "3.5 m",
+        "length_below": "3.5 m"}, "detail": )" + end_plate_detail + "}";
+    const project p = derived(with_column);
+    const project q = derived(R"({"stiffness": "from-detail", "detail": )" + end_plate_detail + "}");
+    REQUIRE(p.beams[0].start.derived);
+    CHECK(*p.beams[0].start.derived->initial_stiffness < *q.beams[0].start.derived->initial_stiffness);
+    bool named = false;
+    for (const auto& s : p.beams[0].start.derived->defaults) named = named || s.find("HE 200 B in bending (k_4") != std::string::npos;
+    CHECK(named);
+    bool component = false;
+    for (const auto& c : p.beams[0].start.derived->components) component = component || c.id == "column-flange-t-stub";
+    CHECK(component);
+}

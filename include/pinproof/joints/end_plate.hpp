@@ -30,6 +30,8 @@
 //                       has one above its top row (our reading, stated in the method page)
 //   beam web in tension 6.2.6.8: F_t,wb,Rd = b_eff t_w f_y,w / gamma_M0, b_eff = l_eff,1 of the
 //                       same T-stub (row alone or group)
+//   column flange       6.2.6.4: its own T-stub (Table 6.4, away from the column's end) where
+//                       the support is a column flange of a given section
 //   rows in turn        6.2.7.2(6)-(8): row r takes the least of its own resistance and, for each
 //                       group of rows j..r, the group's resistance less what rows j..r-1 took;
 //                       6.2.7.2(9): where an earlier row x took more than 1.9 F_t,Rd, row r
@@ -42,8 +44,10 @@
 //          head and nut heights
 //   rows: k_eff,r = 1 / (1/k_5,r + 1/k_10,r); z_eq = sum k_eff,r h_r^2 / sum k_eff,r h_r;
 //          k_eq = sum k_eff,r h_r / z_eq (6.3.3.1); S_j,ini = E z_eq^2 k_eq (6.3.1(4), mu = 1).
-//   The support's components (column flange in bending k_4, column web k_1, k_2, k_3) are
-//   not included: the detail does not describe the column; the support is taken as rigid.
+//   k_4  = 0.9 l_eff,c t_fc^3 / m_c^3, the column flange in bending, with its own T-stub
+//          (6.2.6.4) limiting the rows, where the support is a column flange and the joint's
+//          column is given (m_c = (w - t_wc)/2 - 0.8 r_c, Fig. 6.8); k_eff,r then takes
+//          1/k_4,r too. The column web (k_1, k_2, k_3) is not included: taken as rigid.
 // Shear (the simple-joint design guides' checks of a partial-depth end plate, reference
 // pack 7; EN 1993-1-8 and 1993-1-1 clauses as named):
 //   bolt-shear           0.8 x 2 n F_v,Rd (Table 3.4; the 0.8 leaves room for the tension the
@@ -113,6 +117,15 @@ struct tension_row {
     bool as_group = false;    // limited as part of a group of rows
     bool triangular = false;  // limited by 6.2.7.2(9)
     double k5 = 0, k10 = 0;   // m (Table 6.11; the spring is E k)
+    double k4 = 0;            // m, the column flange in bending; 0 where the column is not given
+};
+
+// The flange of the column the plate is bolted to (support "column-flange"
+// with the joint's column given): its k_4 (Table 6.11) and its T-stub
+// (6.2.6.4, Table 6.4 away from the column's end) join the end plate's.
+struct column_flange {
+    double flange_thickness = 0, flange_width = 0, web_thickness = 0, root_radius = 0;  // m
+    double fy = 0;                                                                      // Pa
 };
 
 struct end_plate_inputs {
@@ -122,6 +135,7 @@ struct end_plate_inputs {
     std::optional<double> plate_width;  // m; default default_end_plate_width(gauge)
     std::optional<double> weld_throat;  // m; nullopt: m from the web face, the weld not derived
     std::optional<double> support_ply;  // m, the support's ply under the bolts; default t_p
+    std::optional<column_flange> column;  // the column flange, where known (its t_f is then the ply)
     steel_material beam_steel;
     double E = 210e9;
 };
@@ -139,6 +153,8 @@ struct end_plate_joint {
     double gauge = 0, plate_width = 0, bolt_length = 0;
     bool gauge_default = false, width_default = false, ply_default = false;
     bool rotation_capacity_adequate = false;  // 6.4.2(2) met
+    std::string bending_part;                 // "end plate" or "column flange": the one 6.4.2(2) looks at
+    double bending_thickness = 0;             // its thickness, m
     double thickness_limit = 0;               // 0.36 d sqrt(f_ub / f_y), m
 };
 
