@@ -653,6 +653,13 @@ std::vector<detail_input> inputs_of(const json& value, const connection_detail& 
     length("first_bolt", d.bolts.first_bolt, std::string("40 mm below the top of the fitting, ") + components);
     if (d.type == detail_type::fin_plate)
         length("bolt_line", d.bolts.bolt_line, "50 mm from the beam end (common practice, no source)");
+    if (d.type == detail_type::end_plate) {
+        const double w = d.derivation.gauge.value_or(default_end_plate_gauge());
+        length("gauge", w, "90 mm between the bolt lines, the standard components of simple joints (Steel Buildings "
+                           "in Europe, Part 5: Joint design, MSB05 p. 14)");
+        length("plate_width", d.derivation.plate_width.value_or(default_end_plate_width(w)),
+               "the gauge + 60 mm, 30 mm from each bolt line to the side edge (common practice, no source)");
+    }
     return out;
 }
 
