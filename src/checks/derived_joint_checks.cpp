@@ -12,9 +12,10 @@ std::string fmt(const project& p, double v, dimension d) { return format_quantit
 std::string not_derived(const joint& j)
 {
     if (!j.detail) return "The joint has no detail to derive it from";
-    if (j.detail->type != detail_type::fin_plate)
-        return "The joint's " + to_string(j.detail->type) + " detail is not derived yet (fin plates are)";
-    return "The fin plate is not derived (" + (j.not_derived_reason.empty() ? std::string("outside the derivation's scope")
+    if (j.detail->type != detail_type::fin_plate && j.detail->type != detail_type::end_plate)
+        return "The joint's " + to_string(j.detail->type) + " detail is not derived yet (fin plates and EN end plates are)";
+    const std::string what = j.detail->type == detail_type::fin_plate ? "fin plate" : "end plate";
+    return "The " + what + " is not derived (" + (j.not_derived_reason.empty() ? std::string("outside the derivation's scope")
                                                                               : j.not_derived_reason) + ")";
 }
 
@@ -95,7 +96,8 @@ check declared_resistance_check(const project& p, const beam& b, beam_end e)
         c.value = *j.moment_resistance;
         c.limit = (1 + declared_resistance_margin) * d.moment_resistance;
         const std::string text = "the declared moment resistance " + fmt(p, *j.moment_resistance, dims::moment) +
-                                 " against " + fmt(p, d.moment_resistance, dims::moment) + " derived (the bolt group, " +
+                                 " against " + fmt(p, d.moment_resistance, dims::moment) + " derived (" +
+                                 (d.tension_rows.empty() ? "the bolt group" : "the bolt rows in tension") + ", " +
                                  d.moment_governing + " governing)";
         if (*j.moment_resistance > *c.limit)
             found.push_back(text + ": more than 10 % above it, so the joint may not carry what the declaration assumes");
@@ -195,6 +197,20 @@ check ductile_hierarchy_check(const project& p, const beam& b, beam_end e)
                 found.push_back(text + ": bolt shear governs, so the bolts may shear before the holes deform and "
                                        "the joint may not turn as a pin needs (EN 1993-1-8 6.4.2(3))");
         }
+    }
+    // An end plate must yield in bending before its bolts break in tension:
+    // EN 1993-1-8 6.4.2(2), t_p <= 0.36 d sqrt(f_ub / f_y) where the end plate in
+    // bending governs (reference pack 10.5, from memory).
+    if (!us && det.type == detail_type::end_plate) {
+        compared = true;
+        if (d.rotation_capacity_adequate && *d.rotation_capacity_adequate)
+            fine.push_back("the rotation capacity is " + d.rotation_capacity_basis);
+        else if (d.rotation_capacity_adequate)
+            found.push_back("the rotation capacity is " + d.rotation_capacity_basis +
+                            ": the plate is too thick for its bolts to be sure it yields before they break");
+        else
+            found.push_back("the moment resistance is governed by " + d.moment_governing +
+                            ", not by the end plate in bending, so EN 1993-1-8 6.4.2(2) gives no rotation capacity");
     }
     // The welds must be stronger than the plate, so that the plate yields
     // and the welds never tear.

@@ -230,6 +230,9 @@ std::vector<std::string> known_detail_fields(detail_type type, const fitting_key
             for (const char* key : {"bolt_line", "bolt_grade", "threads_in_shear_plane", "weld", "edge_distance",
                                     "end_distance"})
                 known.push_back(key);
+        if (end)
+            for (const char* key : {"bolt_grade", "threads_in_shear_plane", "weld", "gauge", "plate_width"})
+                known.push_back(key);
     }
     return known;
 }
@@ -426,11 +429,57 @@ void read_copes(reader& r, connection_detail& d, const fitting_keys& k, double h
 }
 
 void read_weld(reader& parent, connection_detail& d);
+void read_end_plate_fields(reader& r, connection_detail& d, double web_thickness, std::size_t before);
 
 // The fin plate's fields for its derivation (joints/joint_from_detail.hpp):
 // bolt grade, threads, weld and the plate's edge distance, each checked
 // against the rule it must meet where it is given.
-void read_derivation_fields(reader& r, connection_detail& d, std::size_t before)
+// The fillet welds must leave the plate within its thickness (common practice, no
+// source, EN) or within AISC 360-16 J2.2b's maximum (from memory).
+void check_weld_size(reader& r, const connection_detail& d)
+{
+    const derivation_fields& f = d.derivation;
+    if (f.weld && f.weld->leg_length() > maximum_fillet_leg(d.plate_thickness, r.standard()) + 1e-9)
+        r.problem("weld", "the weld is larger than the plate allows: a fillet leg of " +
+                              r.show(f.weld->leg_length()) + " on a " + r.show(d.plate_thickness) + " plate, at most " +
+                              r.show(maximum_fillet_leg(d.plate_thickness, r.standard())) + " (" +
+                              maximum_fillet_leg_rule(r.standard()) + ")");
+}
+
+// An end plate's gauge (cross-centres of its two bolt lines, one each side of
+// the beam web) and width. The holes must clear the web and its fillets and
+// stay inside the plate's side edges; the code's minimum edge distance is
+// checked where the joint is derived ("from-detail": check_detail_derivable).
+void read_end_plate_fields(reader& r, connection_detail& d, double web_thickness, std::size_t before)
+{
+    derivation_fields& f = d.derivation;
+    if (r.has("weld")) read_weld(r, d);
+    if (r.has("gauge")) f.gauge = r.length("gauge", std::nullopt);
+    if (r.has("plate_width")) f.plate_width = r.length("plate_width", std::nullopt);
+    if (r.problems().size() != before) return;
+    const double d0 = d.bolts.hole_diameter;
+    const double w = f.gauge.value_or(default_end_plate_gauge());
+    const double bp = f.plate_width.value_or(default_end_plate_width(w));
+    const double leg = f.weld ? f.weld->leg_length() : 0.0;
+    const double room = 0.5 * (w - web_thickness) - leg;
+    if (room < 0.5 * d0) {
+        r.problem(r.has("gauge") ? "gauge" : "bolt_diameter",
+                  "the bolt does not fit the plate: a gauge of " + r.show(w) + " leaves " + r.show(room) +
+                      " from each hole's centre to the beam web's fillet weld (web " + r.show(web_thickness) +
+                      ", weld leg " + r.show(leg) + "), less than the hole's radius " + r.show(0.5 * d0));
+        return;
+    }
+    if (0.5 * (bp - w) < 0.5 * d0) {
+        r.problem(r.has("plate_width") ? "plate_width" : "gauge",
+                  "the bolt does not fit the plate: a plate " + r.show(bp) + " wide with the bolt lines " + r.show(w) +
+                      " apart leaves " + r.show(0.5 * (bp - w)) + " from each hole's centre to the plate's side edge, "
+                      "less than the hole's radius " + r.show(0.5 * d0));
+        return;
+    }
+    check_weld_size(r, d);
+}
+
+void read_derivation_fields(reader& r, connection_detail& d, double web_thickness, std::size_t before)
 {
     const json& value = r.obj();
     const std::string& pointer = r.pointer();
@@ -452,6 +501,10 @@ void read_derivation_fields(reader& r, connection_detail& d, std::size_t before)
                                         ", found " + jf::shown(v));
     }
     f.threads_in_shear_plane = jf::bool_field(value, pointer, "threads_in_shear_plane", false, problems);
+    if (d.type == detail_type::end_plate) {
+        read_end_plate_fields(r, d, web_thickness, before);
+        return;
+    }
     if (r.has("end_distance"))
         r.problem("end_distance", "a fin plate's end distances are fixed by first_bolt and plate_depth (and the web's "
                                   "by bolt_line); give those instead of end_distance");
@@ -473,11 +526,7 @@ void read_derivation_fields(reader& r, connection_detail& d, std::size_t before)
         r.problem("edge_distance", "expected an edge distance of at least " + r.show(e_min) + " (" +
                                        minimum_edge_distance_rule(r.standard()) + "), found " +
                                        r.show(*f.edge_distance));
-    if (f.weld && f.weld->leg_length() > maximum_fillet_leg(d.plate_thickness, r.standard()) + 1e-9)
-        r.problem("weld", "the weld is larger than the plate allows: a fillet leg of " +
-                              r.show(f.weld->leg_length()) + " on a " + r.show(d.plate_thickness) + " plate, at most " +
-                              r.show(maximum_fillet_leg(d.plate_thickness, r.standard())) + " (" +
-                              maximum_fillet_leg_rule(r.standard()) + ")");
+    check_weld_size(r, d);
 }
 
 // {"leg": "8 mm"} or {"throat": "5.6 mm"}: one of the two.
@@ -604,6 +653,13 @@ std::vector<detail_input> inputs_of(const json& value, const connection_detail& 
     length("first_bolt", d.bolts.first_bolt, std::string("40 mm below the top of the fitting, ") + components);
     if (d.type == detail_type::fin_plate)
         length("bolt_line", d.bolts.bolt_line, "50 mm from the beam end (common practice, no source)");
+    if (d.type == detail_type::end_plate) {
+        const double w = d.derivation.gauge.value_or(default_end_plate_gauge());
+        length("gauge", w, "90 mm between the bolt lines, the standard components of simple joints (Steel Buildings "
+                           "in Europe, Part 5: Joint design, MSB05 p. 14)");
+        length("plate_width", d.derivation.plate_width.value_or(default_end_plate_width(w)),
+               "the gauge + 60 mm, 30 mm from each bolt line to the side edge (common practice, no source)");
+    }
     return out;
 }
 
@@ -648,7 +704,8 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
                                        r.show(d.gap) + "), found " + r.show(d.gap_tolerance));
 
     if (!custom) read_copes(r, d, k, h, before);
-    if (d.type == detail_type::fin_plate) read_derivation_fields(r, d, before);
+    if (d.type == detail_type::fin_plate || d.type == detail_type::end_plate)
+        read_derivation_fields(r, d, beam.web_thickness.value_or(0.0), before);
     read_support(r, d);
     read_centre_of_rotation(r, d, h);
     if (problems.size() == before) check_clear_at_rest(r, d, beam);
@@ -681,6 +738,15 @@ void check_fin_plate_derivable(const connection_detail& d, const std::string& po
     };
     minimum("first_bolt", "plate's end distance above the top bolt", top);
     minimum("plate_depth", "plate's end distance below the bottom bolt", bottom);
+    if (d.type == detail_type::end_plate) {
+        const double w = d.derivation.gauge.value_or(default_end_plate_gauge());
+        const double e2 = 0.5 * (d.derivation.plate_width.value_or(default_end_plate_width(w)) - w);
+        minimum(d.derivation.plate_width ? "plate_width" : "gauge",
+                std::string("plate's edge distance from each bolt line to its side edge, (plate_width - gauge) / 2") +
+                    (d.derivation.plate_width ? "" : " with the default width"),
+                e2);
+        return;
+    }
     minimum("bolt_line", "beam web's end distance from the bolt line to the beam end", b.bolt_line);
     const double e2 = d.derivation.edge_distance.value_or(standard == design_standard::en1993_1_8 ? 2 * b.diameter
                                                                                                   : 1.5 * b.diameter);

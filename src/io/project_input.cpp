@@ -387,10 +387,12 @@ struct reader {
         }
         if (!out.detail || !j.at("detail").is_object()) return;  // reported already
         const std::string dp = child(ptr, "detail");
-        if (out.detail->type != detail_type::fin_plate) {
-            problems.add(child(dp, "type"), "\"from-detail\" derives fin plates only (EN 1993-1-8 components; AISC "
-                                            "360 single plates); give the " + field + " of a \"" +
-                                                to_string(out.detail->type) + "\" joint directly");
+        const bool en_end_plate = out.detail->type == detail_type::end_plate && standard != design_standard::aisc360;
+        if (out.detail->type != detail_type::fin_plate && !en_end_plate) {
+            problems.add(child(dp, "type"), "\"from-detail\" derives fin plates (EN 1993-1-8 components; AISC 360 "
+                                            "single plates) and, in EN 1993-1-8 projects, end plates (AISC 360 gives "
+                                            "no component method for an end plate's moment); give the " + field +
+                                                " of a \"" + to_string(out.detail->type) + "\" joint directly");
             return;
         }
         if (out.stiffness_from_detail && standard == design_standard::aisc360)

@@ -6,6 +6,7 @@
 #include "pinproof/core/errors.hpp"
 #include "pinproof/core/units.hpp"
 #include "pinproof/joints/bolt.hpp"
+#include "pinproof/joints/end_plate.hpp"
 #include "pinproof/joints/fin_plate.hpp"
 
 namespace pinproof {
@@ -78,6 +79,89 @@ derived_joint derive_en(const connection_detail& d, const beam& b)
     return out;
 }
 
+std::string row_governing(const tension_row& r)
+{
+    std::string out = r.governing;
+    if (r.governing == "end-plate-t-stub") out += " mode " + std::to_string(r.mode);
+    if (r.as_group) out += ", as part of a group of rows";
+    if (r.triangular) out += ", limited by EN 1993-1-8 6.2.7.2(9)";
+    return out;
+}
+
+// The support's ply under the bolts: a supporting beam's web where the detail
+// gives it, else taken as the end plate's thickness (reported as a default).
+std::optional<double> support_ply(const connection_detail& d)
+{
+    if (d.support_beam) return d.support_beam->web_thickness;
+    return std::nullopt;
+}
+
+derived_joint derive_en_end_plate(const connection_detail& d, const beam& b, beam_end end)
+{
+    common_inputs c = common_of(d, b, false);
+    end_plate_inputs in;
+    in.bolts = c.bolts;
+    in.threads_in_shear_plane = c.threads;
+    in.gauge = d.derivation.gauge;
+    in.plate_width = d.derivation.plate_width;
+    if (d.derivation.weld) in.weld_throat = d.derivation.weld->throat();
+    in.support_ply = support_ply(d);
+    in.beam_steel = c.beam_steel;
+    const joint& j = b.at(end);
+    const bool column_known = d.support == support_type::column_flange && j.column && j.column->sec.flange_thickness &&
+                              j.column->sec.flange_width && j.column->sec.web_thickness;
+    if (column_known) {
+        const section& s = j.column->sec;
+        column_flange cf;
+        cf.flange_thickness = *s.flange_thickness;
+        cf.flange_width = *s.flange_width;
+        cf.web_thickness = *s.web_thickness;
+        cf.root_radius = s.root_radius.value_or(0.0);
+        cf.fy = c.beam_steel.fy(cf.flange_thickness);
+        in.column = cf;
+    }
+    in.E = b.E;
+    const end_plate_joint f = derive_end_plate(d, b.sec, in);
+    derived_joint out;
+    out.basis = "EN 1993-1-8";
+    out.initial_stiffness = f.initial_stiffness;
+    out.free_rotation = 0;  // an end plate turns by bending, not by slip in its holes
+    out.shear_resistance = f.shear_resistance;
+    out.governing = f.governing;
+    out.moment_resistance = f.moment_resistance;
+    out.moment_governing = f.moment_governing;
+    out.components = f.components;
+    for (const tension_row& r : f.rows)
+        out.tension_rows.push_back({r.lever_arm, r.resistance, row_governing(r), b.E / (1 / r.k5 + 1 / r.k10)});
+    const std::string limit = "t = " + length_text(f.bending_thickness, false) + (f.rotation_capacity_adequate ? " <= " : ", ") +
+                              "0.36 d sqrt(f_ub / f_y) = " + length_text(f.thickness_limit, false);
+    if (f.moment_governing != "end-plate-t-stub" && f.moment_governing != "column-flange-t-stub") {
+        out.rotation_capacity_basis = "not derived: EN 1993-1-8 6.4.2(2) applies where the end plate or the column "
+                                      "flange in bending governs the moment resistance; here " + f.moment_governing +
+                                      " governs";
+    } else {
+        out.rotation_capacity_adequate = f.rotation_capacity_adequate;
+        out.rotation_capacity_basis =
+            std::string(f.rotation_capacity_adequate ? "adequate" : "not shown adequate") + " by EN 1993-1-8 6.4.2(2): the " +
+            f.bending_part + " in bending governs and " + limit + "; the clause gives no value of the rotation capacity";
+    }
+    out.defaults = std::move(c.defaults);
+    if (f.gauge_default) out.defaults.push_back("gauge " + length_text(f.gauge, false) + " (default)");
+    if (f.width_default) out.defaults.push_back("plate width " + length_text(f.plate_width, false) + " (default: the gauge + 60 mm)");
+    if (f.ply_default)
+        out.defaults.push_back("support ply under the bolts taken as the plate's thickness for the bolts' elongation "
+                               "length (default: the support is not described)");
+    if (column_known)
+        out.defaults.push_back("column flange of the joint's column " + j.column->sec.name + " in bending (k_4 and its "
+                               "T-stub) included, its steel taken as the beam's (" + c.beam_steel.name() +
+                               "); column web (k_1, k_2, k_3) not included: taken as rigid");
+    else
+        out.defaults.push_back("the support taken as rigid: column flange in bending (k_4) and column web (k_1, k_2, "
+                               "k_3) not included, as the detail does not describe the column (give the joint's "
+                               "\"column\" for a column-flange support to include k_4)");
+    return out;
+}
+
 derived_joint derive_us(const connection_detail& d, const beam& b)
 {
     common_inputs c = common_of(d, b, true);
@@ -123,10 +207,21 @@ void resolve(joint& j, const derived_joint& dj, const std::string& ptr, problem_
 std::optional<derived_joint> derive_joint(const beam& b, beam_end end, design_standard standard, std::string* why_not)
 {
     const joint& j = b.at(end);
-    if (!j.detail || j.detail->type != detail_type::fin_plate) return std::nullopt;
+    if (!j.detail) return std::nullopt;
+    const bool fin = j.detail->type == detail_type::fin_plate, end_plate = j.detail->type == detail_type::end_plate;
+    const bool us = standard == design_standard::aisc360;
+    if (!fin && !(end_plate && !us)) {
+        if (why_not && end_plate)
+            *why_not = "AISC 360 gives no component method for the moment of an end plate; its resistance is not "
+                       "derived in AISC terms";
+        return std::nullopt;
+    }
     const bool asked = j.stiffness_from_detail || j.moment_resistance_from_detail;
     try {
-        derived_joint out = standard == design_standard::aisc360 ? derive_us(*j.detail, b) : derive_en(*j.detail, b);
+        derived_joint out = end_plate ? derive_en_end_plate(*j.detail, b, end)
+                                      : (us ? derive_us(*j.detail, b) : derive_en(*j.detail, b));
+        if (fin) out.rotation_capacity_basis = "not derived: no published method gives a fin plate's rotation capacity "
+                                               "(the gap check covers the rotation)";
         if (out.initial_stiffness) {
             const auto [lo, hi] = j.stiffness_scatter.value_or(std::make_pair(0.5, 2.0));
             out.scatter_min = lo;

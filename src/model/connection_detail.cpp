@@ -85,3 +85,10 @@ std::string maximum_fillet_leg_rule(design_standard s)
 }
 
 }  // namespace pinproof
+
+namespace pinproof {
+
+double default_end_plate_gauge() { return 90e-3; }
+double default_end_plate_width(double gauge) { return gauge + 60e-3; }
+
+}  // namespace pinproof

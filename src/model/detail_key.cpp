@@ -43,6 +43,16 @@ std::string detail_key(const connection_detail& d, const section& beam)
         put(d.centre_of_rotation->from_support);
         put(d.centre_of_rotation->below_top);
     }
+    {
+        const derivation_fields& f = d.derivation;
+        if (present(f.bolt_grade.has_value())) put_name(*f.bolt_grade);
+        if (present(f.threads_in_shear_plane.has_value())) key += *f.threads_in_shear_plane ? '1' : '0';
+        if (present(f.weld.has_value())) {
+            put(f.weld->size);
+            key += f.weld->leg ? '1' : '0';
+        }
+        for (const auto* v : {&f.edge_distance, &f.gauge, &f.plate_width}) put_opt(*v);
+    }
     put_int(static_cast<long>(d.outline.size()));
     for (const auto& pt : d.outline) {
         put(pt.from_support);

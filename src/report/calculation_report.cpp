@@ -519,8 +519,19 @@ std::string report_writer::derived_joint_block(const joint& jt, const derived_jo
            << u_.q(*d.stiffness_min, dims::rotational_stiffness) << " .. " << u_.q(*d.stiffness_max, dims::rotational_stiffness) << (jt.stiffness_from_detail ? ", used as the joint's range" : "");
     else
         out << "initial stiffness not derived (" << esc(d.basis) << " gives no component stiffness)";
-    out << "; free rotation before the bolts bear " << u_.q(d.free_rotation, dims::angle)
-       << "; rotation capacity not derived.</p>\n";
+    out << "; free rotation before the bolts bear " << u_.q(d.free_rotation, dims::angle) << "; rotation capacity "
+       << (d.rotation_capacity_basis.empty() ? std::string("not derived") : esc(d.rotation_capacity_basis)) << ".</p>\n";
+    if (!d.tension_rows.empty()) {
+        out << "<table>\n<thead><tr><th>Bolt row in tension</th><th>Lever arm</th><th>F<sub>tr,Rd</sub></th>"
+               "<th>Governed by</th></tr></thead>\n";
+        for (std::size_t i = 0; i < d.tension_rows.size(); ++i) {
+            const derived_tension_row& r = d.tension_rows[i];
+            out << "<tr><td>" << i + 1 << "</td><td class=\"num\">" << u_.q(r.lever_arm, dims::length)
+               << "</td><td class=\"num\">" << u_.q(r.resistance, dims::force) << "</td><td>" << esc(r.governing)
+               << "</td></tr>\n";
+        }
+        out << "</table>\n";
+    }
     if (!d.defaults.empty()) {
         out << "<ul class=\"defaults note\">\n";
         for (const auto& s : d.defaults) out << "<li>Assumed: " << esc(s) << "</li>\n";

@@ -134,6 +134,15 @@ json derived_json(const derived_joint& d)
     out["governing"] = d.governing;
     out["moment_governing"] = d.moment_governing;
     out["rotation_capacity"] = optional_number(d.rotation_capacity);
+    out["rotation_capacity_adequate"] = d.rotation_capacity_adequate ? json(*d.rotation_capacity_adequate) : json(nullptr);
+    out["rotation_capacity_basis"] = d.rotation_capacity_basis;
+    json rows = json::array();
+    for (const derived_tension_row& r : d.tension_rows)
+        rows.push_back({{"lever_arm", number(r.lever_arm)},
+                        {"resistance", number(r.resistance)},
+                        {"governing", r.governing},
+                        {"stiffness", number(r.stiffness)}});
+    out["tension_rows"] = rows;
     out["components"] = components;
     out["defaults"] = d.defaults;
     out["limits_exceeded"] = d.limits_exceeded;

@@ -181,7 +181,14 @@ void derived_joints(std::ostringstream& o, const project& p, const beam_assessme
         else
             o << "    initial stiffness: not derived (" << d.basis << " gives no component stiffness)\n";
         o << "    free rotation before the bolts bear " << u.num(d.free_rotation, dims::angle) << " " << u.unit(dims::angle)
-          << "; rotation capacity not derived\n";
+          << "; rotation capacity "
+          << (d.rotation_capacity_basis.empty() ? std::string("not derived") : d.rotation_capacity_basis) << "\n";
+        for (std::size_t i = 0; i < d.tension_rows.size(); ++i) {
+            const derived_tension_row& r = d.tension_rows[i];
+            o << "    bolt row " << i + 1 << " in tension: lever arm " << u.num(r.lever_arm, dims::length) << " "
+              << u.unit(dims::length) << ", F_tr,Rd " << u.num(r.resistance, dims::force) << " " << u.unit(dims::force)
+              << " (" << r.governing << ")\n";
+        }
         for (const auto& s : d.defaults) o << "    assumed: " << s << "\n";
         for (const auto& s : d.limits_exceeded) o << "    beyond the conventional configuration: " << s << "\n";
     }

@@ -157,7 +157,7 @@ TEST_CASE("refusals name the field [T3.3] [J3.4] [project rules]")
     {
         const auto r = refusal(R"({"stiffness": "from-detail", "detail": {"type": "web-cleats"}})");
         CHECK(r.where == "/beams/0/joints/start/detail/type");
-        CHECK(r.message.find("derives fin plates only") != std::string::npos);
+        CHECK(r.message.find("derives fin plates (EN 1993-1-8 components") != std::string::npos);
     }
     SUBCASE("no detail")
     {
@@ -225,4 +225,88 @@ TEST_CASE("a law on a derived joint [project rules]: ec3-curve starts from the d
         "behaviour": {"law": "richard-abbott", "reference_moment": "40 kN*m", "plastic_stiffness": "100 MN*m/rad", "shape": 2}, "detail": )" +
                            worked_detail + "}");
     CHECK(r.where == "/beams/0/joints/start/behaviour/plastic_stiffness");
+}
+
+namespace {
+// The invented header plate of joints/end_plate_test.cpp through a project file.
+const std::string end_plate_detail = R"({"type": "end-plate", "plate_top": "40 mm", "plate_depth": "220 mm",
+    "plate_thickness": "10 mm", "bolt_diameter": "20 mm", "bolt_rows": 3, "bolt_pitch": "70 mm", "first_bolt": "40 mm",
+    "gauge": "90 mm", "plate_width": "150 mm", "weld": {"throat": "4 mm"}, "bolt_grade": "8.8"})";
+}  // namespace
+
+TEST_CASE("end plate through a project [hand]: from-detail gives 0.5 and 2 times S_jini and M_jRd = 24.03 kN*m - rounding 0.01 kN*m")
+{
+    const project p = derived(R"({"stiffness": "from-detail", "moment_resistance": "from-detail", "detail": )" +
+                              end_plate_detail + "}");
+    const joint& j = p.beams[0].start;
+    REQUIRE(j.derived);
+    REQUIRE(j.derived->initial_stiffness);
+    CHECK(std::abs(j.range.min.value() - 0.5 * *j.derived->initial_stiffness) <= 1e-9 * *j.derived->initial_stiffness);
+    CHECK(std::abs(j.range.max.value() - 2 * *j.derived->initial_stiffness) <= 1e-9 * *j.derived->initial_stiffness);
+    CHECK(std::abs(*j.moment_resistance - 24.03 * kN) <= 0.01 * kN);  // joints/end_plate_test.cpp
+    CHECK(j.derived->tension_rows.size() == 3);
+    CHECK(j.derived->rotation_capacity_adequate == std::optional<bool>(true));
+    CHECK(j.derived->rotation_capacity_basis.find("6.4.2(2)") != std::string::npos);
+    CHECK_FALSE(j.derived->rotation_capacity);  // the clause gives no value
+    CHECK(component(*j.derived, "bolt-tension").per_bolt);
+}
+
+TEST_CASE("end plate defaults are named [project rules]: gauge 90 mm - width 150 mm - support ply - rigid support")
+{
+    const project p = derived(R"({"stiffness": "from-detail", "detail": {"type": "end-plate", "plate_depth": "220 mm",
+        "bolt_rows": 3, "first_bolt": "40 mm"}})");
+    const auto& defaults = p.beams[0].start.derived->defaults;
+    const auto has = [&](const std::string& text) {
+        for (const auto& s : defaults)
+            if (s.find(text) != std::string::npos) return true;
+        return false;
+    };
+    CHECK(has("gauge 90"));
+    CHECK(has("plate width 150"));
+    CHECK(has("support ply"));
+    CHECK(has("k_4"));
+    CHECK(has("no weld given"));
+}
+
+TEST_CASE("end plate refusals name the field [T3.3] [project rules]: US project - edge distance - bolt off the plate")
+{
+    auto r = refusal(R"({"stiffness": {"min": "300 kN*m/rad", "max": "1400 kN*m/rad"}, "moment_resistance": "from-detail",
+        "detail": {"type": "end-plate"}})", "AISC360", "W18x35");
+    CHECK(r.where == "/beams/0/joints/start/detail/type");
+    CHECK(r.message.find("AISC 360 gives no component method") != std::string::npos);
+    // (150 - 110)/2 = 20 mm < 1.2 x 22 = 26.4 mm.
+    r = refusal(R"({"stiffness": "from-detail", "detail": {"type": "end-plate", "gauge": "110 mm", "plate_width": "150 mm"}})");
+    CHECK(r.where == "/beams/0/joints/start/detail/plate_width");
+    CHECK(r.message.find("Table 3.3") != std::string::npos);
+    r = refusal(R"({"stiffness": "from-detail", "detail": {"type": "end-plate", "gauge": "100 mm", "plate_width": "110 mm"}})");
+    CHECK(r.where == "/beams/0/joints/start/detail/plate_width");
+    CHECK(r.message.find("does not fit the plate") != std::string::npos);
+    r = refusal(R"({"stiffness": "from-detail", "detail": {"type": "end-plate", "gauge": "25 mm"}})");
+    CHECK(r.where == "/beams/0/joints/start/detail/gauge");
+    CHECK(r.message.find("does not fit the plate") != std::string::npos);
+}
+
+TEST_CASE("end plate without from-detail is derived for the report [project rules]: declared values kept")
+{
+    const project p = derived(R"({"stiffness": {"min": "1000 kN*m/rad", "max": "5000 kN*m/rad"}, "moment_resistance": "10 kN*m", "detail": )" +
+                              end_plate_detail + "}");
+    const joint& j = p.beams[0].start;
+    REQUIRE(j.derived);
+    CHECK(std::abs(*j.moment_resistance - 10 * kN) <= 1e-9);
+}
+
+TEST_CASE("end plate to a given column [T6.11] [project rules]: k4 of the column flange lowers S_jini - named in the defaults")
+{
+    const std::string with_column = R"({"stiffness": "from-detail", "column": {"section": "HE 200 B", "length_above": "3.5 m",
+        "length_below": "3.5 m"}, "detail": )" + end_plate_detail + "}";
+    const project p = derived(with_column);
+    const project q = derived(R"({"stiffness": "from-detail", "detail": )" + end_plate_detail + "}");
+    REQUIRE(p.beams[0].start.derived);
+    CHECK(*p.beams[0].start.derived->initial_stiffness < *q.beams[0].start.derived->initial_stiffness);
+    bool named = false;
+    for (const auto& s : p.beams[0].start.derived->defaults) named = named || s.find("HE 200 B in bending (k_4") != std::string::npos;
+    CHECK(named);
+    bool component = false;
+    for (const auto& c : p.beams[0].start.derived->components) component = component || c.id == "column-flange-t-stub";
+    CHECK(component);
 }

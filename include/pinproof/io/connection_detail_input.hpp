@@ -22,11 +22,12 @@ connection_detail read_connection_detail(const nlohmann::json& value, const std:
                                          const section& beam, problem_list& problems,
                                          design_standard standard = design_standard::en1993_1_8);
 
-// The rules a fin plate must meet for its joint to be derived from it
-// ("from-detail"): every bolt hole inside the plate, and the plate's end
-// distances above the top bolt and below the bottom bolt, its edge distance and
-// the web's end distance to the beam end no smaller than the code's minimum
-// (EN 1993-1-8 Table 3.3, AISC 360-16 Table J3.4). Problems go to `problems`
+// The rules a fin plate (or an end plate) must meet for its joint to be
+// derived from it ("from-detail"): every bolt hole inside the plate, and the
+// plate's end distances above the top bolt and below the bottom bolt, its edge
+// distance and (fin plate) the web's end distance to the beam end, or (end
+// plate) the distance from each bolt line to the plate's side edge, no smaller
+// than the code's minimum (EN 1993-1-8 Table 3.3, AISC 360-16 Table J3.4). Problems go to `problems`
 // with the pointer of the field at fault under `pointer` (the detail's),
 // lengths shown in `units` (the file's).
 void check_fin_plate_derivable(const connection_detail& d, const std::string& pointer, design_standard standard,

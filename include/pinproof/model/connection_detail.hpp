@@ -98,6 +98,8 @@ struct derivation_fields {
     std::optional<bool> threads_in_shear_plane;
     std::optional<fillet_weld> weld;        // the fitting's welds to the support, each side
     std::optional<double> edge_distance;    // fin plate: bolt line to the plate's free vertical edge
+    std::optional<double> gauge;            // end plate: between the two bolt lines (cross-centres)
+    std::optional<double> plate_width;      // end plate: across the beam web
 };
 
 // One field of the detail as the assessment used it: given in the file, or
@@ -154,6 +156,14 @@ struct connection_detail {
 //   rows takes the larger row's value.
 double minimum_edge_distance(const bolt_layout& b, design_standard s);
 std::string minimum_edge_distance_rule(design_standard s);  // the rule in words, with its source
+
+// An end plate's defaults where the detail does not give them: the gauge
+// 90 mm (the standard components of simple joints, SBE Part 5, MSB05 p. 14:
+// gauge 90 or 140 mm; reference pack 7 [C]) and the width the gauge plus
+// 60 mm, 30 mm from each bolt line to the plate's side edge (common practice,
+// no source; 30 mm meets EN 1993-1-8 Table 3.3's 1.2 d_0 up to M22).
+double default_end_plate_gauge();
+double default_end_plate_width(double gauge);
 
 // The largest fillet leg a plate of thickness t takes:
 //   AISC 360-16 J2.2b (from memory): t below 1/4 in, else t - 1/16 in;
