@@ -175,6 +175,15 @@ check ductile_hierarchy_check(const project& p, const beam& b, beam_end e)
     const bool us = p.standard == design_standard::aisc360;
     std::vector<std::string> found, fine;
     bool compared = false;
+    // The numbers of each comparison made; the check's value and limit are
+    // those of the first adverse one (the one the warning is about), else the
+    // weld's, else the first made.
+    struct comparison {
+        double value, limit;
+        dimension dim;
+        bool limit_is_minimum, adverse, weld;
+    };
+    std::vector<comparison> numbers;
     // The bolts must not be the first to go: bearing in the plate or the web
     // (which deforms and lets the joint turn) before bolt shear (which is
     // sudden). EN 1993-1-8 6.4.2(3): a joint governed by bolt shear is not
@@ -192,6 +201,7 @@ check ductile_hierarchy_check(const project& p, const beam& b, beam_end e)
             const std::string which = *plate->resistance <= *web->resistance ? "bearing on the plate" : "bearing on the web";
             const std::string text = which + " (" + fmt(p, bearing, dims::force) + ") against bolt shear (" +
                                      fmt(p, *shear->resistance, dims::force) + ")";
+            numbers.push_back({bearing, *shear->resistance, dims::force, false, bearing > *shear->resistance, false});
             if (bearing <= *shear->resistance) fine.push_back(text + ": bearing governs, the bolts do not shear first");
             else
                 found.push_back(text + ": bolt shear governs, so the bolts may shear before the holes deform and "
@@ -232,9 +242,7 @@ check ductile_hierarchy_check(const project& p, const beam& b, beam_end e)
                    " t_p (EN 1993-1-8 4.5.3.2, " + to_string(det.grade) + ")";
         }
         compared = true;
-        c.value = have;
-        c.limit = need;
-        c.limit_is_minimum = true;
+        numbers.push_back({have, need, dims::length, true, !(have >= need * (1 - 1e-9)), true});
         const std::string text = std::string("the weld ") + (us ? "leg " : "throat ") + fmt(p, have, dims::length) +
                                  " against " + rule + ", " + fmt(p, need, dims::length);
         if (have >= need * (1 - 1e-9)) fine.push_back(text + ": the plate yields before the weld");
@@ -244,6 +252,18 @@ check ductile_hierarchy_check(const project& p, const beam& b, beam_end e)
     }
     if (!found.empty()) c.status = check_status::warn;
     else if (compared) c.status = check_status::pass;
+    const comparison* shown = nullptr;
+    for (const auto& n : numbers)
+        if (n.adverse && !shown) shown = &n;
+    for (const auto& n : numbers)
+        if (n.weld && !shown) shown = &n;
+    if (!shown && !numbers.empty()) shown = &numbers.front();
+    if (shown) {
+        c.value = shown->value;
+        c.limit = shown->limit;
+        c.dim = shown->dim;
+        c.limit_is_minimum = shown->limit_is_minimum;
+    }
     const auto join = [](const std::vector<std::string>& v) {
         std::string out;
         for (std::size_t i = 0; i < v.size(); ++i) out += (i ? "; " : "") + v[i];

@@ -145,6 +145,21 @@ TEST_CASE("ductile-hierarchy [W] [6.4.2]: bearing before bolt shear and a full-s
     CHECK(cb.status == check_status::warn);
     CHECK(cb.message.find("bolt shear governs") != std::string::npos);
     CHECK(cb.message.find("the weld may tear before the plate yields") != std::string::npos);
+    // Its value and limit are those of the first adverse comparison, the bolts':
+    // the lesser bearing resistance against the bolt shear resistance (forces).
+    CHECK(cb.dim == dims::force);
+    CHECK(*cb.value > *cb.limit);
+    CHECK_FALSE(cb.limit_is_minimum);
+
+    // A good weld with bolt shear governing: the warning's numbers are the bolts', not the weld's.
+    std::string bolts_only = mezzanine_detail;
+    bolts_only.insert(bolts_only.size() - 1, R"(, "bolt_grade": "4.6", "weld": {"leg": "8 mm"})");
+    const auto bo =
+        assess(R"({"stiffness": {"min": "300 kN*m/rad", "max": "1400 kN*m/rad"}, "detail": )" + bolts_only + "}");
+    const check& cbo = find(bo.a, "ductile-hierarchy-start");
+    CHECK(cbo.status == check_status::warn);
+    CHECK(cbo.dim == dims::force);
+    CHECK(*cbo.value > *cbo.limit);
 
     const auto n = assess(R"({"stiffness": {"min": "300 kN*m/rad", "max": "1400 kN*m/rad"}, "detail": )" +
                           mezzanine_detail + "}");
