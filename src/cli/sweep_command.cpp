@@ -252,6 +252,10 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
     derive_joints(p);  // "from-detail" joints resolved before any analysis
     if (p.beams.empty()) throw input_error("/beams", "expected at least one beam to sweep, found none");
     const beam* b = o.beam_id.empty() ? &p.beams.front() : &beam_by_id(p, o.beam_id, o.file);
+    if (b->layout == beam_layout::overhang)
+        throw input_error(b->pointer + "/layout", "expected a beam on two supports to sweep: the sweep, "
+                                                  "thresholds and probabilities of an overhang (beam " + b->id +
+                                                  ") are not supported yet, found \"overhang\"");
     if (b->layout == beam_layout::cantilever)
         throw input_error(b->pointer + "/layout", "expected a beam on two supports to sweep: the sweep, thresholds and "
                                                   "probabilities of a cantilever (beam " + b->id +

@@ -576,8 +576,9 @@ row_rules read_row_rules(row_reader& r)
     if (auto c = r.cell("layout", false)) {
         if (*c == "two-supports" || *c == "cantilever") out.layout = parse_beam_layout(*c);
         else if (*c == "overhang")
-            r.add(*s.column("layout"), "expected \"two-supports\" or \"cantilever\", found \"overhang\": a beam with an "
-                                       "overhang beyond its end support is not supported yet");
+            r.add(*s.column("layout"), "expected \"two-supports\" or \"cantilever\", found \"overhang\": a schedule has "
+                                       "no column for the overhang's length, so an overhang is not supported in "
+                                       "schedules yet (give it in a project file)");
         else r.add(*s.column("layout"), "expected \"two-supports\" or \"cantilever\", found " + in_quotes(*c));
     }
     return out;

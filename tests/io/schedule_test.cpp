@@ -263,5 +263,5 @@ TEST_CASE("schedule: a layout column - a cantilever row takes its root at start 
     const auto c3 = read_schedule_row(s, 3, test_catalogue());
     CHECK_FALSE(c3.input);
     CHECK(where_of(c3) == "line 5, column 8 (layout)");
-    CHECK(message_of(c3).find("not supported yet") != std::string::npos);
+    CHECK(message_of(c3).find("no column for the overhang") != std::string::npos);
 }
