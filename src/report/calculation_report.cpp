@@ -739,15 +739,23 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
 
 void report_writer::sweep_chart(const beam& b)
 {
-    // The sweep asks when a pinned end stops being one: not worked out for a cantilever or an overhang.
-    if (b.combinations.empty() || b.layout != beam_layout::two_supports) return;
+    if (b.combinations.empty()) return;
     sweep_settings settings;
     settings.combination = b.combinations.front().name;
     const sweep_result s = sweep_beam(p_, b, settings);
-    o_ << "<div class=\"keep\">\n<h3>Joint-stiffness sweep</h3>\n<p>Both joints together from a true pin to rigid, combination "
-       << esc(settings.combination)
-       << ": each result divided by its value with pins (end moments by their value with fixed ends) against "
-          "&kappa; = S L / EI, with the code boundaries and the given stiffness range.</p>\n";
+    // A cantilever's root, or an overhang's start joint, moves alone (threshold.hpp).
+    const std::string what =
+        b.layout == beam_layout::cantilever
+            ? "The root from &kappa; = 0.01 (a pinned root is a mechanism) to rigid, combination " +
+                  esc(settings.combination) + ": the tip's deflection and rotation divided by their values with a rigid root"
+        : b.layout == beam_layout::overhang
+            ? "The start joint from a true pin to rigid (an overhang has no end joint), combination " +
+                  esc(settings.combination) +
+                  ": each result divided by its value with a pinned start (end moments by their value with a fixed start)"
+            : "Both joints together from a true pin to rigid, combination " + esc(settings.combination) +
+                  ": each result divided by its value with pins (end moments by their value with fixed ends)";
+    o_ << "<div class=\"keep\">\n<h3>Joint-stiffness sweep</h3>\n<p>" << what
+       << " against &kappa; = S L / EI, with the code boundaries and the given stiffness range.</p>\n";
     figure("sweep", sweep_svg(p_, b, s),
            "Stiffness sweep of beam " + b.id + ", combination " + settings.combination +
                ": EN 1993-1-8 boundaries 0.5 and " + format_number(en_rigid_limit(p_.frame), 2) +

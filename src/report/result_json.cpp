@@ -310,12 +310,10 @@ json to_json(const project_assessment& a)
     for (const auto& b : a.beams) {
         beams.push_back(to_json(b));
         const beam& in = *b.input;
-        // Thresholds and probabilities ask when a pinned end stops being one:
-        // not worked out for a cantilever (null).
+        // Thresholds and probabilities: for a cantilever or an overhang along
+        // its one joint (threshold.hpp).
         beams.back()["sensitivity"] =
-            in.layout != beam_layout::two_supports
-                ? nlohmann::json(nullptr)
-                : sensitivity_json(*a.input, in, {in.start.distribution, in.end.distribution, in.stiffness_correlation});
+            sensitivity_json(*a.input, in, {in.start.distribution, in.end.distribution, in.stiffness_correlation});
     }
     out["beams"] = beams;
     out["caution"] = "Results support, and do not replace, the judgement of a qualified engineer; local codes and "

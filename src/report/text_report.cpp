@@ -367,11 +367,13 @@ void check_list(std::ostringstream& o, const project& p, const beam_assessment& 
 void sensitivity(std::ostringstream& o, const project& p, const beam_assessment& a)
 {
     const beam& b = *a.input;
-    // Thresholds are not worked out for a cantilever or an overhang.
-    if (b.layout != beam_layout::two_supports) return;
     const auto thresholds = threshold_report_lines(p, b);
     if (!thresholds.empty()) {
-        o << "\n  Thresholds (the stiffness, both joints together, at which a check changes its answer)\n";
+        o << "\n  Thresholds ("
+          << (b.layout == beam_layout::cantilever ? "the root's stiffness"
+              : b.layout == beam_layout::overhang ? "the start joint's stiffness"
+                                                  : "the stiffness, both joints together,")
+          << " at which a check changes its answer)\n";
         for (const auto& line : thresholds)
             if (line.rfind("Stiffness thresholds", 0) != 0) o << "    " << wrap(line, 94, "      ") << "\n";
     }
