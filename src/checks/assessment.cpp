@@ -125,12 +125,13 @@ beam_state solve_state(const beam_model& model, const beam& b, const combination
 // again. The key is every input of the solve, byte for byte, so a remembered
 // value is the value the solve would give.
 double remembered_frequency(double span, double EI, const std::vector<load>& loads, stiffness s, stiffness e,
-                            beam_layout layout)
+                            beam_layout layout, double overhang = 0.0)
 {
     std::string key;
     const auto put = [&key](const auto& v) { key.append(reinterpret_cast<const char*>(&v), sizeof v); };
     put(static_cast<int>(layout));
     put(span);
+    put(overhang);
     put(EI);
     for (const stiffness k : {s, e}) {
         put(k.is_rigid());
@@ -146,7 +147,7 @@ double remembered_frequency(double span, double EI, const std::vector<load>& loa
     thread_local std::unordered_map<std::string, double> memory;
     if (const auto it = memory.find(key); it != memory.end()) return it->second;
     if (memory.size() >= 50000) memory.clear();  // bounded: a few MB
-    const double f = first_natural_frequency(span, EI, loads, s, e, layout);
+    const double f = first_natural_frequency(span, EI, loads, s, e, layout, overhang);
     memory.emplace(std::move(key), f);
     return f;
 }
@@ -159,7 +160,7 @@ combination_result::frequencies frequencies_of(const beam& b, const combination&
     const std::vector<load> loads = factored_loads(b.loads, c);
     const auto f = [&](stiffness s, stiffness e) {
         try {
-            return remembered_frequency(b.span, b.EI(), loads, s, e, b.layout);
+            return remembered_frequency(b.span, b.EI(), loads, s, e, b.layout, b.overhang);
         } catch (const std::invalid_argument& x) {
             // The reader refuses a vibration combination without mass or with an upward load.
             throw internal_error(std::string("the frequency of combination ") + c.name + " could not be found: " + x.what());
@@ -167,8 +168,10 @@ combination_result::frequencies frequencies_of(const beam& b, const combination&
     };
     combination_result::frequencies out;
     const bool cantilever = b.layout == beam_layout::cantilever;
+    // A cantilever and an overhang have no end joint: their end is a pin by construction.
+    const bool end_free = cantilever || b.layout == beam_layout::overhang;
     if (!cantilever) out.pinned = f(stiffness::pinned(), stiffness::pinned());
-    out.fixed = cantilever ? f(stiffness::rigid(), stiffness::pinned()) : f(stiffness::rigid(), stiffness::rigid());
+    out.fixed = end_free ? f(stiffness::rigid(), stiffness::pinned()) : f(stiffness::rigid(), stiffness::rigid());
     const auto& rs = b.start.range;
     const auto& re = b.end.range;
     const std::pair<stiffness, stiffness> at[] = {{rs.min, re.min}, {rs.min, re.max}, {rs.max, re.min}, {rs.max, re.max}};
@@ -629,8 +632,9 @@ check frequency_check(const project& p, const beam& b, const std::vector<combina
     // A cantilever's bounds are its rigid root (no pinned bound: a mechanism);
     // the 18/sqrt(delta) estimate belongs to a beam on two supports and is not given for it.
     const bool cantilever = b.layout == beam_layout::cantilever;
+    const bool overhang = b.layout == beam_layout::overhang;
     std::string estimate;
-    if (!cantilever) {
+    if (b.layout == beam_layout::two_supports) {
         const double delta = gov->corners.at(lowest).max_deflection, delta_pinned = gov->pinned.value().max_deflection;
         if (delta > 0 && delta_pinned > 0)
             estimate = "; the estimate 18/sqrt(delta) gives " + fmt(frequency_from_deflection(delta), dims::frequency) +
@@ -638,6 +642,9 @@ check frequency_check(const project& p, const beam& b, const std::vector<combina
                        fmt(frequency_from_deflection(delta_pinned), dims::frequency) + " with pins";
     }
     const std::string bounds = cantilever ? fmt(f.fixed, dims::frequency) + " with a rigid root"
+                               : overhang ? fmt(f.pinned.value(), dims::frequency) + " with a pinned start, " +
+                                                fmt(f.fixed, dims::frequency) + " with a fixed start; the 18/sqrt(delta) "
+                                                "estimate belongs to a beam on two supports and is not given"
                                           : fmt(f.pinned.value(), dims::frequency) + " with ideal pins, " +
                                                 fmt(f.fixed, dims::frequency) + " fixed";
     const std::string text = "The first natural frequency is at least " + fmt(f.range.min, dims::frequency) +
@@ -957,6 +964,7 @@ void assess_overhang(const project& p, const beam& b, beam_assessment& a)
     a.checks.push_back(rotation_demand_check(p, a.combinations, e, true));
     a.checks.push_back(deflection_check(p, b, a.combinations));
     a.checks.push_back(overhang_tip_deflection_check(p, b, a.combinations));
+    a.checks.push_back(frequency_check(p, b, a.combinations));
     a.notes.push_back("Overhang: the beam runs on, continuous, over its end support to a free tip " +
                       format_quantity(b.overhang, dims::length, p.units) +
                       " beyond it. The start joint is checked as on two supports; there is no end joint. The "

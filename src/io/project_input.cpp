@@ -646,19 +646,6 @@ struct reader {
         return l ? parse_beam_layout(*l) : beam_layout::two_supports;
     }
 
-    // An overhang's natural frequency is not worked out: a vibration
-    // combination is refused at its "use".
-    void refuse_vibration(const json& b, const std::string& ptr)
-    {
-        if (!b.contains("combinations") || !b.at("combinations").is_array()) return;
-        const json& arr = b.at("combinations");
-        for (std::size_t k = 0; k < arr.size(); ++k)
-            if (arr[k].is_object() && arr[k].contains("use") && arr[k].at("use") == "vibration")
-                problems.add(child(child(child(ptr, "combinations"), k), "use"),
-                             "expected \"strength\" or \"service\" on an overhang: its natural frequency is not "
-                             "supported yet for an overhang, found \"vibration\"");
-    }
-
     // A share written as a fraction (0.1) or a percentage ("10 %"), above 0 and at most 1.
     std::optional<double> read_fraction(const json& v, const std::string& ptr)
     {
@@ -837,16 +824,11 @@ struct reader {
                     out.root_flexibility_is_default = false;
                 }
             }
-            if (lim->contains("frequency") && overhanging)
-                problems.add(child(child(ptr, "limits"), "frequency"),
-                             "expected no \"frequency\" limit on an overhang: its natural frequency is not supported yet "
-                             "for an overhang, found " + shown(lim->at("frequency")));
-            else if (lim->contains("frequency"))
+            if (lim->contains("frequency"))
                 out.frequency_limit = plausible(*lim, child(ptr, "limits"), "frequency", dims::frequency, true,
                                                 plausible_frequency_limit);
         }
         check_vibration(b, ptr, combos, loads, out.frequency_limit.has_value());
-        if (overhanging) refuse_vibration(b, ptr);
         out.stiffness_correlation = read_stiffness_correlation(b, ptr, problems).value_or(1);
         if (b.contains("steel")) out.steel = read_steel(b.at("steel"), child(ptr, "steel"), standard, problems, &system);
         if (!id || !span || !E || !sec || !js || !je || !overhang) return std::nullopt;

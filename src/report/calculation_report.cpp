@@ -195,7 +195,7 @@ private:
     void connection_inputs(const beam& b);
     void combination_block(const beam& b, const combination_result& r);
     void results_table(const beam& b, const combination_result& r);
-    void frequency_rows(const combination_result& r);
+    void frequency_rows(const combination_result& r, bool with_estimate);
     void tip_rows(const combination_result& r);
     void span_diagrams(const beam& b, const combination_result& r);
     void sweep_chart(const beam& b);
@@ -584,7 +584,7 @@ void report_writer::results_table(const beam& b, const combination_result& r)
            << "</td><td class=\"num\">" << cell(r.fixed.*(f[i].member)) << "</td></tr>\n";
     }
     if (b.layout == beam_layout::overhang) tip_rows(r);
-    if (r.frequency) frequency_rows(r);
+    if (r.frequency) frequency_rows(r, b.layout == beam_layout::two_supports);
     o_ << "</table>\n";
 }
 
@@ -614,7 +614,7 @@ void report_writer::tip_rows(const combination_result& r)
 
 // A vibration combination: the first natural frequency of each state, and the
 // 18/sqrt(delta) estimate from its deflection (model/natural_frequency.hpp).
-void report_writer::frequency_rows(const combination_result& r)
+void report_writer::frequency_rows(const combination_result& r, bool with_estimate)
 {
     const auto& fr = *r.frequency;
     const auto row = [&](const std::string& label, const std::string (&cells)[4]) {
@@ -627,7 +627,7 @@ void report_writer::frequency_rows(const combination_result& r)
                                   u_.num(fr.fixed, dims::frequency)};
     row("first natural frequency", exact);
     // The estimate belongs to a beam on two supports (natural_frequency.hpp).
-    if (!r.pinned) return;
+    if (!r.pinned || !with_estimate) return;
     const auto estimate = [](double d) {
         return d > 0 ? format_number(frequency_from_deflection(d), 4) : std::string("-");
     };

@@ -322,7 +322,7 @@ void combination_tables(std::ostringstream& o, const project& p, const beam_asse
               << rpad(u.num(fr.range.min, dims::frequency), 12)
               << rpad(u.num(fr.range.max, dims::frequency), 12) << rpad(u.num(fr.fixed, dims::frequency), 11) << "\n";
             // The estimate is for a beam on two supports (natural_frequency.hpp).
-            if (!r.pinned) continue;
+            if (!r.pinned || a.input->layout != beam_layout::two_supports) continue;
             o << "    " << pad("  estimate 18/sqrt(delta mm)", 32) << pad(u.unit(dims::frequency), 10)
               << rpad(estimate_cell(r.pinned->max_deflection), 11)
               << rpad(estimate_cell(r.envelope.of(&beam_state::max_deflection).max), 12)

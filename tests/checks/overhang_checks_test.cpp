@@ -97,7 +97,7 @@ TEST_CASE("overhang assessment: the start joint's checks as on two supports - no
     for (const char* id : {"stiffness-class-start", "joint-moment-start", "strength-class-start", "support-moment-start",
                            "moment-reversal-start", "rotation-demand-start", "deflection", "tip-deflection"})
         CHECK_MESSAGE(has(a, id), id);
-    for (const char* id : {"stiffness-class-end", "joint-moment-end", "gap-closure-start", "frequency", "root-class"})
+    for (const char* id : {"stiffness-class-end", "joint-moment-end", "gap-closure-start", "root-class"})
         CHECK_FALSE_MESSAGE(has(a, id), id);
     // 4 EI/L is above 0.5 EI/L: not nominally pinned [EN].
     CHECK(find(a, "stiffness-class-start").status == check_status::fail);
@@ -117,7 +117,7 @@ TEST_CASE("overhang assessment: the start joint's checks as on two supports - no
     CHECK(sls->pinned->max_deflection_at <= 6.0);
 }
 
-TEST_CASE("overhang refusals at the input edge: no overhang - overhang on two supports - overhang 0 - a load beyond the tip - an end joint - a support rotation - vibration [the project's rules]")
+TEST_CASE("overhang refusals at the input edge: no overhang - overhang on two supports - overhang 0 - a load beyond the tip - an end joint - a support rotation [the project's rules]")
 {
     std::string missing = overhang("0", everywhere);
     replace_text(missing, R"("overhang": "1.8 m",)", "");
@@ -136,8 +136,29 @@ TEST_CASE("overhang refusals at the input edge: no overhang - overhang on two su
     refused(with_end, "/beams/0/joints/end", "continuous");
     refused(overhang(R"(0, "support_rotation": "2 mrad")", everywhere), "/beams/0/joints/start/support_rotation",
             "not supported yet for an overhang");
-    std::string vib = overhang("0", everywhere);
-    const std::string service = R"({"name": "SLS", "use": "service")";
-    replace_text(vib, service, R"({"name": "SLS", "use": "vibration")");
-    refused(vib, "/beams/0/combinations/1/use", "not supported yet for an overhang");
+}
+
+TEST_CASE("overhang frequency check: the range between the pinned- and fixed-start frequencies - no 18/sqrt(delta) estimate - against limits.frequency [the natural_frequency tests hold the values]")
+{
+    std::string text = overhang(R"({"min": "0.2 EI/L", "max": "4 EI/L"})", everywhere);
+    replace_text(text, R"({"name": "SLS", "use": "service", "factors": {"G": 1.0}})",
+                 R"({"name": "SLS", "use": "service", "factors": {"G": 1.0}},
+                    {"name": "VIB", "use": "vibration", "factors": {"G": 1.0}})");
+    replace_text(text, R"("limits": {"deflection": "span/250"})", R"("limits": {"deflection": "span/250", "frequency": "4 Hz"})");
+    const project p = parse_project(text);
+    const auto a = assess_beam(p, p.beams.at(0));
+    const check& c = find(a, "frequency");
+    const combination_result* vib = nullptr;
+    for (const auto& r : a.combinations)
+        if (r.comb.name == "VIB") vib = &r;
+    REQUIRE(vib);
+    REQUIRE(vib->frequency);
+    const auto& f = *vib->frequency;
+    CHECK(*f.pinned < f.range.min);
+    CHECK(f.range.min < f.range.max);
+    CHECK(f.range.max < f.fixed);
+    CHECK(*c.value == doctest::Approx(f.range.min).epsilon(1e-15));
+    CHECK(*c.limit == doctest::Approx(4.0).epsilon(1e-15));
+    CHECK(c.status == (f.range.min >= 4.0 ? check_status::pass : check_status::fail));
+    CHECK(c.message.find("not given") != std::string::npos);  // the estimate
 }
