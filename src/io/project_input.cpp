@@ -678,12 +678,17 @@ struct reader {
     // worked out for one, are refused by name.
     void check_root(const json& j, const std::string& ptr, const std::optional<joint>& root)
     {
-        for (const char* key : {"stiffness_distribution", "behaviour", "detail", "support_rotation", "contact_stiffness",
+        for (const char* key : {"behaviour", "detail", "support_rotation", "contact_stiffness",
                                 "designed_for_closure", "dependable_lower_bound", "rotation_capacity",
                                 "stiffness_scatter", "support_eccentricity", "column", "support_moment_resistance"})
             if (j.contains(key))
                 problems.add(child(ptr, key), std::string("expected no \"") + key + "\" on a cantilever's root: it is "
                                               "not supported yet for a cantilever, found " + shown(j.at(key)));
+        // A normal distribution truncated at zero reaches a pinned root, a mechanism.
+        if (root && root->distribution && root->distribution->kind() == distribution_kind::normal)
+            problems.add(child(ptr, "stiffness_distribution"),
+                         "expected a \"lognormal\" or \"uniform-log\" root stiffness (above 0 everywhere): a \"normal\" "
+                         "distribution truncated at zero reaches a pinned root, a mechanism, found \"normal\"");
         for (const char* key : {"stiffness", "moment_resistance"})
             if (j.contains(key) && j.at(key).is_string() && j.at(key) == "from-detail")
                 problems.add(child(ptr, key), "expected a declared value on a cantilever's root: \"from-detail\" is "
@@ -703,9 +708,8 @@ struct reader {
     // not worked out for an overhang yet, and are refused by name.
     void check_overhang_start(const json& j, const std::string& ptr)
     {
-        for (const char* key : {"stiffness_distribution", "behaviour", "detail", "support_rotation", "contact_stiffness",
-                                "designed_for_closure", "dependable_lower_bound", "rotation_capacity",
-                                "stiffness_scatter"})
+        for (const char* key : {"behaviour", "detail", "support_rotation", "contact_stiffness", "designed_for_closure",
+                                "dependable_lower_bound", "rotation_capacity", "stiffness_scatter"})
             if (j.contains(key))
                 problems.add(child(ptr, key), std::string("expected no \"") + key + "\" on the start joint of an "
                                               "overhang: it is not supported yet for an overhang, found " + shown(j.at(key)));

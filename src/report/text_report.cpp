@@ -383,7 +383,9 @@ void sensitivity(std::ostringstream& o, const project& p, const beam_assessment&
         o << "\n  Probability that a check does not pass, over the stiffness distribution"
           << (b.start.distribution && b.end.distribution
                   ? (b.stiffness_correlation == 1 ? "s (ends fully correlated)" : "s (ends independent)")
-                  : " of the " + std::string(b.start.distribution ? "start" : "end") + " joint")
+                  : " of the " + std::string(b.layout == beam_layout::cantilever ? "root"
+                                             : b.start.distribution              ? "start joint"
+                                                                                 : "end joint"))
           << "\n";
         for (const auto& f : probabilities) {
             if (f.p_fail <= 0.0) continue;
