@@ -8,6 +8,7 @@
 #include <vector>
 
 #include "pinproof/report/xml_text.hpp"
+#include "report/load_arrow.hpp"
 
 namespace pinproof {
 namespace {
@@ -57,13 +58,10 @@ public:
 private:
     double x_of(double pos) const { return margin + pos * scale_; }
     void text(double x, double y, const std::string& s, const char* anchor = "middle", const char* extra = "");
-    void arrow_down(double x, double y_tip, double length, const char* colour);
-    void arrow_up(double x, double y_base, double length, const char* colour);
-    // Down for a load that acts downward, up (head away from the beam) for an uplift.
+    // Down for a load that acts downward, up (head away from the beam) for an uplift (load_arrow.hpp).
     void load_arrow(double x, double y, double length, const char* colour, bool down)
     {
-        if (down) arrow_down(x, y, length, colour);
-        else arrow_up(x, y, length, colour);
+        o_ << load_arrow_svg(x, y, length, down, colour, "1.4");
     }
     void line_loads(double& top);
     void point_loads(double& top);
@@ -85,21 +83,6 @@ void drawing::text(double x, double y, const std::string& s, const char* anchor,
 {
     o_ << "<text x=\"" << num(x) << "\" y=\"" << num(y) << "\" text-anchor=\"" << anchor << "\"" << extra << ">"
        << xml_text(s) << "</text>\n";
-}
-
-void drawing::arrow_down(double x, double y_tip, double length, const char* colour)
-{
-    o_ << "<line x1=\"" << num(x) << "\" y1=\"" << num(y_tip - length) << "\" x2=\"" << num(x) << "\" y2=\""
-       << num(y_tip - 5) << "\" stroke=\"" << colour << "\" stroke-width=\"1.4\"/>\n"
-       << "<path d=\"M" << num(x) << " " << num(y_tip) << " l-3.5 -7 h7 z\" fill=\"" << colour << "\"/>\n";
-}
-
-// An upward arrow standing on y_base, its head `length` above it: an uplift.
-void drawing::arrow_up(double x, double y_base, double length, const char* colour)
-{
-    o_ << "<line x1=\"" << num(x) << "\" y1=\"" << num(y_base) << "\" x2=\"" << num(x) << "\" y2=\""
-       << num(y_base - length + 5) << "\" stroke=\"" << colour << "\" stroke-width=\"1.4\"/>\n"
-       << "<path d=\"M" << num(x) << " " << num(y_base - length) << " l-3.5 7 h7 z\" fill=\"" << colour << "\"/>\n";
 }
 
 // Line loads (uniform and linearly varying) as bands of arrows above the beam,
