@@ -34,6 +34,9 @@ done
 # A cantilever: check and report (its sweep is not supported yet).
 run balcony-cantilevers.check "$bin" check catalog-examples/balcony-cantilevers.json --json "out/balcony-cantilevers.result.json"
 run balcony-cantilevers.report "$bin" report catalog-examples/balcony-cantilevers.json -o "out/balcony-cantilevers.report.html"
+# An overhang: check and report (its sweep is not supported yet).
+run loading-dock-canopy.check "$bin" check catalog-examples/loading-dock-canopy.json --json "out/loading-dock-canopy.result.json"
+run loading-dock-canopy.report "$bin" report catalog-examples/loading-dock-canopy.json -o "out/loading-dock-canopy.report.html"
 run mezzanine.detail-start "$bin" detail catalog-examples/mezzanine-fin-plates.json --beam MZ-C/3-4 --end start \
     --svg "out/mezzanine.detail-start.svg"
 run mezzanine.detail-end "$bin" detail catalog-examples/mezzanine-fin-plates.json --beam MZ-D/3-4 --end end \

@@ -12,6 +12,7 @@
 #include "pinproof/joints/joint_law.hpp"
 #include "pinproof/checks/joint_strength.hpp"
 #include "pinproof/checks/cantilever_checks.hpp"
+#include "pinproof/checks/overhang_checks.hpp"
 #include "pinproof/checks/derived_joint_checks.hpp"
 
 namespace pinproof {
@@ -126,12 +127,13 @@ beam_state solve_state(const beam_model& model, const beam& b, const combination
 // again. The key is every input of the solve, byte for byte, so a remembered
 // value is the value the solve would give.
 double remembered_frequency(double span, double EI, const std::vector<load>& loads, stiffness s, stiffness e,
-                            beam_layout layout)
+                            beam_layout layout, double overhang = 0.0)
 {
     std::string key;
     const auto put = [&key](const auto& v) { key.append(reinterpret_cast<const char*>(&v), sizeof v); };
     put(static_cast<int>(layout));
     put(span);
+    put(overhang);
     put(EI);
     for (const stiffness k : {s, e}) {
         put(k.is_rigid());
@@ -147,7 +149,7 @@ double remembered_frequency(double span, double EI, const std::vector<load>& loa
     thread_local std::unordered_map<std::string, double> memory;
     if (const auto it = memory.find(key); it != memory.end()) return it->second;
     if (memory.size() >= 50000) memory.clear();  // bounded: a few MB
-    const double f = first_natural_frequency(span, EI, loads, s, e, layout);
+    const double f = first_natural_frequency(span, EI, loads, s, e, layout, overhang);
     memory.emplace(std::move(key), f);
     return f;
 }
@@ -160,7 +162,7 @@ combination_result::frequencies frequencies_of(const beam& b, const combination&
     const std::vector<load> loads = factored_loads(b.loads, c);
     const auto f = [&](stiffness s, stiffness e) {
         try {
-            return remembered_frequency(b.span, b.EI(), loads, s, e, b.layout);
+            return remembered_frequency(b.span, b.EI(), loads, s, e, b.layout, b.overhang);
         } catch (const std::invalid_argument& x) {
             // The reader refuses a vibration combination without mass or with an upward load.
             throw internal_error(std::string("the frequency of combination ") + c.name + " could not be found: " + x.what());
@@ -168,8 +170,10 @@ combination_result::frequencies frequencies_of(const beam& b, const combination&
     };
     combination_result::frequencies out;
     const bool cantilever = b.layout == beam_layout::cantilever;
+    // A cantilever and an overhang have no end joint: their end is a pin by construction.
+    const bool end_free = cantilever || b.layout == beam_layout::overhang;
     if (!cantilever) out.pinned = f(stiffness::pinned(), stiffness::pinned());
-    out.fixed = cantilever ? f(stiffness::rigid(), stiffness::pinned()) : f(stiffness::rigid(), stiffness::rigid());
+    out.fixed = end_free ? f(stiffness::rigid(), stiffness::pinned()) : f(stiffness::rigid(), stiffness::rigid());
     const auto& rs = b.start.range;
     const auto& re = b.end.range;
     const std::pair<stiffness, stiffness> at[] = {{rs.min, re.min}, {rs.min, re.max}, {rs.max, re.min}, {rs.max, re.max}};
@@ -189,18 +193,21 @@ combination_result analyse_combination(const beam& b, const combination& c, bool
 {
     combination_result out;
     out.comb = c;
-    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c), b.layout);
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, c), b.layout, b.overhang);
     const bool cantilever = b.layout == beam_layout::cantilever;
     // A cantilever's tip is free (its end joint a pin by construction); its
-    // pinned bound would be a mechanism.
+    // pinned bound would be a mechanism. An overhang has no end joint either:
+    // its bounds are the start joint's, pinned and fixed.
+    const bool end_free = cantilever || b.layout == beam_layout::overhang;
     if (!cantilever) out.pinned = model.solve(stiffness::pinned(), stiffness::pinned());
-    out.fixed = model.solve(stiffness::rigid(), cantilever ? stiffness::pinned() : stiffness::rigid());
+    out.fixed = model.solve(stiffness::rigid(), end_free ? stiffness::pinned() : stiffness::rigid());
     const auto& rs = b.start.range;
     const auto& re = b.end.range;
     const auto solve = [&](stiffness s, stiffness e) { return solve_state(model, b, c, s, e); };
     out.corners = {solve(rs.min, re.min), solve(rs.min, re.max), solve(rs.max, re.min), solve(rs.max, re.max)};
     if (c.use == limit_state::vibration) out.frequency = frequencies_of(b, c);
-    if (c.use == limit_state::strength && !cantilever) {
+    // The collapse of the beam with its joints: worked out on two supports only.
+    if (c.use == limit_state::strength && b.layout == beam_layout::two_supports) {
         if (const auto Mpl = b.plastic_moment()) {
             try {
                 out.collapse = beam_collapse(model, end_for_joint(b.start, rs.min), end_for_joint(b.end, re.min), *Mpl);
@@ -345,7 +352,10 @@ check joint_moment_check(const project& p, const beam& b, const std::vector<comb
     c.value = g.value;
     const std::string attracted = "Under strength combinations the joint attracts up to " + fmt(g.value, dims::moment) +
                                   " (combination " + g.combination +
-                                  ", at this joint's upper-bound stiffness with the far joint at its lower bound)";
+                                  (b.layout == beam_layout::overhang
+                                       ? std::string(", at the joint's upper-bound stiffness; an overhang has no far joint)")
+                                       : std::string(", at this joint's upper-bound stiffness with the far joint at its "
+                                                     "lower bound)"));
     if (!mrd) {
         c.status = check_status::not_applicable;
         c.message = attracted + "; no moment resistance is declared for the joint, so this is not checked.";
@@ -542,7 +552,8 @@ check support_moment_check(const project& p, const beam& b, const joint_assessme
     return c;
 }
 
-check rotation_demand_check(const project& p, const std::vector<combination_result>& combos, beam_end e)
+check rotation_demand_check(const project& p, const std::vector<combination_result>& combos, beam_end e,
+                            bool one_joint = false)
 {
     const formatter fmt{p.units};
     check c;
@@ -558,7 +569,9 @@ check rotation_demand_check(const project& p, const std::vector<combination_resu
     c.value = g.value;
     c.limit = simple_connection_rotation_rule_of_thumb;
     const std::string demand = "The end rotation demand is up to " + fmt(g.value, dims::angle) + " (combination " +
-                               g.combination + ", both joints at their lower-bound stiffness)";
+                               g.combination +
+                               (one_joint ? ", the joint at its lower-bound stiffness)"
+                                          : ", both joints at their lower-bound stiffness)");
     if (g.value <= simple_connection_rotation_rule_of_thumb) {
         c.status = check_status::pass;
         c.message = demand + ", within the about 30 mrad a simple connection is commonly expected to accommodate "
@@ -602,7 +615,10 @@ check deflection_check(const project& p, const beam& b, const std::vector<combin
         return c;
     }
     c.value = g.value;
-    const std::string text = "The service deflection is up to " + fmt(g.value, dims::length) + " over the stiffness range (" +
+    const std::string text = std::string(b.layout == beam_layout::overhang ? "The service deflection of the back span "
+                                                                           "(between the supports) is up to "
+                                                                         : "The service deflection is up to ") +
+                             fmt(g.value, dims::length) + " over the stiffness range (" +
                              fmt(pinned, dims::length) + " with ideal pins), combination " + g.combination +
                              ", against the limit " +
                              (b.deflection->span_ratio ? b.deflection->text + " = " : std::string()) +
@@ -638,8 +654,9 @@ check frequency_check(const project& p, const beam& b, const std::vector<combina
     // A cantilever's bounds are its rigid root (no pinned bound: a mechanism);
     // the 18/sqrt(delta) estimate belongs to a beam on two supports and is not given for it.
     const bool cantilever = b.layout == beam_layout::cantilever;
+    const bool overhang = b.layout == beam_layout::overhang;
     std::string estimate;
-    if (!cantilever) {
+    if (b.layout == beam_layout::two_supports) {
         const double delta = gov->corners.at(lowest).max_deflection, delta_pinned = gov->pinned.value().max_deflection;
         if (delta > 0 && delta_pinned > 0)
             estimate = "; the estimate 18/sqrt(delta) gives " + fmt(frequency_from_deflection(delta), dims::frequency) +
@@ -647,6 +664,9 @@ check frequency_check(const project& p, const beam& b, const std::vector<combina
                        fmt(frequency_from_deflection(delta_pinned), dims::frequency) + " with pins";
     }
     const std::string bounds = cantilever ? fmt(f.fixed, dims::frequency) + " with a rigid root"
+                               : overhang ? fmt(f.pinned.value(), dims::frequency) + " with a pinned start, " +
+                                                fmt(f.fixed, dims::frequency) + " with a fixed start; the 18/sqrt(delta) "
+                                                "estimate belongs to a beam on two supports and is not given"
                                           : fmt(f.pinned.value(), dims::frequency) + " with ideal pins, " +
                                                 fmt(f.fixed, dims::frequency) + " fixed";
     const std::string text = "The first natural frequency is at least " + fmt(f.range.min, dims::frequency) +
@@ -950,6 +970,31 @@ void assess_cantilever(const project& p, const beam& b, beam_assessment& a)
                       "of a beam on two supports are not run (docs/method/layouts.md).");
 }
 
+// An overhang (overhang_checks.hpp): the start joint is checked as the
+// start of a beam on two supports; the beam runs on over its end support, so
+// there is no end joint and nothing of it is checked; the back span's
+// deflection and the tip's are checked.
+void assess_overhang(const project& p, const beam& b, beam_assessment& a)
+{
+    const beam_end e = beam_end::start;
+    a.checks.push_back(stiffness_class_check(p, a.start));
+    a.plastic_moment = b.plastic_moment();
+    a.checks.push_back(joint_moment_check(p, b, a.combinations, e, a.start));
+    a.checks.push_back(strength_class_check(p, b, e));
+    a.checks.push_back(joint_ductility_check(p, b, a.combinations, e));
+    a.start.support = support_response_of(b, a.combinations, e);
+    a.checks.push_back(support_moment_check(p, b, a.start));
+    a.checks.push_back(moment_reversal_check(p, a.combinations, e));
+    a.checks.push_back(rotation_demand_check(p, a.combinations, e, true));
+    a.checks.push_back(deflection_check(p, b, a.combinations));
+    a.checks.push_back(overhang_tip_deflection_check(p, b, a.combinations));
+    a.checks.push_back(frequency_check(p, b, a.combinations));
+    a.notes.push_back("Overhang: the beam runs on, continuous, over its end support to a free tip " +
+                      format_quantity(b.overhang, dims::length, p.units) +
+                      " beyond it. The start joint is checked as on two supports; there is no end joint. The "
+                      "end-gap, detail and collapse checks are not run for an overhang (docs/method/layouts.md).");
+}
+
 // Assumptions and defaults applied to the beam, in words.
 void add_notes(const project& p, const beam& b, beam_assessment& a)
 {
@@ -982,6 +1027,11 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
     a.checks.reserve(32);
     if (b.layout == beam_layout::cantilever) {
         assess_cantilever(p, b, a);
+        add_notes(p, b, a);
+        return a;
+    }
+    if (b.layout == beam_layout::overhang) {
+        assess_overhang(p, b, a);
         add_notes(p, b, a);
         return a;
     }

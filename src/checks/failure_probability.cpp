@@ -110,12 +110,25 @@ std::vector<scenario> scenarios(const project& p, const beam& b, const stiffness
         return s.is_rigid() ? std::string("rigid") : format_quantity(s.value(), dims::rotational_stiffness, p.units);
     };
     std::vector<scenario> out;
-    if (u.start && u.end) out.push_back({});
+    // One joint (a cantilever's root, an overhang's start): the end is a pin by construction.
+    if (b.layout != beam_layout::two_supports && u.start)
+        out.push_back({std::nullopt, stiffness::pinned(),
+                       b.layout == beam_layout::cantilever ? "; the root's only, the tip free"
+                                                           : "; the start joint's only, no end joint"});
+    else if (u.start && u.end) out.push_back({});
     else if (u.start)
         for (stiffness s : options(b.end)) out.push_back({std::nullopt, s, "; the end joint held at " + text(s)});
     else if (u.end)
         for (stiffness s : options(b.start)) out.push_back({s, std::nullopt, "; the start joint held at " + text(s)});
     return out;
+}
+
+// Where the checks that apply are listed: the pinned beam, or a cantilever's
+// rigid root (its pinned root is a mechanism). Its end is a pin in both.
+stiffness_pair probe_pair(const beam& b)
+{
+    if (b.layout == beam_layout::cantilever) return {stiffness::rigid(), stiffness::pinned()};
+    return {stiffness::pinned(), stiffness::pinned()};
 }
 
 stiffness draw(const std::optional<stiffness_distribution>& d, const std::optional<stiffness>& held, double u)
@@ -129,7 +142,7 @@ std::vector<failure_probability> one_scenario(const project& p, const beam& b, c
 {
     std::vector<failure_probability> out;
     const bool two_d = u.start && u.end && u.correlation == 0;
-    const point_evaluation probe = evaluate_at(p, b, {stiffness::pinned(), stiffness::pinned()});
+    const point_evaluation probe = evaluate_at(p, b, probe_pair(b));
     if (!two_d) {
         const pair_of_u pair = [&](double x) {
             return stiffness_pair{draw(u.start, sc.held_start, x), draw(u.end, sc.held_end, x)};
@@ -218,7 +231,7 @@ std::vector<monte_carlo_estimate> monte_carlo_probabilities(const project& p, co
     std::vector<monte_carlo_estimate> best;
     if (samples == 0) return best;
     const bool two_d = u.start && u.end && u.correlation == 0;
-    const point_evaluation probe = evaluate_at(p, b, {stiffness::pinned(), stiffness::pinned()});
+    const point_evaluation probe = evaluate_at(p, b, probe_pair(b));
     for (const auto& sc : scenarios(p, b, u)) {
         std::mt19937_64 gen(seed);
         const auto uniform = [&gen] { return (static_cast<double>(gen() >> 11) + 0.5) * 0x1.0p-53; };

@@ -34,6 +34,8 @@ stiffness stiffness_of_fixity(double r, double EI, double span)
     return stiffness::spring(3.0 * r * EI / (span * (1.0 - r)));
 }
 
+stiffness_path single_joint_path() { return {moving_end::start, stiffness::pinned()}; }
+
 stiffness_pair point_on_path(const stiffness_path& path, stiffness s)
 {
     switch (path.moving) {
@@ -173,12 +175,21 @@ std::vector<root_bracket> sign_changes(const std::function<double(double)>& f, c
 
 std::vector<threshold> find_thresholds(const project& p, const beam& b, const stiffness_path& path, int scan_points)
 {
+    if (b.layout != beam_layout::two_supports) {
+        // One joint (a cantilever's root, an overhang's start): only it moves.
+        // A cantilever's root never reaches the pin (a mechanism): its scan
+        // starts at the least kappa of the scan, 0.01.
+        std::vector<double> grid = fixity_scan(scan_points, b.EI(), b.span);
+        if (b.layout == beam_layout::cantilever) grid.erase(grid.begin());
+        return thresholds_on_scan(p, b, single_joint_path(), grid, nullptr);
+    }
     return thresholds_on_scan(p, b, path, fixity_scan(scan_points, b.EI(), b.span), nullptr);
 }
 
 std::vector<boundary_point> boundary_curve(const project& p, const beam& b, const std::string& check_id, int points)
 {
     if (points < 2) throw internal_error("a boundary curve needs at least two points");
+    if (b.layout != beam_layout::two_supports) throw internal_error("a boundary curve needs two joints");
     const double EI = b.EI(), L = b.span;
     const std::vector<double> r_grid = fixity_scan(25, EI, L);
     std::vector<boundary_point> out;
@@ -214,6 +225,8 @@ std::vector<std::string> threshold_report_lines(const project& p, const beam& b)
         }
         return "unknown";
     };
+    const bool one_joint = b.layout != beam_layout::two_supports;
+    const std::string joint_word = b.layout == beam_layout::cantilever ? "the root" : "the start joint";
     for (const auto& t : find_thresholds(p, b, {moving_end::both, stiffness::pinned()})) {
         const bool class_check = t.check.rfind("stiffness-class-", 0) == 0;
         if (class_check && t.below == check_status::pass && is_adverse(t.above))
@@ -223,11 +236,14 @@ std::vector<std::string> threshold_report_lines(const project& p, const beam& b)
         else
             out.push_back(t.check + ": " + gives(t.below) + " below " + S(t) + ", " + gives(t.above) + " above.");
     }
+    const std::string from = b.layout == beam_layout::cantilever ? "S*L/EI = 0.01 (a pinned root is a mechanism)"
+                                                                 : "a true pin";
     if (out.empty())
-        out.push_back("No check changes its answer between a true pin and a rigid joint (both ends equal).");
+        out.push_back("No check changes its answer between " + from + " and a rigid joint (" +
+                      (one_joint ? joint_word + " moving" : std::string("both ends equal")) + ").");
     else
-        out.insert(out.begin(), "Stiffness thresholds, both ends equal (each check's state change between a true pin "
-                                "and a rigid joint):");
+        out.insert(out.begin(), "Stiffness thresholds, " + (one_joint ? joint_word + " moving" : std::string("both ends equal")) +
+                                    " (each check's state change between " + from + " and a rigid joint):");
     return out;
 }
 

@@ -144,7 +144,7 @@ sweep_settings settings_for(const sweep_options& o, const beam* b)
     return settings;
 }
 
-nlohmann::json sweep_document(const sweep_options& o, const sweep_result& s, const sweep_settings& settings,
+nlohmann::json sweep_document(const sweep_options& o, const sweep_result& s,
                               const boundary_curves& curves, const std::vector<failure_probability>& probabilities,
                               const std::vector<monte_carlo_estimate>& mc)
 {
@@ -152,9 +152,9 @@ nlohmann::json sweep_document(const sweep_options& o, const sweep_result& s, con
     j["format"] = "pinproof-sweep/1";
     j["beam"] = s.beam_id;
     j["combination"] = s.combination;
-    j["moving"] = o.grid ? "grid" : to_string(settings.path.moving);
-    if (!o.grid && settings.path.moving != moving_end::both)
-        j["held"] = settings.path.held.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(settings.path.held.value());
+    j["moving"] = o.grid ? "grid" : to_string(s.settings.path.moving);
+    if (!o.grid && s.settings.path.moving != moving_end::both)
+        j["held"] = s.settings.path.held.is_rigid() ? nlohmann::json(nullptr) : nlohmann::json(s.settings.path.held.value());
     j["EI_over_L"] = s.EI / s.span;
     nlohmann::json rows = nlohmann::json::array();
     for (const auto& r : s.rows) {
@@ -165,7 +165,7 @@ nlohmann::json sweep_document(const sweep_options& o, const sweep_result& s, con
         rows.push_back(row);
     }
     j["rows"] = rows;
-    j["thresholds"] = thresholds_json(s.thresholds, to_string(settings.path.moving));
+    j["thresholds"] = thresholds_json(s.thresholds, to_string(s.settings.path.moving));
     nlohmann::json bc = nlohmann::json::object();
     for (const auto& [id, pts] : curves) {
         nlohmann::json a = nlohmann::json::array();
@@ -206,20 +206,34 @@ void write_outputs(const sweep_options& o, std::string csv, std::string svg, std
         if (*targets[i].second == "-") out << *texts[i];
 }
 
+beam_layout layout_of(const project& p, const std::string& id)
+{
+    for (const beam& b : p.beams)
+        if (b.id == id) return b.layout;
+    return beam_layout::two_supports;
+}
+
 void summary(std::ostream& out, const project& p, const sweep_options& o, const sweep_result& s,
              const sweep_settings& settings, const boundary_curves& curves,
              const std::vector<failure_probability>& probabilities, const std::vector<monte_carlo_estimate>& mc,
              const stiffness_uncertainty& uncertainty)
 {
     const unit_system u = p.units;
+    const beam_layout layout = p.beams.empty() ? beam_layout::two_supports : layout_of(p, s.beam_id);
+    const bool cantilever = layout == beam_layout::cantilever;
     out << "Stiffness sweep of beam " << s.beam_id << ", combination " << s.combination << ": " << s.rows.size()
-        << (o.grid ? " stiffness pairs" : " points") << " from a true pin to rigid";
-    if (!o.grid && settings.path.moving != moving_end::both)
+        << (o.grid ? " stiffness pairs" : " points")
+        << (cantilever ? " of the root from S*L/EI = 0.01 to rigid (a pinned root is a mechanism)"
+                       : " from a true pin to rigid");
+    if (layout == beam_layout::overhang) out << ", the start joint moving (an overhang has no end joint)";
+    if (!o.grid && layout == beam_layout::two_supports && settings.path.moving != moving_end::both)
         out << ", " << to_string(settings.path.moving) << " joint moving, the other held at "
             << stiffness_text(settings.path.held, u);
     out << " (EI/L = " << format_quantity(s.EI / s.span, dims::rotational_stiffness, u) << ").\n";
     if (!o.grid) {
-        if (s.thresholds.empty()) out << "No check changes its answer between a true pin and a rigid joint.\n";
+        if (s.thresholds.empty())
+            out << "No check changes its answer between " << (cantilever ? "S*L/EI = 0.01" : "a true pin")
+                << " and a rigid joint.\n";
         for (const auto& t : s.thresholds)
             out << "  " << t.check << ": " << to_string(t.below) << " below, " << to_string(t.above) << " above S = "
                 << format_quantity(t.at.value(), dims::rotational_stiffness, u)
@@ -252,10 +266,11 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
     derive_joints(p);  // "from-detail" joints resolved before any analysis
     if (p.beams.empty()) throw input_error("/beams", "expected at least one beam to sweep, found none");
     const beam* b = o.beam_id.empty() ? &p.beams.front() : &beam_by_id(p, o.beam_id, o.file);
-    if (b->layout == beam_layout::cantilever)
-        throw input_error(b->pointer + "/layout", "expected a beam on two supports to sweep: the sweep, thresholds and "
-                                                  "probabilities of a cantilever (beam " + b->id +
-                                                  ") are not supported yet, found \"cantilever\"");
+    // A cantilever or an overhang has one joint, the start: it alone moves.
+    if (b->layout != beam_layout::two_supports && (!o.end.empty() || !o.hold.empty()))
+        throw input_error(o.end.empty() ? "--hold" : "--end",
+                          "expected no --end or --hold for a " + to_string(b->layout) + " (beam " + b->id +
+                              "): it has one joint, the start, and the sweep moves it alone");
     const stiffness_uncertainty uncertainty{b->start.distribution, b->end.distribution, b->stiffness_correlation};
     const sweep_settings settings = settings_for(o, b);
 
@@ -275,7 +290,7 @@ int sweep_command(const sweep_options& o, std::ostream& out, std::ostream& /*err
         if (o.grid) throw input_error("--svg", "the chart is drawn for a path sweep; leave out --grid for --svg");
         svg = sweep_svg(p, *b, s);
     }
-    if (!o.json_out.empty()) json_text = sweep_document(o, s, settings, curves, probabilities, mc).dump(2) + "\n";
+    if (!o.json_out.empty()) json_text = sweep_document(o, s, curves, probabilities, mc).dump(2) + "\n";
     write_outputs(o, std::move(csv), std::move(svg), std::move(json_text), out);
     if (on_stdout) return 0;
     summary(out, p, o, s, settings, curves, probabilities, mc, uncertainty);

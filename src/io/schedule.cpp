@@ -326,7 +326,7 @@ const std::vector<std::string>& schedule_required_columns()
 const std::vector<std::string>& schedule_optional_columns()
 {
     static const std::vector<std::string> c{"combinations", "deflection_limit", "E", "description", "standard", "frame",
-                                            "layout"};
+                                            "layout", "overhang"};
     return c;
 }
 
@@ -571,14 +571,18 @@ row_rules read_row_rules(row_reader& r)
         if (*c == "braced" || *c == "unbraced") out.frame = parse_frame_bracing(*c);
         else r.add(*s.column("frame"), "expected \"braced\" or \"unbraced\", found " + in_quotes(*c));
     }
-    // "layout": empty or "two-supports" (the default), or "cantilever" (the
-    // start detail is the root, the end cell left empty: a free tip).
+    // "layout": empty or "two-supports" (the default), "cantilever" (the
+    // start detail is the root, the end cell left empty: a free tip), or
+    // "overhang" (the end cell left empty: the beam runs on over its end
+    // support; its length beyond it in the "overhang" column).
     if (auto c = r.cell("layout", false)) {
         if (*c == "two-supports" || *c == "cantilever") out.layout = parse_beam_layout(*c);
-        else if (*c == "overhang")
-            r.add(*s.column("layout"), "expected \"two-supports\" or \"cantilever\", found \"overhang\": a beam with an "
-                                       "overhang beyond its end support is not supported yet");
-        else r.add(*s.column("layout"), "expected \"two-supports\" or \"cantilever\", found " + in_quotes(*c));
+        else if (*c == "overhang" && !s.column("overhang"))
+            r.add(*s.column("layout"), "expected \"two-supports\" or \"cantilever\", found \"overhang\": an overhang "
+                                       "needs an \"overhang\" column with its length beyond the end support, and the "
+                                       "schedule has none");
+        else if (*c == "overhang") out.layout = beam_layout::overhang;
+        else r.add(*s.column("layout"), "expected \"two-supports\", \"cantilever\" or \"overhang\", found " + in_quotes(*c));
     }
     return out;
 }
@@ -624,14 +628,20 @@ std::array<std::optional<double>, 2> read_row_line_loads(row_reader& r)
 
 // The catalogue entries named by the start and end cells.
 // A cantilever names its root's detail at "start"; its "end" cell stays empty (a free tip).
-std::array<const catalogue_detail*, 2> read_row_details(row_reader& r, const detail_catalogue& catalogue, bool cantilever)
+// An overhang names its start joint's detail; its "end" cell stays empty (no joint there).
+std::array<const catalogue_detail*, 2> read_row_details(row_reader& r, const detail_catalogue& catalogue,
+                                                        beam_layout layout)
 {
     std::array<const catalogue_detail*, 2> details = {nullptr, nullptr};
     const char* end_cols[2] = {"start", "end"};
+    const bool cantilever = layout != beam_layout::two_supports;  // one joint, the start
     if (cantilever)
         if (auto e = r.cell("end", false))
-            r.add(*r.s.column("end"), "expected an empty cell: the end of a cantilever is its free tip (the start "
-                                      "detail is the root), found " + in_quotes(*e));
+            r.add(*r.s.column("end"), layout == beam_layout::cantilever
+                                          ? "expected an empty cell: the end of a cantilever is its free tip (the start "
+                                            "detail is the root), found " + in_quotes(*e)
+                                          : "expected an empty cell: an overhang runs on, continuous, over its end "
+                                            "support (the start detail is its only joint), found " + in_quotes(*e));
     for (int i = 0; i < 2; ++i) {
         if (cantilever && i == 1) continue;
         auto d = r.cell(end_cols[i], true);
@@ -727,7 +737,22 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     const std::optional<section> sec = read_row_section(r);
     const auto line_loads = read_row_line_loads(r);
     const bool cantilever = rules.layout == beam_layout::cantilever;
-    const auto details = read_row_details(r, catalogue, cantilever);
+    const bool overhanging = rules.layout == beam_layout::overhang;
+    const bool one_joint = cantilever || overhanging;
+    const auto details = read_row_details(r, catalogue, rules.layout);
+    // "overhang": its length beyond the end support, on that layout only.
+    std::optional<double> overhang = 0.0;
+    if (overhanging) overhang = r.plausible_cell("overhang", dims::length, true, plausibility::plausible_span);
+    else if (auto c = r.cell("overhang", false))
+        r.add(*s.column("overhang"), "expected an empty cell: only a row with layout \"overhang\" has an overhang, "
+                                     "found " + in_quotes(*c));
+    // An overhang's start detail: the end gap, a derived joint and a law are not worked out for an overhang yet.
+    if (overhanging && details[0] &&
+        (details[0]->geometry.is_object() || details[0]->stiffness_from_detail ||
+         details[0]->moment_resistance_from_detail || !details[0]->behaviour.is_null()))
+        r.add(*s.column("start"), "expected a start detail with a stated stiffness and resistance, no geometry and no "
+                                  "moment-rotation law: the end gap, \"from-detail\" and laws of an overhang's start "
+                                  "are not supported yet, found detail " + in_quotes(details[0]->id));
     // A cantilever's root: a pin is a mechanism; a detail's geometry (the end gap) is not worked out for a root yet.
     if (cantilever && details[0]) {
         const catalogue_detail& d = *details[0];
@@ -762,17 +787,18 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
         l.kind = load_kind::udl;
         l.value = *line_loads[i];
         l.from = 0.0;
-        l.to = *span;
+        l.to = *span + *overhang;  // an overhang: to its tip
         l.load_case = i == 0 ? "G" : "Q";
         b.loads.push_back(l);
     }
     b.combinations = combinations_of(rules.set);
     b.layout = rules.layout;
+    b.overhang = *overhang;
     b.start = joint_for_beam(*details[0], b.EI(), b.span);
-    b.end = cantilever ? joint{} : joint_for_beam(*details[1], b.EI(), b.span);
+    b.end = one_joint ? joint{} : joint_for_beam(*details[1], b.EI(), b.span);
     // A stiffness given as a multiple of EI/L meets the project file's ceiling here, with this beam's EI/L.
     bool stiffness_ok = true;
-    for (int i = 0; i < (cantilever ? 1 : 2); ++i) {
+    for (int i = 0; i < (one_joint ? 1 : 2); ++i) {
         const joint& j = i == 0 ? b.start : b.end;
         for (const stiffness& k : {j.range.min, j.range.max})
             if (!k.is_rigid())
@@ -788,7 +814,7 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     if (!stiffness_ok) return out;
     // A stiffness "from-detail" comes from the EN 1993-1-8 components; AISC 360
     // gives none, so a row under it needs the entry's stated range.
-    const int ends = cantilever ? 1 : 2;
+    const int ends = one_joint ? 1 : 2;
     // A cantilever's root takes neither a derived joint nor a law yet (as in a project file).
     if (cantilever && (details[0]->stiffness_from_detail || details[0]->moment_resistance_from_detail ||
                        !details[0]->behaviour.is_null())) {
@@ -822,8 +848,8 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
         if (!found.empty()) stiffness_ok = false;
     }
     if (!stiffness_ok) return out;
-    // A cantilever's root detail has no geometry (refused above): nothing to attach.
-    if (!cantilever && !attach_detail_geometry(b, details, at_line, out)) return out;
+    // A cantilever's root detail and an overhang's start detail have no geometry (refused above): nothing to attach.
+    if (!one_joint && !attach_detail_geometry(b, details, at_line, out)) return out;
     b.deflection = deflection;
     b.pointer = at_line;
     out.input = std::move(b);

@@ -16,23 +16,29 @@ bool finite(double v) { return std::isfinite(v); }
 
 }  // namespace
 
-beam_model::beam_model(double span, double EI, std::vector<load> loads, beam_layout layout)
-    : span_(span), EI_(EI), layout_(layout), loads_(std::move(loads))
+beam_model::beam_model(double span, double EI, std::vector<load> loads, beam_layout layout, double overhang)
+    : span_(span), EI_(EI), overhang_(overhang), layout_(layout), loads_(std::move(loads))
 {
     if (!finite(span) || span <= 0) throw std::invalid_argument("span must be positive and finite");
     if (!finite(EI) || EI <= 0) throw std::invalid_argument("EI must be positive and finite");
+    if (layout == beam_layout::overhang && (!finite(overhang) || !(overhang > 1e-9 * span)))
+        throw std::invalid_argument("an overhang's length must be positive and finite");
+    if (layout != beam_layout::overhang && overhang != 0.0)
+        throw std::invalid_argument("only an overhang layout has an overhang length");
+    const double length = span + overhang;  // the whole member
     for (const auto& l : loads_) {
         const bool distributed = l.kind == load_kind::udl || l.kind == load_kind::linear;
         if (!finite(l.value) || !finite(l.value_end) || !finite(l.from) || !finite(l.to))
             throw std::invalid_argument("load values must be finite");
-        if (l.from < 0 || l.from > span) throw std::invalid_argument("load position outside the span");
-        if (distributed && (l.to > span || !(l.to - l.from > 1e-9 * span)))
+        if (l.from < 0 || l.from > length) throw std::invalid_argument("load position outside the span");
+        if (distributed && (l.to > length || !(l.to - l.from > 1e-9 * span)))
             throw std::invalid_argument("distributed load extent must lie within the span and have length");
     }
 
-    // Nodes: ends, load positions and load boundaries. Positions closer than
-    // 1e-12 L are merged; the shift is far below the equilibrium tolerance.
-    std::vector<double> x{0.0, span};
+    // Nodes: ends, load positions and load boundaries (an overhang: also its
+    // end support at x = span). Positions closer than 1e-12 L are merged; the
+    // shift is far below the equilibrium tolerance.
+    std::vector<double> x{0.0, span, length};
     for (const auto& l : loads_) {
         x.push_back(l.from);
         if (l.kind == load_kind::udl || l.kind == load_kind::linear) x.push_back(l.to);
@@ -41,8 +47,15 @@ beam_model::beam_model(double span, double EI, std::vector<load> loads, beam_lay
     const double merge = 1e-12 * span;
     for (double v : x)
         if (nodes_.empty() || v - nodes_.back() > merge) nodes_.push_back(v);
-    nodes_.back() = span;
+    nodes_.back() = length;
     nodes_.front() = 0.0;
+    if (layout_ == beam_layout::overhang) {
+        // The end support is a node of its own, exactly at x = span.
+        support_node_ = nearest_node(span);
+        if (!(support_node_ > 0 && support_node_ + 1 < nodes_.size()))
+            throw std::invalid_argument("an overhang needs its end support between the start and the tip");
+        nodes_[support_node_] = span;
+    }
 
     elements_.resize(nodes_.size() - 1);
     for (std::size_t e = 0; e + 1 < nodes_.size(); ++e) {
@@ -62,6 +75,10 @@ beam_model::beam_model(double span, double EI, std::vector<load> loads, beam_lay
         total_force_ += total_force(l);
         total_moment_about_start_ += moment_about_start(l);
         load_scale_ += std::abs(total_force(l)) + std::abs(moment_about_start(l)) / span_;
+    }
+    if (layout_ == beam_layout::overhang) {
+        set_up_overhang();
+        return;
     }
     if (layout_ == beam_layout::cantilever) {
         // The load state with a rigid root, and a unit root rotation: a
@@ -103,6 +120,38 @@ beam_model::beam_model(double span, double EI, std::vector<load> loads, beam_lay
     flex_ = {{{-sa.rotation_start, -sb.rotation_start}, {-sa.rotation_end, -sb.rotation_end}}};
     closure_ = {s0.closure_shear, s0.closure_moment, sa.closure_shear, sa.closure_moment, sb.closure_shear,
                 sb.closure_moment};
+}
+
+// The overhang's two states (see the header): the load state with a pinned
+// start and the state of a unit hogging moment at the start. The end support
+// carries the beam's moment over it, so there is no end-moment state.
+void beam_model::set_up_overhang()
+{
+    const load_state s0 = integrate_overhang(loads_, 0.0);
+    const load_state sa = integrate_overhang({}, -1.0);
+    for (const load_state* st : {&s0, &sa})
+        for (const auto& c : st->w)
+            for (double v : c)
+                if (!finite(v)) throw internal_error("beam solution is not finite");
+    for (std::size_t e = 0; e < elements_.size(); ++e) {
+        elements_[e].w_load = s0.w[e];
+        elements_[e].w_start = sa.w[e];
+        elements_[e].w_end = element_polynomial{};
+    }
+    // Hogging over the end support, just on the overhang's side of it: the
+    // statics of the overhang as a free body, the same whatever the start
+    // moment (the unit state's moment vanishes at x = L).
+    support_moment_ = s0.support_moment;
+    reaction0_ = {s0.reaction_start, s0.reaction_end};
+    reaction_per_start_ = {sa.reaction_start, sa.reaction_end};
+    reaction_per_end_ = {0.0, 0.0};
+    rot0_ = {s0.rotation_start, s0.rotation_end};
+    // The end support's rotation moves with the start moment (column 0); no
+    // end moment is a redundant (column 1 is 0).
+    flex_ = {{{-sa.rotation_start, 0.0}, {-sa.rotation_end, 0.0}}};
+    closure_ = {s0.closure_shear, s0.closure_moment, sa.closure_shear, sa.closure_moment, 0.0, 0.0};
+    tip0_ = {s0.tip_deflection, s0.rotation_tip};
+    tip_per_start_ = {sa.tip_deflection, sa.rotation_tip};
 }
 
 std::size_t beam_model::nearest_node(double v) const
@@ -199,6 +248,49 @@ beam_model::element_run beam_model::integrate_elements(const std::vector<double>
     return {V, M, w, slope};
 }
 
+// Exact deflection of the overhanging beam with a pinned start under the
+// loads (`loads` is loads_) or none, and a clockwise couple at the start. The
+// beam is statically determinate: the end reaction from moments about the
+// start, put in as an upward point force at the end support's node; EI w'' =
+// -M is integrated from w = 0 and slope 0 at the start over the whole length,
+// and the rigid-body turn that restores w(L) = 0 is added afterwards, as in
+// integrate(). What is left past the free tip is the closure.
+beam_model::load_state beam_model::integrate_overhang(const std::vector<load>& loads, double couple_start) const
+{
+    load_state out;
+    out.w.resize(elements_.size());
+    double force = 0, moment = couple_start;
+    for (const auto& l : loads) {
+        force += total_force(l);
+        moment += moment_about_start(l);
+    }
+    out.reaction_end = moment / span_;
+    out.reaction_start = force - out.reaction_end;
+    std::vector<double> P(nodes_.size(), 0.0), C(nodes_.size(), 0.0);
+    for (const auto& l : loads) {
+        if (l.kind == load_kind::point) P[nearest_node(l.from)] += l.value;
+        if (l.kind == load_kind::moment) C[nearest_node(l.from)] += l.value;
+    }
+    C.front() += couple_start;
+    P[support_node_] -= out.reaction_end;  // the support pushes up
+    const element_run run = integrate_elements(P, C, out.reaction_start - P.front(), C.front(), !loads.empty(), out.w);
+    out.closure_shear = run.shear;  // no support at the tip
+    out.closure_moment = run.moment;
+    const element_polynomial& at_support = out.w[support_node_];  // the element starting at x = L
+    const double theta_start = -at_support[0] / span_;
+    const double slope_support = at_support[1];
+    out.support_moment = 2.0 * EI_ * at_support[2];  // -M(L+), M = -EI w''
+    for (std::size_t e = 0; e < elements_.size(); ++e) {
+        out.w[e][0] += theta_start * elements_[e].x0;
+        out.w[e][1] += theta_start;
+    }
+    out.rotation_start = theta_start;
+    out.rotation_end = -(slope_support + theta_start);
+    out.tip_deflection = run.w + theta_start * (span_ + overhang_);
+    out.rotation_tip = -(run.slope + theta_start);
+    return out;
+}
+
 // Exact deflection of the cantilever with a rigid root under the beam's loads.
 // Statics gives the root reaction (the total load) and the hogging root moment
 // (the loads' clockwise moment about the root); EI w'' = -M is integrated
@@ -239,6 +331,15 @@ void beam_model::end_moments_grid(const std::vector<stiffness>& starts, const st
         out.assign(starts.size() * ends.size(), {root_moment_, 0.0});
         return;
     }
+    if (layout_ == beam_layout::overhang) {
+        // One redundant: each start stiffness is one division, whatever the end.
+        out.resize(starts.size() * ends.size());
+        for (std::size_t i = 0; i < starts.size(); ++i) {
+            const std::array<double, 2> m = end_moments(starts[i], stiffness::pinned());
+            for (std::size_t j = 0; j < ends.size(); ++j) out[i * ends.size() + j] = m;
+        }
+        return;
+    }
     std::vector<condensed_row> rows_end(ends.size());
     for (std::size_t j = 0; j < ends.size(); ++j) rows_end[j] = row_for(1, ends[j]);
     out.resize(starts.size() * ends.size());
@@ -271,6 +372,15 @@ beam_state beam_model::solve(stiffness start, stiffness end) const
         s.stiffness_end = end;
         return s;
     }
+    if (layout_ == beam_layout::overhang) {
+        if (!end.is_pinned())
+            throw std::invalid_argument("an overhang runs on over its end support: it takes no end joint");
+        beam_state s = state_for_start_moment(end_moments(start, end)[0]);
+        s.stiffness_start = start;
+        s.stiffness_end = end;
+        if (start.is_rigid()) s.rotation_start = 0.0;
+        return s;
+    }
     const auto m = end_moments(start, end);
     beam_state s = state_for_end_moments(m[0], m[1]);
     s.stiffness_start = start;
@@ -298,6 +408,7 @@ std::size_t beam_model::element_index(double x) const
 std::array<double, 2> beam_model::coefficients(const beam_state& s) const
 {
     if (layout_ == beam_layout::cantilever) return {s.rotation_start, 0.0};
+    if (layout_ == beam_layout::overhang) return {s.moment_start, 0.0};
     return {s.moment_start, s.moment_end};
 }
 
@@ -349,6 +460,7 @@ double beam_model::shear_at(double x, double m_start, double m_end) const
 beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
 {
     if (layout_ == beam_layout::cantilever) throw std::logic_error("state_for_end_moments on a cantilever");
+    if (layout_ == beam_layout::overhang) throw std::logic_error("state_for_end_moments on an overhang");
     if (!finite(m_start) || !finite(m_end)) throw internal_error("end moments are not finite");
     beam_state s;
     s.moment_start = m_start;
@@ -358,6 +470,23 @@ beam_state beam_model::state_for_end_moments(double m_start, double m_end) const
     s.rotation_start = rot0_[0] - flex_[0][0] * m_start - flex_[0][1] * m_end;
     s.rotation_end = rot0_[1] - flex_[1][0] * m_start - flex_[1][1] * m_end;
     return fill_extremes(s, m_start, m_end);
+}
+
+// An overhang: the state for a hogging start moment (N*m); the moment over
+// the end support is the overhang's statics.
+beam_state beam_model::state_for_start_moment(double m_start) const
+{
+    if (!finite(m_start)) throw internal_error("start moment is not finite");
+    beam_state s;
+    s.moment_start = m_start;
+    s.moment_end = support_moment_;
+    s.reaction_start = reaction0_[0] + m_start * reaction_per_start_[0];
+    s.reaction_end = reaction0_[1] + m_start * reaction_per_start_[1];
+    s.rotation_start = rot0_[0] - flex_[0][0] * m_start;
+    s.rotation_end = rot0_[1] - flex_[1][0] * m_start;
+    s.tip_deflection = tip0_[0] + m_start * tip_per_start_[0];
+    s.rotation_tip = tip0_[1] + m_start * tip_per_start_[1];
+    return fill_extremes(s, m_start, 0.0);
 }
 
 beam_state beam_model::state_for_root_rotation(double theta) const
@@ -417,6 +546,8 @@ beam_state beam_model::fill_extremes(beam_state s, double a, double b) const
                 first_w = false;
             }
         };
+        // An overhang: the back span's deflection (the tip's is its own result).
+        if (layout_ == beam_layout::overhang && !(e.x0 < span_)) continue;
         deflection_candidate(0.0);
         deflection_candidate(e.length);
         for (double sx : polynomial::roots_in(w1, 0.0, e.length)) deflection_candidate(sx);
@@ -435,7 +566,9 @@ void beam_model::check_equilibrium(const beam_state& s, double a, double b) cons
     const double vertical = s.reaction_start + s.reaction_end - total_force_;
     // Clockwise moments about the start: loads, the end reaction, the joints'
     // couples on the beam (anticlockwise hogging at the start, clockwise at the end).
-    const double rotational = total_moment_about_start_ - s.reaction_end * span_ - s.moment_start + s.moment_end;
+    // (An overhang's moment over the end support is internal, not a joint's couple.)
+    const double end_couple = layout_ == beam_layout::overhang ? 0.0 : s.moment_end;
+    const double rotational = total_moment_about_start_ - s.reaction_end * span_ - s.moment_start + end_couple;
     // The shear and moment left over past the end support after integrating
     // along the beam: equilibrium reached by the second, independent path
     // (a and b scale the unit states: the end moments, or a cantilever's root

@@ -20,9 +20,11 @@ struct mass_model {
     std::vector<double> point_mass;   // per node, kg
 };
 
-mass_model masses_of(double span, const std::vector<load>& loads)
+// `span` is the meshed length; `support` an interior support (< 0: none), a node of its own.
+mass_model masses_of(double span, const std::vector<load>& loads, double support = -1.0)
 {
     std::vector<double> cuts{0.0, span};
+    if (support > 0) cuts.push_back(support);
     for (const load& l : loads) {
         if (l.kind == load_kind::point || l.kind == load_kind::moment) {
             cuts.push_back(l.from);
@@ -206,19 +208,33 @@ double lowest_by_band_inverse_iteration(band_matrix& k, const band_matrix& m, co
 
 }  // namespace
 
-double first_natural_frequency(double span, double EI, const std::vector<load>& loads, stiffness start, stiffness end,
-                               beam_layout layout)
+double first_natural_frequency(double back_span, double EI, const std::vector<load>& loads, stiffness start,
+                               stiffness end, beam_layout layout, double overhang)
 {
     const bool cantilever = layout == beam_layout::cantilever;
+    const bool overhanging = layout == beam_layout::overhang;
     if (cantilever && (start.is_pinned() || !end.is_pinned()))
         throw std::invalid_argument("a cantilever needs a root with stiffness and a free tip");
-    if (!(std::isfinite(span) && span > 0) || !(std::isfinite(EI) && EI > 0))
+    if (overhanging && (!(std::isfinite(overhang) && overhang > 0) || !end.is_pinned()))
+        throw std::invalid_argument("an overhang needs a length above 0 and no end joint");
+    if (!overhanging && overhang != 0.0) throw std::invalid_argument("only an overhang layout has an overhang length");
+    if (!(std::isfinite(back_span) && back_span > 0) || !(std::isfinite(EI) && EI > 0))
         throw std::invalid_argument("span and EI must be finite and > 0");
+    // The meshed length: the whole member (an overhang: to its tip). Every
+    // length below is made dimensionless by it, and the springs' kappa with it.
+    const double span = back_span + overhang;
     for (const load& l : loads)
         if (!(l.from >= 0 && l.from <= span) || (l.kind != load_kind::point && l.kind != load_kind::moment &&
                                                  !(l.to >= l.from && l.to <= span)))
             throw std::invalid_argument("a load lies outside the span");
-    const mass_model mm = masses_of(span, loads);
+    const mass_model mm = masses_of(span, loads, overhanging ? back_span : -1.0);
+    // An overhang's end support: the node at x = back_span.
+    std::size_t support_node = 0;
+    if (overhanging)
+        support_node = static_cast<std::size_t>(
+            std::min_element(mm.nodes.begin(), mm.nodes.end(),
+                             [&](double a, double b) { return std::abs(a - back_span) < std::abs(b - back_span); }) -
+            mm.nodes.begin());
     double total = 0;
     for (std::size_t e = 0; e < mm.line_mass.size(); ++e) total += mm.line_mass[e] * (mm.nodes[e + 1] - mm.nodes[e]);
     for (double p : mm.point_mass) total += p;
@@ -248,7 +264,8 @@ double first_natural_frequency(double span, double EI, const std::vector<load>& 
     std::vector<Eigen::Index> kept, place(static_cast<std::size_t>(full), -1);
     for (Eigen::Index d = 0; d < full; ++d) {
         if (d == 0) continue;                    // the start's deflection held by its support
-        if (d == full - 2 && !cantilever) continue;  // the end's too, unless it is a free tip
+        if (d == full - 2 && !cantilever && !overhanging) continue;  // the end's too, unless it is a free tip
+        if (overhanging && d == static_cast<Eigen::Index>(2 * support_node)) continue;  // the end support's
         if (d == rot_start && start.is_rigid()) continue;
         if (d == rot_end && end.is_rigid()) continue;
         place[static_cast<std::size_t>(d)] = static_cast<Eigen::Index>(kept.size());

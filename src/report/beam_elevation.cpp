@@ -8,6 +8,7 @@
 #include <vector>
 
 #include "pinproof/report/xml_text.hpp"
+#include "report/load_arrow.hpp"
 
 namespace pinproof {
 namespace {
@@ -47,21 +48,32 @@ std::string stiffness_text(const stiffness& s, unit_system units)
 
 class drawing {
 public:
-    drawing(const beam& b, unit_system units) : b_(b), units_(units), scale_((width - 2 * margin) / b.span) {}
+    // The whole member spans the width: an overhang's tip is at the right.
+    drawing(const beam& b, unit_system units)
+        : b_(b), units_(units), length_(b.span + b.overhang), scale_((width - 2 * margin) / length_)
+    {
+    }
     std::string svg();
 
 private:
     double x_of(double pos) const { return margin + pos * scale_; }
     void text(double x, double y, const std::string& s, const char* anchor = "middle", const char* extra = "");
-    void arrow_down(double x, double y_tip, double length, const char* colour);
+    // Down for a load that acts downward, up (head away from the beam) for an uplift (load_arrow.hpp).
+    void load_arrow(double x, double y, double length, const char* colour, bool down)
+    {
+        o_ << load_arrow_svg(x, y, length, down, colour, "1.4");
+    }
     void line_loads(double& top);
     void point_loads(double& top);
     void moments();
     void support(beam_end e);
     void dimensions();
+    void free_tip();
+    bool overhang() const { return b_.layout == beam_layout::overhang; }
 
     const beam& b_;
     unit_system units_;
+    double length_;  // m, the whole member (an overhang: to its tip)
     double scale_;
     std::ostringstream o_;
     double bottom_ = beam_y;
@@ -71,13 +83,6 @@ void drawing::text(double x, double y, const std::string& s, const char* anchor,
 {
     o_ << "<text x=\"" << num(x) << "\" y=\"" << num(y) << "\" text-anchor=\"" << anchor << "\"" << extra << ">"
        << xml_text(s) << "</text>\n";
-}
-
-void drawing::arrow_down(double x, double y_tip, double length, const char* colour)
-{
-    o_ << "<line x1=\"" << num(x) << "\" y1=\"" << num(y_tip - length) << "\" x2=\"" << num(x) << "\" y2=\""
-       << num(y_tip - 5) << "\" stroke=\"" << colour << "\" stroke-width=\"1.4\"/>\n"
-       << "<path d=\"M" << num(x) << " " << num(y_tip) << " l-3.5 -7 h7 z\" fill=\"" << colour << "\"/>\n";
 }
 
 // Line loads (uniform and linearly varying) as bands of arrows above the beam,
@@ -103,7 +108,8 @@ void drawing::line_loads(double& top)
         for (int i = 0; i < n; ++i) {
             const double t = static_cast<double>(i) / (n - 1);
             const double h = h0 + (h1 - h0) * t;
-            if (h > 3) arrow_down(xa + (xb - xa) * t, base, h, "#1d4e89");
+            // An uplift's arrows point up, away from the beam.
+            if (h > 3) load_arrow(xa + (xb - xa) * t, base, h, "#1d4e89", w0 + (w1 - w0) * t >= 0);
         }
         std::string label = l.load_case + ": " + format_quantity(w0, dims::line_load, units_);
         if (l.kind == load_kind::linear) label += " to " + format_quantity(w1, dims::line_load, units_);
@@ -138,7 +144,7 @@ void drawing::point_loads(double& top)
             longest = std::max(longest, len);
             const double dx = (static_cast<double>(k) - 0.5 * static_cast<double>(group.size() - 1)) * 7.0;
             o_ << "<g class=\"point-load\" data-case=\"" << xml_text(l.load_case) << "\">\n";
-            arrow_down(x + dx, beam_y - 3, len, "#6a3d9a");
+            load_arrow(x + dx, beam_y - 3, len, "#6a3d9a", l.value >= 0);
             o_ << "</g>\n";
         }
         double y = beam_y - 3 - longest - 5;
@@ -177,7 +183,8 @@ void drawing::support(beam_end e)
     const bool start = e == beam_end::start;
     const double x = x_of(start ? 0.0 : b_.span);
     const double out = start ? -1.0 : 1.0;  // away from the span
-    const end_idealisation kind = idealisation_of(j);
+    // An overhang's end support carries the beam on, continuous, over a roller.
+    const end_idealisation kind = overhang() && !start ? end_idealisation::pin : idealisation_of(j);
     o_ << "<g class=\"support\" data-end=\"" << to_string(e) << "\" data-idealisation=\""
        << (kind == end_idealisation::pin ? "pin" : kind == end_idealisation::fixed ? "fixed" : "spring") << "\">\n";
     std::string label;
@@ -221,24 +228,38 @@ void drawing::support(beam_end e)
             o_ << "<path d=\"" << d.str() << "\" stroke=\"#3d6e8c\" stroke-width=\"1.3\" fill=\"none\"/>\n";
             label = "spring " + stiffness_text(j.range.min, units_) + " to " + stiffness_text(j.range.max, units_);
         } else {
-            label = start ? "pin (true pin)" : "roller (true pin)";
+            label = start ? "pin (true pin)" : overhang() ? "roller, beam continuous over it" : "roller (true pin)";
         }
     }
-    // Labels hang under the support, away from the span.
-    const char* anchor = start ? "start" : "end";
-    std::string name = start ? "Start" : "End";
+    // Labels hang under the support, away from the span (an overhang's end
+    // support: centred under it, the overhang to its right).
+    const bool centred = overhang() && !start;
+    const char* anchor = start ? "start" : centred ? "middle" : "end";
+    std::string name = start ? "Start" : centred ? "End support" : "End";
     if (j.detail) name += ": " + to_string(j.detail->type);
-    text(start ? x - 20 : x + 20, beam_y + 44, name, anchor, " font-weight=\"bold\"");
-    text(start ? x - 20 : x + 20, beam_y + 44 + font + 3, label, anchor);
+    const double tx = start ? x - 20 : centred ? x : x + 20;
+    text(tx, beam_y + 44, name, anchor, " font-weight=\"bold\"");
+    text(tx, beam_y + 44 + font + 3, label, anchor);
     o_ << "</g>\n";
     bottom_ = std::max(bottom_, beam_y + 44 + font + 3);
+}
+
+// An overhang's free tip: an open end, named under it.
+void drawing::free_tip()
+{
+    const double x = x_of(length_);
+    o_ << "<g class=\"free-tip\">\n<circle cx=\"" << num(x) << "\" cy=\"" << num(beam_y) << "\" r=\"3\" fill=\"#ffffff\" "
+          "stroke=\"#2b2f33\" stroke-width=\"1.4\"/>\n";
+    text(x + 20, beam_y + 44, "Tip", "end", " font-weight=\"bold\"");
+    text(x + 20, beam_y + 44 + font + 3, "free", "end");
+    o_ << "</g>\n";
 }
 
 // A dimension line under the supports: the span, and a chain through every
 // load position (point loads, couples and the ends of line loads).
 void drawing::dimensions()
 {
-    std::set<double> stations{0.0, b_.span};
+    std::set<double> stations{0.0, b_.span, length_};
     for (const auto& l : b_.loads) {
         stations.insert(l.from);
         if (l.kind == load_kind::udl || l.kind == load_kind::linear) stations.insert(l.to);
@@ -262,12 +283,14 @@ void drawing::dimensions()
     chain.erase(std::unique(chain.begin(), chain.end(), [](double a, double b) { return std::abs(a - b) < 1e-3; }),
                 chain.end());
     o_ << "<g class=\"dimensions\">\n";
-    if (chain.size() > 2) {
+    // The chain, where it has more than the span (and an overhang's) stations.
+    if (chain.size() > (overhang() ? 3u : 2u)) {
         dim_line(y, chain, true);
         y += 28;
     }
-    dim_line(y, {0.0, b_.span}, false);
+    dim_line(y, overhang() ? std::vector<double>{0.0, b_.span, length_} : std::vector<double>{0.0, b_.span}, false);
     text(x_of(b_.span / 2), y - 4, "L = " + position_text(b_.span, units_));
+    if (overhang()) text(x_of(b_.span + b_.overhang / 2), y - 4, "a = " + position_text(b_.overhang, units_));
     o_ << "</g>\n";
     bottom_ = y + 8;
 }
@@ -279,11 +302,12 @@ std::string drawing::svg()
     point_loads(top);
     moments();
     // The beam in front of the load arrows' tails, behind nothing.
-    o_ << "<line class=\"beam\" x1=\"" << num(x_of(0)) << "\" y1=\"" << num(beam_y) << "\" x2=\"" << num(x_of(b_.span))
+    o_ << "<line class=\"beam\" x1=\"" << num(x_of(0)) << "\" y1=\"" << num(beam_y) << "\" x2=\"" << num(x_of(length_))
        << "\" y2=\"" << num(beam_y) << "\" stroke=\"#2b2f33\" stroke-width=\"4\"/>\n";
     text(x_of(b_.span / 2), beam_y + 16, b_.sec.name, "middle", " font-style=\"italic\"");
     support(beam_end::start);
     support(beam_end::end);
+    if (overhang()) free_tip();
     dimensions();
     const double shift = top - 24;  // room above the tallest label for the title
     const double height = bottom_ - shift + 6;

@@ -195,7 +195,8 @@ private:
     void connection_inputs(const beam& b);
     void combination_block(const beam& b, const combination_result& r);
     void results_table(const beam& b, const combination_result& r);
-    void frequency_rows(const combination_result& r);
+    void frequency_rows(const combination_result& r, bool with_estimate);
+    void tip_rows(const combination_result& r);
     void span_diagrams(const beam& b, const combination_result& r);
     void sweep_chart(const beam& b);
     void beam_lines(const beam& b);
@@ -314,8 +315,9 @@ void report_writer::title_block()
         }
         std::string classes;
         const bool cantilever = b.input && b.input->layout == beam_layout::cantilever;
+        const bool no_end_joint = b.input && b.input->layout != beam_layout::two_supports;
         for (const auto* j : {&b.start, &b.end}) {
-            if (cantilever && j == &b.end) continue;  // a free tip has no joint
+            if (no_end_joint && j == &b.end) continue;  // a free tip, or a beam continuous over the end support
             classes += (classes.empty() ? "" : "; ") + (cantilever ? std::string("root") : to_string(j->end)) + ": " +
                        (en ? to_string(j->en_lower) + " .. " + to_string(j->en_upper)
                            : to_string(j->aisc_lower) + " .. " + to_string(j->aisc_upper));
@@ -364,6 +366,14 @@ void report_writer::method()
               "(L the cantilever's length) reaches the rigid boundary of the standard and the root's flexibility "
               "raises the deflection by no more than the root-flexibility limit (docs/method/layouts.md). Its tip "
               "rotation is -dw/dx at the tip, negative as the tip drops under gravity.</li>\n";
+    if (std::any_of(p_.beams.begin(), p_.beams.end(), [](const beam& b) { return b.layout == beam_layout::overhang; }))
+        o_ << "<li>An overhang has a support at the start, restrained by the start joint's spring, and one at the "
+              "span L, over which the beam runs on, continuous, to a free tip at L + a; positions are from the start. "
+              "The moment over the end support follows from the statics of the overhang; the start moment is the one "
+              "redundant. The end moment is that hogging moment over the end support; the maximum deflection and "
+              "rotation_end belong to the back span and the end support, the tip rows to the tip (its rotation "
+              "-dw/dx, negative as the tip drops). A span/n limit is taken with 2a at the tip (the tip read as a "
+              "cantilever: common practice, no source; docs/method/layouts.md).</li>\n";
     o_ << "</ul>\n</section>\n";
 }
 
@@ -378,6 +388,11 @@ void report_writer::inputs(const beam& b)
                      "<tr><th>Root flexibility limit</th><td>" + format_number(100 * b.root_flexibility_limit, 3) +
                      " % of the rigid-root deflection" + (b.root_flexibility_is_default ? " (the default)" : "") +
                      "</td></tr>\n"
+           : b.layout == beam_layout::overhang
+               ? "<tr><th>Layout</th><td>overhang: supports at the start and at L, continuous over the end support "
+                 "to a free tip</td></tr>\n"
+                 "<tr><th>Span L (between the supports)</th><td>" + u_.pos(b.span) + "</td></tr>\n" +
+                     "<tr><th>Overhang a (end support to tip)</th><td>" + u_.pos(b.overhang) + "</td></tr>\n"
                : "<tr><th>Span L</th><td>" + u_.pos(b.span) + "</td></tr>\n")
        << "<tr><th>Young's modulus E</th><td>" << u_.q(b.E, dims::pressure)
        << (b.E_is_default ? " (not given: the standard's value)" : "") << "</td></tr>\n"
@@ -430,6 +445,11 @@ void report_writer::joints(const beam& b, const beam_assessment& ba)
     for (const auto* j : {&ba.start, &ba.end}) {
         if (cantilever && j->end == beam_end::end) {
             o_ << "<tr><td>end</td><td colspan=\"5\">free tip: no joint</td></tr>\n";
+            continue;
+        }
+        if (b.layout == beam_layout::overhang && j->end == beam_end::end) {
+            o_ << "<tr><td>end</td><td colspan=\"5\">no joint: the beam runs on, continuous, over the end support to "
+                  "its free tip</td></tr>\n";
             continue;
         }
         const auto& mr = b.at(j->end).moment_resistance;
@@ -574,13 +594,38 @@ void report_writer::results_table(const beam& b, const combination_result& r)
            << cell(r.envelope.ranges[i].min) << "</td><td class=\"num\">" << cell(r.envelope.ranges[i].max)
            << "</td><td class=\"num\">" << cell(r.fixed.*(f[i].member)) << "</td></tr>\n";
     }
-    if (r.frequency) frequency_rows(r);
+    if (b.layout == beam_layout::overhang) tip_rows(r);
+    if (r.frequency) frequency_rows(r, b.layout == beam_layout::two_supports);
     o_ << "</table>\n";
+}
+
+// An overhang's tip: deflection and rotation, pinned, over the range (the
+// corners hold the extremes: linear in the start moment) and fixed.
+void report_writer::tip_rows(const combination_result& r)
+{
+    const struct {
+        const char* label;
+        dimension dim;
+        double beam_state::*member;
+    } rows[] = {{"tip deflection (down +)", dims::length, &beam_state::tip_deflection},
+                {"tip rotation (-dw/dx)", dims::angle, &beam_state::rotation_tip}};
+    for (const auto& row : rows) {
+        double lo = 0, hi = 0;
+        for (std::size_t i = 0; i < r.corners.size(); ++i) {
+            const double v = r.corners[i].*(row.member);
+            lo = i == 0 ? v : std::min(lo, v);
+            hi = i == 0 ? v : std::max(hi, v);
+        }
+        o_ << "<tr><td>" << esc(row.label) << "</td><td>" << esc(u_.sym(row.dim)) << "</td>"
+           << (r.pinned ? "<td class=\"num\">" + u_.num((*r.pinned).*(row.member), row.dim) + "</td>" : std::string())
+           << "<td class=\"num\">" << u_.num(lo, row.dim) << "</td><td class=\"num\">" << u_.num(hi, row.dim)
+           << "</td><td class=\"num\">" << u_.num(r.fixed.*(row.member), row.dim) << "</td></tr>\n";
+    }
 }
 
 // A vibration combination: the first natural frequency of each state, and the
 // 18/sqrt(delta) estimate from its deflection (model/natural_frequency.hpp).
-void report_writer::frequency_rows(const combination_result& r)
+void report_writer::frequency_rows(const combination_result& r, bool with_estimate)
 {
     const auto& fr = *r.frequency;
     const auto row = [&](const std::string& label, const std::string (&cells)[4]) {
@@ -593,7 +638,7 @@ void report_writer::frequency_rows(const combination_result& r)
                                   u_.num(fr.fixed, dims::frequency)};
     row("first natural frequency", exact);
     // The estimate belongs to a beam on two supports (natural_frequency.hpp).
-    if (!r.pinned) return;
+    if (!r.pinned || !with_estimate) return;
     const auto estimate = [](double d) {
         return d > 0 ? format_number(frequency_from_deflection(d), 4) : std::string("-");
     };
@@ -606,11 +651,13 @@ void report_writer::frequency_rows(const combination_result& r)
 // Diagrams, pointwise over the span, from the same model the assessment used.
 void report_writer::span_diagrams(const beam& b, const combination_result& r)
 {
-    const beam_model model(b.span, b.EI(), factored_loads(b.loads, r.comb), b.layout);
+    const beam_model model(b.span, b.EI(), factored_loads(b.loads, r.comb), b.layout, b.overhang);
     const bool cantilever = b.layout == beam_layout::cantilever;
+    const bool overhang = b.layout == beam_layout::overhang;
+    const double length = model.length();  // an overhang: to its tip
     std::vector<double> xs;
     const int n = 160;
-    for (int i = 0; i <= n; ++i) xs.push_back(b.span * i / n);
+    for (int i = 0; i <= n; ++i) xs.push_back(length * i / n);
     for (double x : model.nodes()) xs.push_back(x);
     std::sort(xs.begin(), xs.end());
     xs.erase(std::unique(xs.begin(), xs.end(), [&](double a, double c) { return std::abs(a - c) < 1e-12 * b.span; }),
@@ -619,7 +666,7 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
     // before it, so that the diagram draws the jump as a vertical step.
     std::vector<double> xs_shear = xs;
     for (double x : model.nodes())
-        if (x > 0 && x < b.span) xs_shear.push_back(x - 1e-9 * b.span);
+        if (x > 0 && x < length) xs_shear.push_back(x - 1e-9 * b.span);
     std::sort(xs_shear.begin(), xs_shear.end());
     enum class diagram { moment, shear, deflection };
     auto curves = [&](diagram kind) {
@@ -635,8 +682,9 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
         // Deflection is drawn downward, as the beam deflects (sign_conventions.hpp).
         const double drawn = kind == diagram::deflection ? -1.0 : 1.0;
         const bool w = kind == diagram::deflection;
-        chart_series pinned{"pinned ends", {}, chart_colour::pinned, true};
-        chart_series fixed{cantilever ? "rigid root" : "fixed ends", {}, chart_colour::fixed, true};
+        chart_series pinned{overhang ? "pinned start" : "pinned ends", {}, chart_colour::pinned, true};
+        chart_series fixed{cantilever ? "rigid root" : overhang ? "fixed start" : "fixed ends", {}, chart_colour::fixed,
+                           true};
         chart_series lo{w ? "range envelope, least deflection" : "range envelope, min", {}, chart_colour::range_lower, false};
         chart_series hi{w ? "range envelope, most deflection" : "range envelope, max", {}, chart_colour::range_upper, false};
         for (double x : kind == diagram::shear ? xs_shear : xs) {
@@ -653,9 +701,13 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
             hi.points.emplace_back(px, drawn * u_.in(mx, d));
         }
         line_chart c;
-        c.x.label = (cantilever ? "x from the root, tip at the right (" : "x from the start support (") + u_.pos_unit() + ")";
+        c.x.label = (cantilever  ? "x from the root, tip at the right ("
+                     : overhang ? "x from the start support, end support at " + format_number(u_.pos_in(b.span), 4) +
+                                      ", tip at the right ("
+                                : "x from the start support (") +
+                    u_.pos_unit() + ")";
         c.x.min = 0.0;
-        c.x.max = u_.pos_in(b.span);
+        c.x.max = u_.pos_in(length);
         c.series = {pinned, fixed, lo, hi};
         if (cantilever) c.series = {fixed, lo, hi};
         c.width = 760;
@@ -665,6 +717,8 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
     const std::string envelope =
         cantilever ? ": the rigid root, and the pointwise envelope over the root's stiffness range (the tip is free, "
                      "at the right)."
+        : overhang ? ": a pinned and a fixed start, and the pointwise envelope over the start joint's stiffness range (the "
+                     "beam continuous over the end support, the free tip at the right)."
                    : ": ideal pinned and fixed ends, and the pointwise envelope over the four corners of the stiffness range.";
     // A strength combination's moments and shears act on the members; a
     // service combination's deflection is what is checked.
@@ -680,6 +734,8 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
                "Shear force along the span, combination " + r.comb.name +
                    (cantilever ? std::string(" (V = dM/dx: the root reaction at the root, zero at the free tip; a point "
                                              "load is a step)")
+                    : overhang ? std::string(" (V = dM/dx: the start reaction at the start, a step of the end reaction "
+                                             "at the end support, zero at the free tip; a point load is a step)")
                                : std::string(" (V = dM/dx: the start reaction at the start, minus the end reaction at "
                                              "the end; a point load is a step)")) +
                    envelope);
@@ -694,15 +750,23 @@ void report_writer::span_diagrams(const beam& b, const combination_result& r)
 
 void report_writer::sweep_chart(const beam& b)
 {
-    // The sweep asks when a pinned end stops being one: not worked out for a cantilever.
-    if (b.combinations.empty() || b.layout == beam_layout::cantilever) return;
+    if (b.combinations.empty()) return;
     sweep_settings settings;
     settings.combination = b.combinations.front().name;
     const sweep_result s = sweep_beam(p_, b, settings);
-    o_ << "<div class=\"keep\">\n<h3>Joint-stiffness sweep</h3>\n<p>Both joints together from a true pin to rigid, combination "
-       << esc(settings.combination)
-       << ": each result divided by its value with pins (end moments by their value with fixed ends) against "
-          "&kappa; = S L / EI, with the code boundaries and the given stiffness range.</p>\n";
+    // A cantilever's root, or an overhang's start joint, moves alone (threshold.hpp).
+    const std::string what =
+        b.layout == beam_layout::cantilever
+            ? "The root from &kappa; = 0.01 (a pinned root is a mechanism) to rigid, combination " +
+                  esc(settings.combination) + ": the tip's deflection and rotation divided by their values with a rigid root"
+        : b.layout == beam_layout::overhang
+            ? "The start joint from a true pin to rigid (an overhang has no end joint), combination " +
+                  esc(settings.combination) +
+                  ": each result divided by its value with a pinned start (end moments by their value with a fixed start)"
+            : "Both joints together from a true pin to rigid, combination " + esc(settings.combination) +
+                  ": each result divided by its value with pins (end moments by their value with fixed ends)";
+    o_ << "<div class=\"keep\">\n<h3>Joint-stiffness sweep</h3>\n<p>" << what
+       << " against &kappa; = S L / EI, with the code boundaries and the given stiffness range.</p>\n";
     figure("sweep", sweep_svg(p_, b, s),
            "Stiffness sweep of beam " + b.id + ", combination " + settings.combination +
                ": EN 1993-1-8 boundaries 0.5 and " + format_number(en_rigid_limit(p_.frame), 2) +
@@ -719,7 +783,7 @@ void report_writer::beam_lines(const beam& b)
         if (!c && x.use == limit_state::strength) c = &x;
     if (!c && !b.combinations.empty()) c = &b.combinations.front();
     // A cantilever's root moment is fixed by statics: its beam line would be a horizontal line.
-    if (c && b.layout != beam_layout::cantilever) {
+    if (c && b.layout == beam_layout::two_supports) {
         o_ << "<h3>Beam lines</h3>\n";
         for (beam_end e : {beam_end::start, beam_end::end}) {
             if (b.at(e).behaviour) law_beam_line_chart(b, e);
@@ -866,6 +930,12 @@ void report_writer::beam_section(const beam_assessment& ba)
                "Elevation of cantilever " + b.id +
                    ": the root joint's spring at the supporting member on the left, the free tip on the right, the "
                    "unfactored loads by case (not to scale vertically).");
+    else if (b.layout == beam_layout::overhang)
+        figure("elevation", beam_elevation_svg(b, p_.units),
+               "Elevation of overhang " + b.id +
+                   ": the start joint as analysed on the left, the end support with the beam continuous over it, the "
+                   "free tip on the right, the unfactored loads of every case drawn to scale within their kind, the "
+                   "span L, the overhang a and the load positions from the start.");
     else
         figure("elevation", beam_elevation_svg(b, p_.units),
                "Beam " + b.id + " as analysed: each end drawn as its idealisation (pin, roller, rotational spring "

@@ -6,6 +6,7 @@
 #include <stdexcept>
 
 #include "pinproof/report/xml_text.hpp"
+#include "report/load_arrow.hpp"
 
 namespace pinproof {
 namespace {
@@ -26,21 +27,10 @@ std::string num(double v)
 
 double x_at(const beam& b, double x) { return x_root + (x_tip - x_root) * x / b.span; }
 
-// A downward arrow whose head touches the member's top (or an upward one from below for an uplift).
+// A downward arrow whose head touches the member's top, or an upward one standing on it for an uplift.
 void arrow(std::ostringstream& o, double x, double length, bool down)
 {
-    const double top = y_beam - 6;
-    if (down) {
-        o << "<line x1=\"" << num(x) << "\" y1=\"" << num(top - length) << "\" x2=\"" << num(x) << "\" y2=\""
-          << num(top - 6) << "\" stroke=\"#b03020\" stroke-width=\"1.5\"/>\n"
-          << "<path d=\"M " << num(x - 4) << " " << num(top - 7) << " L " << num(x + 4) << " " << num(top - 7) << " L "
-          << num(x) << " " << num(top) << " Z\" fill=\"#b03020\"/>\n";
-    } else {
-        o << "<line x1=\"" << num(x) << "\" y1=\"" << num(top - 6 - length) << "\" x2=\"" << num(x) << "\" y2=\""
-          << num(top) << "\" stroke=\"#b03020\" stroke-width=\"1.5\"/>\n"
-          << "<path d=\"M " << num(x - 4) << " " << num(top - length) << " L " << num(x + 4) << " " << num(top - length)
-          << " L " << num(x) << " " << num(top - length - 7) << " Z\" fill=\"#b03020\"/>\n";
-    }
+    o << load_arrow_svg(x, y_beam - 6, length, down, "#b03020", "1.5");
 }
 
 void loads(std::ostringstream& o, const beam& b, unit_system units)

@@ -2,6 +2,7 @@
 
 #include <nlohmann/json.hpp>
 
+#include <algorithm>
 #include <cmath>
 
 #include "pinproof/core/errors.hpp"
@@ -213,6 +214,34 @@ json to_json(const beam_state& s)
     return out;
 }
 
+namespace {
+
+// An overhang's tip (beam_model.hpp): its deflection and rotation in every
+// state, and their range over the corners (linear in the start moment, so the
+// corners hold the extremes).
+void add_tip(json& c, json& corners, json& env, const combination_result& r)
+{
+    const auto put = [](json& j, const beam_state& s) {
+        j["tip_deflection"] = number(s.tip_deflection);
+        j["rotation_tip"] = number(s.rotation_tip);
+    };
+    if (r.pinned) put(c["pinned"], *r.pinned);
+    put(c["fixed"], r.fixed);
+    for (std::size_t i = 0; i < corners.size(); ++i) put(corners[i], r.corners.at(i));
+    for (double beam_state::*m : {&beam_state::tip_deflection, &beam_state::rotation_tip}) {
+        double lo = 0, hi = 0;
+        for (std::size_t i = 0; i < r.corners.size(); ++i) {
+            const double v = r.corners[i].*m;
+            lo = i == 0 ? v : std::min(lo, v);
+            hi = i == 0 ? v : std::max(hi, v);
+        }
+        env[m == &beam_state::tip_deflection ? "tip_deflection" : "rotation_tip"] = {{"min", number(lo)},
+                                                                                       {"max", number(hi)}};
+    }
+}
+
+}  // namespace
+
 json to_json(const beam_assessment& a)
 {
     const beam& b = *a.input;
@@ -221,9 +250,11 @@ json to_json(const beam_assessment& a)
     // Written for a layout other than the default only, so that the result
     // of a beam on two supports reads as it always has (absent: "two-supports").
     const bool cantilever = b.layout == beam_layout::cantilever;
-    if (cantilever) out["layout"] = to_string(b.layout);
+    const bool overhang = b.layout == beam_layout::overhang;
+    if (b.layout != beam_layout::two_supports) out["layout"] = to_string(b.layout);
     out["verdict"] = a.holds() ? "holds" : "does-not-hold";
     out["span"] = number(b.span);
+    if (overhang) out["overhang"] = number(b.overhang);
     out["E"] = number(b.E);
     out["section"] = {{"name", b.sec.name}, {"I", number(b.sec.I)}, {"depth", number(b.sec.depth)}};
     out["steel"] = b.steel ? json(b.steel->name()) : json(nullptr);
@@ -238,8 +269,9 @@ json to_json(const beam_assessment& a)
                           {"message", c.message}});
     }
     out["checks"] = checks;
-    // A cantilever's tip is free: it has no end joint.
-    out["joints"] = {{"start", joint_json(a.start, b)}, {"end", cantilever ? json(nullptr) : joint_json(a.end, b)}};
+    // A cantilever's tip is free, and an overhang runs on over its end support: no end joint.
+    out["joints"] = {{"start", joint_json(a.start, b)},
+                     {"end", cantilever || overhang ? json(nullptr) : joint_json(a.end, b)}};
     json combos = json::array();
     for (const auto& r : a.combinations) {
         json c;
@@ -262,6 +294,7 @@ json to_json(const beam_assessment& a)
             for (std::size_t i = 0; i < corners.size(); ++i) corners[i]["frequency"] = number(r.frequency->corners.at(i));
             env["frequency"] = {{"min", number(r.frequency->range.min)}, {"max", number(r.frequency->range.max)}};
         }
+        if (overhang) add_tip(c, corners, env, r);
         c["range"] = {{"corners", corners}, {"envelope", env}, {"interior_points", r.interior_points}};
         c["collapse"] = r.collapse ? json{{"load_factor", number(r.collapse->load_factor)},
                                           {"rotation_start", number(r.collapse->rotation_start)},
@@ -286,12 +319,10 @@ json to_json(const project_assessment& a)
     for (const auto& b : a.beams) {
         beams.push_back(to_json(b));
         const beam& in = *b.input;
-        // Thresholds and probabilities ask when a pinned end stops being one:
-        // not worked out for a cantilever (null).
+        // Thresholds and probabilities: for a cantilever or an overhang along
+        // its one joint (threshold.hpp).
         beams.back()["sensitivity"] =
-            in.layout == beam_layout::cantilever
-                ? nlohmann::json(nullptr)
-                : sensitivity_json(*a.input, in, {in.start.distribution, in.end.distribution, in.stiffness_correlation});
+            sensitivity_json(*a.input, in, {in.start.distribution, in.end.distribution, in.stiffness_correlation});
     }
     out["beams"] = beams;
     out["caution"] = "Results support, and do not replace, the judgement of a qualified engineer; local codes and "

@@ -3,7 +3,9 @@
 #include <nlohmann/json.hpp>
 
 #include <cmath>
+#include <iterator>
 #include <sstream>
+#include <vector>
 
 #include "pinproof/core/csv_cell.hpp"
 #include "pinproof/core/errors.hpp"
@@ -71,14 +73,18 @@ std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
 {
     if (s.settings.grid) throw internal_error("the sweep chart is drawn for a path, not a grid");
     line_chart ch;
-    const std::string moving = s.settings.path.moving == moving_end::both ? "both ends equal"
-                                                                          : to_string(s.settings.path.moving) + " joint moving";
+    const bool cantilever = b.layout == beam_layout::cantilever;
+    const std::string moving = cantilever                                   ? "the root moving"
+                               : b.layout == beam_layout::overhang          ? "the start joint moving"
+                               : s.settings.path.moving == moving_end::both ? "both ends equal"
+                                                                            : to_string(s.settings.path.moving) + " joint moving";
     ch.title = "Beam " + s.beam_id + ": results against joint stiffness (" + moving + ", combination " +
                s.combination + ")";
     ch.x = {"joint stiffness S*L/EI (-), log scale; EI/L = " +
                 format_quantity(s.EI / s.span, dims::rotational_stiffness, p.units),
             true, 0.01, 1000.0};
-    ch.y = {"result / its pinned or fixed-end value (-)", false, std::nullopt, std::nullopt};
+    ch.y = {cantilever ? "result / its value with a rigid root (-)" : "result / its pinned or fixed-end value (-)", false,
+            std::nullopt, std::nullopt};
     struct normalised {
         double beam_state::*member;
         bool by_fixed;
@@ -95,8 +101,15 @@ std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
         {&beam_state::reaction_start, false, "reaction, start / pinned", false},
         {&beam_state::reaction_end, false, "reaction, end / pinned", true},
     };
+    // A cantilever: its root moment and reaction are statics (the same at every
+    // stiffness); the tip's deflection and rotation over their rigid-root values.
+    const normalised cantilever_list[] = {
+        {&beam_state::max_deflection, true, "tip deflection / rigid root", false},
+        {&beam_state::rotation_end, true, "tip rotation / rigid root", true},
+    };
     double y_top = 1.0;
-    for (const auto& n : list) {
+    for (const auto& n : cantilever ? std::vector<normalised>(std::begin(cantilever_list), std::end(cantilever_list))
+                                    : std::vector<normalised>(std::begin(list), std::end(list))) {
         const double ref = (n.by_fixed ? s.fixed : s.pinned).*(n.member);
         if (!(std::abs(ref) > 0)) continue;
         chart_series cs;
@@ -127,7 +140,9 @@ std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
         ch.bands.push_back({lo, hi, label, colour, 0.15});
     };
     const bool same = b.start.range.min == b.end.range.min && b.start.range.max == b.end.range.max;
-    if (same) band(b.start, "stiffness range (both joints)", chart_colour::range_band);
+    if (b.layout != beam_layout::two_supports)
+        band(b.start, cantilever ? "stiffness range, root" : "stiffness range, start joint", chart_colour::range_band);
+    else if (same) band(b.start, "stiffness range (both joints)", chart_colour::range_band);
     else {
         band(b.start, "stiffness range, start joint", chart_colour::range_band);
         band(b.end, "stiffness range, end joint", chart_colour::other_band);
@@ -169,7 +184,10 @@ nlohmann::json probabilities_json(const std::vector<failure_probability>& fs)
 nlohmann::json sensitivity_json(const project& p, const beam& b, const stiffness_uncertainty& u)
 {
     nlohmann::json out;
-    out["thresholds"] = thresholds_json(find_thresholds(p, b, {moving_end::both, stiffness::pinned()}), "both");
+    // A beam with one joint moves its start alone (threshold.hpp).
+    const bool one_joint = b.layout != beam_layout::two_supports;
+    out["thresholds"] = thresholds_json(find_thresholds(p, b, {moving_end::both, stiffness::pinned()}),
+                                        one_joint ? "start" : "both");
     out["probability"] = probabilities_json(failure_probabilities(p, b, u));
     out["stiffness_correlation"] = u.correlation;
     const auto d = [](const std::optional<stiffness_distribution>& x) {

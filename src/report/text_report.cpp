@@ -90,6 +90,9 @@ void beam_heading(std::ostringstream& o, const project& p, const beam_assessment
     o << "Beam " << b.id << (b.description.empty() ? "" : "  " + b.description) << "\n";
     const bool cantilever = b.layout == beam_layout::cantilever;
     if (cantilever) o << "  Cantilever: root at the start (its joint the only restraint), free tip at the end\n";
+    if (b.layout == beam_layout::overhang)
+        o << "  Overhang: supports at the start (its joint) and at " << u.span(b.span)
+          << " (the beam runs on, continuous, over it), free tip " << u.span(b.overhang) << " beyond; positions from the start\n";
     o << "  " << b.sec.name << (cantilever ? ", length " : ", span ") << u.span(b.span) << ", E = " << u.num(b.E, dims::pressure) << " "
       << u.unit(dims::pressure) << ", I = " << u.num(b.sec.I, dims::second_moment) << " "
       << u.unit(dims::second_moment) << ", depth " << u.num(b.sec.depth, dims::length) << " "
@@ -118,6 +121,10 @@ void joint_table(std::ostringstream& o, const project& p, const beam_assessment&
     for (const auto* j : {&a.start, &a.end}) {
         if (cantilever && j->end == beam_end::end) {
             o << "    " << pad("end", 7) << "free tip: no joint\n";
+            continue;
+        }
+        if (b.layout == beam_layout::overhang && j->end == beam_end::end) {
+            o << "    " << pad("end", 7) << "no joint: the beam runs on, continuous, over the end support to its tip\n";
             continue;
         }
         o << "    " << pad(cantilever ? std::string("root") : to_string(j->end), 7) << pad(u.stiff(j->range.min) + " .. " + u.stiff(j->range.max), 22)
@@ -267,6 +274,30 @@ std::string estimate_cell(double deflection)
     return deflection > 0 ? format_number(frequency_from_deflection(deflection), 4) : std::string("-");
 }
 
+// An overhang's tip: deflection and rotation, pinned, over the range (the
+// corners hold the extremes: linear in the start moment) and fixed.
+void overhang_rows(std::ostringstream& o, const units_view& u, const combination_result& r)
+{
+    const struct {
+        const char* label;
+        dimension dim;
+        double beam_state::*member;
+    } rows[] = {{"tip deflection (down +)", dims::length, &beam_state::tip_deflection},
+                {"tip rotation (-dw/dx)", dims::angle, &beam_state::rotation_tip}};
+    for (const auto& row : rows) {
+        double lo = 0, hi = 0;
+        for (std::size_t i = 0; i < r.corners.size(); ++i) {
+            const double v = r.corners[i].*(row.member);
+            lo = i == 0 ? v : std::min(lo, v);
+            hi = i == 0 ? v : std::max(hi, v);
+        }
+        o << "    " << pad(row.label, 32) << pad(u.unit(row.dim), 10)
+          << (r.pinned ? rpad(u.num(r.pinned.value().*(row.member), row.dim), 11) : std::string())
+          << rpad(u.num(lo, row.dim), 12) << rpad(u.num(hi, row.dim), 12) << rpad(u.num(r.fixed.*(row.member), row.dim), 11)
+          << "\n";
+    }
+}
+
 // Each combination: every result pinned, over the range and fixed (a
 // cantilever: over the range and with a rigid root; its pinned bound is a
 // mechanism and has no column).
@@ -290,6 +321,7 @@ void combination_tables(std::ostringstream& o, const project& p, const beam_asse
               << rpad(u.cell(r.envelope.ranges[i].max, f[i]), 12)
               << rpad(u.cell(r.fixed.*(f[i].member), f[i]), 11) << "\n";
         }
+        if (a.input->layout == beam_layout::overhang) overhang_rows(o, u, r);
         if (r.frequency) {
             const auto& fr = *r.frequency;
             o << "    " << pad("first natural frequency", 32) << pad(u.unit(dims::frequency), 10)
@@ -297,7 +329,7 @@ void combination_tables(std::ostringstream& o, const project& p, const beam_asse
               << rpad(u.num(fr.range.min, dims::frequency), 12)
               << rpad(u.num(fr.range.max, dims::frequency), 12) << rpad(u.num(fr.fixed, dims::frequency), 11) << "\n";
             // The estimate is for a beam on two supports (natural_frequency.hpp).
-            if (!r.pinned) continue;
+            if (!r.pinned || a.input->layout != beam_layout::two_supports) continue;
             o << "    " << pad("  estimate 18/sqrt(delta mm)", 32) << pad(u.unit(dims::frequency), 10)
               << rpad(estimate_cell(r.pinned->max_deflection), 11)
               << rpad(estimate_cell(r.envelope.of(&beam_state::max_deflection).max), 12)
@@ -342,10 +374,13 @@ void check_list(std::ostringstream& o, const project& p, const beam_assessment& 
 void sensitivity(std::ostringstream& o, const project& p, const beam_assessment& a)
 {
     const beam& b = *a.input;
-    if (b.layout == beam_layout::cantilever) return;  // thresholds are not worked out for a cantilever
     const auto thresholds = threshold_report_lines(p, b);
     if (!thresholds.empty()) {
-        o << "\n  Thresholds (the stiffness, both joints together, at which a check changes its answer)\n";
+        o << "\n  Thresholds ("
+          << (b.layout == beam_layout::cantilever ? "the root's stiffness"
+              : b.layout == beam_layout::overhang ? "the start joint's stiffness"
+                                                  : "the stiffness, both joints together,")
+          << " at which a check changes its answer)\n";
         for (const auto& line : thresholds)
             if (line.rfind("Stiffness thresholds", 0) != 0) o << "    " << wrap(line, 94, "      ") << "\n";
     }
@@ -355,7 +390,9 @@ void sensitivity(std::ostringstream& o, const project& p, const beam_assessment&
         o << "\n  Probability that a check does not pass, over the stiffness distribution"
           << (b.start.distribution && b.end.distribution
                   ? (b.stiffness_correlation == 1 ? "s (ends fully correlated)" : "s (ends independent)")
-                  : " of the " + std::string(b.start.distribution ? "start" : "end") + " joint")
+                  : " of the " + std::string(b.layout == beam_layout::cantilever ? "root"
+                                             : b.start.distribution              ? "start joint"
+                                                                                 : "end joint"))
           << "\n";
         for (const auto& f : probabilities) {
             if (f.p_fail <= 0.0) continue;
@@ -454,6 +491,11 @@ std::string text_report(const project_assessment& a, const std::string& version)
         o << "  cantilever       the start joint is the root, the end a free tip; rigid root is the ideal bound, a\n"
              "                   pinned root a mechanism (no column); the tip deflection is down +, the tip's\n"
              "                   rotation_end is -dw/dx, negative as a tip drops under gravity\n";
+    if (std::any_of(p.beams.begin(), p.beams.end(), [](const beam& b) { return b.layout == beam_layout::overhang; }))
+        o << "  overhang         supports at the start and at the span, the beam continuous over the end support\n"
+             "                   to a free tip; positions from the start; end moment = hogging over the end\n"
+             "                   support; max deflection and rotation_end belong to the back span and the end\n"
+             "                   support, the tip rows to the tip (rotation -dw/dx, negative as a tip drops)\n";
     o << "\n";
     o << "Caution: " << wrap(caution_text, 90, "         ") << "\n";
     // Ids, titles and descriptions come from the input: nothing in them may act on a terminal.

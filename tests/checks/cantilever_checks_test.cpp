@@ -186,7 +186,7 @@ TEST_CASE("cantilever root support demand: M + V e - column split by 1/L - resis
     }
 }
 
-TEST_CASE("cantilever refusals at the input edge: pinned root - range reaching 0 - an end joint - overhang not supported yet")
+TEST_CASE("cantilever refusals at the input edge: pinned root - range reaching 0 - an end joint - an overhang without its length")
 {
     const auto refused = [](const std::string& text, const std::string& pointer, const std::string& words) {
         try {
@@ -206,5 +206,5 @@ TEST_CASE("cantilever refusals at the input edge: pinned root - range reaching 0
     refused(with_end, "/beams/0/joints/end", "free tip");
     std::string overhang = cantilever(R"("rigid")");
     overhang.replace(overhang.find(R"("layout": "cantilever")"), 22, R"("layout": "overhang")");
-    refused(overhang, "/beams/0/layout", "not supported yet");
+    refused(overhang, "/beams/0/overhang", "missing required field");
 }

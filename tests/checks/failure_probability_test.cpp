@@ -229,3 +229,49 @@ TEST_CASE("no distribution [common practice - no source]: no probability is repo
     const project p = udl_project(50);
     CHECK(failure_probabilities(p, p.beams.front(), {}).empty());
 }
+
+// ---------------------------------------------------------------------------
+// A cantilever's root with a lognormal stiffness [LN]. Under a UDL the root's
+// flexibility adds 4/kappa to the tip deflection (Roark's Formulas, 7th ed.,
+// Table 8.1, from memory; reference pack 11.5 [D]), so root-flexibility fails
+// for kappa < 4/0.10 = 40, and root-class for kappa < k_b = 8 (EN 1993-1-8
+// 5.2.2.5(1), braced) [EC3]: P = Phi((ln(kappa* EI/L) - ln median)/sigma).
+TEST_CASE("cantilever root - lognormal [LN - EC3]: P(root-class fails) = P(kappa < 8) - P(root-flexibility fails) = P(kappa < 40) - tol 1e-6")
+{
+    const project p = parse_project(R"({ "format": "pinproof-project/1", "title": "root probability",
+      "standard": "EN1993-1-8", "frame": "braced", "beams": [ { "id": "C1", "layout": "cantilever", "span": "2 m",
+      "E": "210 GPa", "section": "IPE 240", "loads": [ { "case": "G", "kind": "udl", "w": "10 kN/m" } ],
+      "combinations": [ { "name": "SLS", "use": "service", "factors": { "G": 1.0 } } ],
+      "joints": { "start": { "stiffness_distribution": { "kind": "lognormal", "median": "30 EI/L", "cov": 0.6 } } } } ] })");
+    const beam& b = p.beams.at(0);
+    const auto fs = failure_probabilities(p, b, {b.start.distribution, b.end.distribution, b.stiffness_correlation});
+    const double sigma = std::sqrt(std::log(1 + 0.6 * 0.6));
+    const auto below = [&](double kappa) {
+        return boost::math::cdf(boost::math::normal(), (std::log(kappa) - std::log(30.0)) / sigma);
+    };
+    bool cls = false, flex = false;
+    for (const auto& f : fs) {
+        CAPTURE(f.check);
+        if (f.check == "root-class") {
+            cls = true;
+            CHECK(std::abs(f.p_fail - below(8.0)) <= 1e-6);
+        }
+        if (f.check == "root-flexibility") {
+            flex = true;
+            CHECK(std::abs(f.p_fail - below(40.0)) <= 1e-6);
+        }
+    }
+    CHECK(cls);
+    CHECK(flex);
+    // A normal distribution truncated at zero reaches the pinned root: refused at the field.
+    try {
+        parse_project(R"({ "format": "pinproof-project/1", "title": "root probability", "standard": "EN1993-1-8",
+          "frame": "braced", "beams": [ { "id": "C1", "layout": "cantilever", "span": "2 m", "section": "IPE 240",
+          "loads": [ { "case": "G", "kind": "udl", "w": "10 kN/m" } ],
+          "combinations": [ { "name": "SLS", "use": "service", "factors": { "G": 1.0 } } ],
+          "joints": { "start": { "stiffness_distribution": { "kind": "normal", "mean": "30 EI/L", "sd": "10 EI/L" } } } } ] })");
+        FAIL("a normal root distribution was accepted");
+    } catch (const input_error& e) {
+        CHECK(std::string(e.what()).find("/beams/0/joints/start/stiffness_distribution") != std::string::npos);
+    }
+}

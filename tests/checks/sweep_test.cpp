@@ -170,3 +170,32 @@ TEST_CASE("sweep chart [issue]: code boundaries and thresholds marked - ranges s
         CHECK(svg.find(t) != std::string::npos);
     CHECK(svg.find("nan") == std::string::npos);
 }
+
+TEST_CASE("cantilever sweep [issue]: the root alone from S*L/EI = 0.01 (no pinned root: a mechanism) to rigid - a grid refused at --grid")
+{
+    const project p = parse_project(R"({ "format": "pinproof-project/1", "title": "cantilever sweep", "standard": "EN1993-1-8",
+      "frame": "braced", "beams": [ { "id": "C1", "layout": "cantilever", "span": "2 m", "section": "IPE 240",
+      "loads": [ { "case": "G", "kind": "udl", "w": "10 kN/m" } ],
+      "combinations": [ { "name": "SLS", "use": "service", "factors": { "G": 1.0 } } ],
+      "joints": { "start": { "stiffness": { "min": "10 EI/L", "max": "50 EI/L" } } },
+      "limits": { "deflection": "span/300" } } ] })");
+    const beam& b = p.beams.at(0);
+    sweep_settings settings;
+    settings.points = 11;
+    const sweep_result s = sweep_beam(p, b, settings);
+    REQUIRE(s.rows.size() == 12);  // 11 log-spaced values and the rigid root
+    CHECK(s.rows.front().at.start.ratio(b.EI(), b.span) == doctest::Approx(0.01).epsilon(1e-12));
+    CHECK(s.rows.back().at.start.is_rigid());
+    for (const auto& r : s.rows) CHECK(r.at.end.is_pinned());  // the free tip
+    CHECK(s.settings.path.moving == moving_end::start);
+    // pinned holds the rigid root: a cantilever has no pinned state.
+    CHECK(s.pinned.max_deflection == s.fixed.max_deflection);
+    CHECK_FALSE(s.thresholds.empty());
+    settings.grid = true;
+    try {
+        sweep_beam(p, b, settings);
+        FAIL("a grid was swept");
+    } catch (const input_error& e) {
+        CHECK(std::string(e.what()).find("--grid") != std::string::npos);
+    }
+}

@@ -15,6 +15,7 @@
 #include <cmath>
 #include <string>
 
+#include "pinproof/core/errors.hpp"
 #include "pinproof/model/natural_frequency.hpp"
 #include "pinproof/model/project.hpp"
 #include "pinproof/checks/threshold.hpp"
@@ -201,4 +202,72 @@ TEST_CASE("frequency threshold - equal springs - UDL [Blevins - natural_frequenc
     CHECK(t->above == check_status::pass);
     const double f = first_natural_frequency(b.span, b.EI(), factored_loads(b.loads, b.combinations[0]), t->at, t->at);
     CHECK(std::abs(f / 12.0 - 1) <= 1e-6);
+}
+
+// ---------------------------------------------------------------------------
+// Cantilevers and overhangs: the one joint moves alone (threshold.hpp).
+//   [C8]  Cantilever, UDL w: tip deflection wL^4/(8EI) (1 + 4/kappa) with a spring
+//         root, kappa = S L/EI (Roark's Formulas, 7th ed., Table 8.1, from memory;
+//         reference pack 11.5 [D]): the increase over the rigid root is 4/kappa, so
+//         root-flexibility changes state at kappa = 4/limit (40 for 10 %), and the
+//         deflection check at kappa = 4/(delta_lim 8EI/(wL^4) - 1).
+//   [EC3] the rigid boundary k_b = 8 (braced) of EN 1993-1-8 5.2.2.5(1) for root-class.
+namespace {
+
+project cantilever_udl(const std::string& deflection)
+{
+    return parse_project(R"({ "format": "pinproof-project/1", "title": "cantilever thresholds", "standard": "EN1993-1-8",
+      "frame": "braced", "beams": [ { "id": "C1", "layout": "cantilever", "span": "2 m", "E": "210 GPa",
+      "section": "IPE 240", "loads": [ { "case": "G", "kind": "udl", "w": "10 kN/m" } ],
+      "combinations": [ { "name": "ULS", "use": "strength", "factors": { "G": 1.35 } },
+                        { "name": "SLS", "use": "service", "factors": { "G": 1.0 } } ],
+      "joints": { "start": { "stiffness": { "min": "10 EI/L", "max": "50 EI/L" }, "moment_resistance": "40 kN*m" } },
+      "limits": { "deflection": ")" + deflection + R"(" } } ] })");
+}
+
+const threshold* of(const std::vector<threshold>& ts, const std::string& id)
+{
+    for (const auto& t : ts)
+        if (t.check == id) return &t;
+    return nullptr;
+}
+
+}  // namespace
+
+TEST_CASE("cantilever thresholds - UDL [C8 - EC3]: root-class at kappa = 8 - root-flexibility at kappa = 40 - deflection at 4/(d_lim 8EI/(wL^4) - 1) - tol 1e-9")
+{
+    const project p = cantilever_udl("span/300");
+    const beam& b = p.beams.at(0);
+    const auto ts = find_thresholds(p, b, {moving_end::both, stiffness::pinned()});
+    const threshold* cls = of(ts, "root-class");
+    REQUIRE(cls);
+    CHECK(cls->ratio == doctest::Approx(8.0).epsilon(1e-9));
+    CHECK(cls->below == check_status::fail);
+    CHECK(cls->above == check_status::pass);
+    const threshold* flex = of(ts, "root-flexibility");
+    REQUIRE(flex);
+    CHECK(flex->ratio == doctest::Approx(40.0).epsilon(1e-9));
+    const double L = 2.0, w = 10e3, rigid_tip = w * std::pow(L, 4) / (8 * b.EI()), limit = L / 300;
+    const threshold* defl = of(ts, "deflection");
+    REQUIRE(defl);
+    CHECK(defl->ratio == doctest::Approx(4.0 / (limit / rigid_tip - 1.0)).epsilon(1e-9));
+    // The scan never meets the pinned root (a mechanism): every threshold has S > 0.
+    for (const auto& t : ts) CHECK(t.at.value() > 0);
+    const auto lines = threshold_report_lines(p, b);
+    REQUIRE_FALSE(lines.empty());
+    CHECK(lines.front().find("the root moving") != std::string::npos);
+}
+
+TEST_CASE("overhang thresholds [EC3]: the start joint alone - stiffness-class-start at S = 0.5 EI/L with L the back span - tol 1e-9")
+{
+    const project p = parse_project(R"({ "format": "pinproof-project/1", "title": "overhang thresholds",
+      "standard": "EN1993-1-8", "frame": "braced", "beams": [ { "id": "O1", "layout": "overhang", "span": "6 m",
+      "overhang": "1.5 m", "section": "IPE 300", "loads": [ { "case": "G", "kind": "udl", "w": "10 kN/m" } ],
+      "combinations": [ { "name": "ULS", "use": "strength", "factors": { "G": 1.35 } } ],
+      "joints": { "start": { "stiffness": { "min": "0.1 EI/L", "max": "0.4 EI/L" } } } } ] })");
+    const auto ts = find_thresholds(p, p.beams.at(0), {moving_end::both, stiffness::pinned()});
+    const threshold* cls = of(ts, "stiffness-class-start");
+    REQUIRE(cls);
+    CHECK(cls->ratio == doctest::Approx(0.5).epsilon(1e-9));
+    CHECK_THROWS_AS(boundary_curve(p, p.beams.at(0), "stiffness-class-start"), internal_error);
 }

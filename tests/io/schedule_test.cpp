@@ -263,5 +263,32 @@ TEST_CASE("schedule: a layout column - a cantilever row takes its root at start 
     const auto c3 = read_schedule_row(s, 3, test_catalogue());
     CHECK_FALSE(c3.input);
     CHECK(where_of(c3) == "line 5, column 8 (layout)");
-    CHECK(message_of(c3).find("not supported yet") != std::string::npos);
+    CHECK(message_of(c3).find("needs an \"overhang\" column") != std::string::npos);
+}
+
+TEST_CASE("schedule: an overhang column - an overhang row takes its start detail and its length - the loads run to the tip - refusals at line and column [the project's rules]")
+{
+    const std::string text = "id,span,section,g,q,start,end,layout,overhang\n"
+                             "O1,6 m,IPE 300,4 kN/m,2 kN/m,FP-3-M20,,overhang,1.5 m\n"
+                             "O2,6 m,IPE 300,4 kN/m,2 kN/m,FP-3-M20,,overhang,\n"
+                             "O3,6 m,IPE 300,4 kN/m,2 kN/m,FP-3-M20,FP-3-M20,overhang,1.5 m\n"
+                             "B1,6 m,IPE 300,4 kN/m,2 kN/m,FP-3-M20,FP-3-M20,,1.5 m\n";
+    const schedule s = parse_schedule(text);
+    const auto o1 = read_schedule_row(s, 0, test_catalogue());
+    REQUIRE(o1.input);
+    CHECK(o1.input->layout == beam_layout::overhang);
+    CHECK(o1.input->overhang == doctest::Approx(1.5).epsilon(1e-15));
+    CHECK(o1.input->end.range.max.is_pinned());
+    for (const auto& l : o1.input->loads) CHECK(l.to == doctest::Approx(7.5).epsilon(1e-15));
+    const auto o2 = read_schedule_row(s, 1, test_catalogue());
+    CHECK_FALSE(o2.input);
+    CHECK(where_of(o2) == "line 3, column 9 (overhang)");
+    const auto o3 = read_schedule_row(s, 2, test_catalogue());
+    CHECK_FALSE(o3.input);
+    CHECK(where_of(o3) == "line 4, column 7 (end)");
+    CHECK(message_of(o3).find("continuous") != std::string::npos);
+    const auto b1 = read_schedule_row(s, 3, test_catalogue());
+    CHECK_FALSE(b1.input);
+    CHECK(where_of(b1) == "line 5, column 9 (overhang)");
+    CHECK(message_of(b1).find("only a row with layout \"overhang\"") != std::string::npos);
 }

@@ -38,6 +38,7 @@
 #include <chrono>
 #include <cmath>
 #include <cstdio>
+#include <optional>
 #include <random>
 #include <set>
 #include <string>
@@ -618,6 +619,70 @@ TEST_CASE("properties: the same beam in SI and in US customary units gives the s
         }
     }
     CHECK(compared == 200);
+    INFO(bad.first);
+    CHECK(bad.count == 0);
+}
+
+TEST_CASE("properties: 2000 random overhangs - finite - in equilibrium [ST] - the start spring's law [MW] - the tip from the deflection polynomial - to 1e-9")
+{
+    // Each random beam read as a whole member: its back span a share 0.3 to 0.95
+    // of its length (or exactly at a load position, so that a load sits on the
+    // end support), the rest the overhang; the start joint pinned, rigid or a spring.
+    failures bad;
+    std::mt19937_64 rng(seed + 17);
+    std::uniform_real_distribution<double> share(0.3, 0.95);
+    for (int i = 0; i < 2000; ++i) {
+        const random_beam& b = beams()[i];
+        const double length = b.span;
+        double L = share(rng) * length;
+        if (i % 5 == 0)
+            for (const auto& l : b.loads)
+                if (l.from > 0.3 * length && l.from < 0.95 * length) L = l.from;
+        const double a = length - L;
+        // L + a may differ from the length by round-off: a load at the far end is put at L + a.
+        std::vector<load> loads = b.loads;
+        for (auto& l : loads) {
+            l.from = std::min(l.from, L + a);
+            l.to = std::min(l.to, L + a);
+        }
+        const resultants r = resultants_of(loads);
+        const scales sc = scales_of(b);
+        std::optional<beam_model> built;
+        try {
+            built.emplace(L, b.EI(), loads, beam_layout::overhang, a);
+        } catch (const std::exception& e) {
+            bad.add(i, std::string("model threw: ") + e.what());
+            continue;
+        }
+        const beam_model& m = *built;
+        for (const stiffness& j : {stiffness::pinned(), stiffness::rigid(), b.joint(b.kappa_start)}) {
+            beam_state s;
+            try {
+                s = m.solve(j, stiffness::pinned());  // the engine's own check throws internal_error
+            } catch (const std::exception& e) {
+                bad.add(i, std::string("solve threw: ") + e.what());
+                continue;
+            }
+            if (!finite_state(s) || !std::isfinite(s.tip_deflection) || !std::isfinite(s.rotation_tip))
+                bad.add(i, "a result is not finite");
+            const double vertical = s.reaction_start + s.reaction_end - r.force;
+            // Moments about the start: the loads, the end support's reaction at L and the start joint's couple.
+            const double rotational = r.moment - s.reaction_end * L - s.moment_start;
+            const double v_scale = r.force_abs + std::abs(s.reaction_start) + std::abs(s.reaction_end);
+            const double m_scale = r.moment_abs + std::abs(s.reaction_end) * L + std::abs(s.moment_start);
+            if (std::abs(vertical) > 1e-9 * v_scale) bad.add(i, "vertical residual " + num(vertical));
+            if (std::abs(rotational) > 1e-9 * m_scale) bad.add(i, "moment residual " + num(rotational));
+            if (j.is_rigid() && s.rotation_start != 0.0) bad.add(i, "rigid start rotates");
+            if (!j.is_rigid() && std::abs(s.moment_start - j.value() * s.rotation_start) > 1e-9 * sc.moment)
+                bad.add(i, "spring law M = S theta broken");
+            // The tip's deflection is the deflection polynomial's at L + a; w(L) = 0 at the end support.
+            if (std::abs(s.tip_deflection - m.deflection_at(length, s)) > 1e-9 * sc.deflection * std::pow(length / L, 3))
+                bad.add(i, "tip deflection " + num(s.tip_deflection) + " against " + num(m.deflection_at(length, s)));
+            if (std::abs(m.deflection_at(L, s)) > 1e-9 * sc.deflection * std::pow(length / L, 3))
+                bad.add(i, "the end support moves by " + num(m.deflection_at(L, s)));
+            if (s.max_deflection_at > L * (1 + 1e-12)) bad.add(i, "max_deflection is not the back span's");
+        }
+    }
     INFO(bad.first);
     CHECK(bad.count == 0);
 }

@@ -212,3 +212,54 @@ TEST_CASE("cantilever - spring root against scipy brentq on the frequency determ
         CHECK(std::abs(f / classical(lambda) - 1) <= 1e-6);
     }
 }
+
+// [scipy, overhang] a beam on supports at 0 and L, continuous over the end support to a free
+// tip at L + a: W1 on the back span and W2 on the overhang (its own origin at the end support),
+// each A cos + B sin + C cosh + D sinh in x/L; start W1 = 0 and W1'' = kappa W1' (W1' = 0 for a
+// rigid start); W1(L) = W2(0) = 0, slope and moment continuous over the support; free tip
+// W2'' = W2''' = 0. The first sign change of the 8 x 8 determinant above 0.02 is bracketed on a
+// grid and solved with brentq; f = lambda^2/(2 pi L^2) sqrt(EI/m), L the back span.
+TEST_CASE("overhang - pinned - spring and rigid start against scipy brentq on the frequency determinant [scipy] - tol 1e-6")
+{
+    const double a = 2.5;  // the overhang; the back span is L
+    const double kappas[] = {0.0, 2.0, 40.0, -1.0};  // -1: rigid
+    std::ostringstream py;
+    py.precision(17);
+    py << "import numpy as np\nfrom scipy.optimize import brentq\n"
+          "r=" << a / L << "\n"
+          "def det(l,k):\n"
+          "  c,s,ch,sh=np.cos(l),np.sin(l),np.cosh(l),np.sinh(l)\n"
+          "  cr,sr,chr,shr=np.cos(l*r),np.sin(l*r),np.cosh(l*r),np.sinh(l*r)\n"
+          "  st=[0,1,0,1] if k<0 else [-l*l,-k*l,l*l,-k*l]\n"
+          "  A=np.array([[1,0,1,0,0,0,0,0],st+[0,0,0,0],[c,s,ch,sh,0,0,0,0],[0,0,0,0,1,0,1,0],\n"
+          "    [-s,c,sh,ch,0,-1,0,-1],[-c,-s,ch,sh,1,0,-1,0],[0,0,0,0,-cr,-sr,chr,shr],[0,0,0,0,sr,-cr,shr,chr]])\n"
+          "  return np.linalg.det(A)\n"
+          "for k in [";
+    for (double k : kappas) py << k << ",";
+    py << "]:\n"
+          "  g=np.arange(0.02,6.0,0.002); v=[det(x,k) for x in g]\n"
+          "  i=next(i for i in range(len(g)-1) if v[i]*v[i+1]<0)\n"
+          "  print(repr(brentq(lambda l: det(l,k), g[i], g[i+1], xtol=1e-15)))\n";
+    const auto out = test_data::python_output(py.str());
+    if (!out) {
+        MESSAGE("scipy not available at /usr/bin/python3: cross-check skipped");
+        return;
+    }
+    std::istringstream in(*out);
+    double previous = 0;
+    for (double k : kappas) {
+        double lambda = 0;
+        in >> lambda;
+        REQUIRE(static_cast<bool>(in));
+        CAPTURE(k);
+        const stiffness start = k < 0 ? stiffness::rigid() : stiffness::spring(k * EI / L);
+        const double f = first_natural_frequency(L, EI, {udl(w, 0, L + a)}, start, stiffness::pinned(),
+                                                 beam_layout::overhang, a);
+        CHECK(std::abs(f / classical(lambda) - 1) <= 1e-6);
+        CHECK(f > previous);  // a stiffer start never lowers it
+        previous = f;
+    }
+    CHECK_THROWS_AS(first_natural_frequency(L, EI, {udl(w)}, stiffness::pinned(), stiffness::pinned(),
+                                            beam_layout::overhang, 0.0),
+                    std::invalid_argument);
+}

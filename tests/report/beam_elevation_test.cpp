@@ -108,3 +108,24 @@ TEST_CASE("beam_elevation - dimensions in the project's units and user text esca
     CHECK(us.find("L = 19.69 ft") != std::string::npos);  // 6 m / 0.3048 m/ft
     CHECK(us.find("kip/ft") != std::string::npos);
 }
+
+TEST_CASE("beam_elevation - an overhang: the end support under the beam at L - the free tip at L + a - L and a dimensioned - an uplift drawn upward")
+{
+    beam b = two_udls_and_a_point_load();
+    b.layout = beam_layout::overhang;
+    b.overhang = 2.0;
+    b.loads.push_back({load_kind::udl, -5000, 0, 0, 8.0, "W"});
+    const std::string svg = beam_elevation_svg(b, unit_system::si);
+    // The member spans the 540 px between the margins (90 .. 630): 8 m, so the end support
+    // sits at 90 + 540 * 6/8 = 495 px and the tip at 630 px.
+    CHECK(svg.find("class=\"beam\" x1=\"90.0\" y1=\"176.0\" x2=\"630.0\"") != std::string::npos);
+    CHECK(svg.find("<path d=\"M495.0 178.0 l-9 16 h18 z\"") != std::string::npos);
+    CHECK(svg.find("roller, beam continuous over it") != std::string::npos);
+    CHECK(svg.find("class=\"free-tip\"") != std::string::npos);
+    CHECK(svg.find("L = 6.000 m") != std::string::npos);
+    CHECK(svg.find("a = 2.000 m") != std::string::npos);
+    // The uplift's arrow heads point up (the head's apex above its base: "l-3.5 7").
+    CHECK(svg.find("l-3.5 7 h7 z") != std::string::npos);
+    // A beam on two supports keeps its downward heads only.
+    CHECK(beam_elevation_svg(two_udls_and_a_point_load(), unit_system::si).find("l-3.5 7 h7 z") == std::string::npos);
+}

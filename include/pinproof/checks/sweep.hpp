@@ -37,13 +37,19 @@ struct sweep_result {
     std::string combination;
     double EI = 0, span = 0;
     sweep_settings settings;
-    beam_state pinned, fixed;          // the chosen combination with ideal ends
+    // The chosen combination with ideal ends. A beam with one joint: its
+    // joint pinned and rigid (a cantilever: `pinned` is the rigid root too,
+    // its pinned root being a mechanism; its rows start at S*L/EI = 0.01).
+    beam_state pinned, fixed;
     std::vector<sweep_row> rows;       // pin first, rigid last (row-major for a grid: start outer)
     std::vector<threshold> thresholds; // along the path (empty for a grid)
 };
 
 // Throws input_error naming the combination if `settings.combination` is not
-// one of the beam's, or the beam has none; internal_error for points < 2.
+// one of the beam's, or the beam has none, and naming --grid for a grid of a
+// beam with one joint; internal_error for points < 2. A beam with one joint
+// (cantilever, overhang) sweeps that joint (single_joint_path) whatever path
+// is asked.
 sweep_result sweep_beam(const project& p, const beam& b, const sweep_settings& settings);
 
 // The stiffness values of a sweep's moving end, pin first and rigid last.

@@ -40,6 +40,13 @@ stiffness stiffness_of_fixity(double r, double EI, double span);  // r in [0, 1]
 
 stiffness_pair point_on_path(const stiffness_path& path, stiffness s);
 
+// The path of a beam with one joint (a cantilever's root, an overhang's
+// start): the start moves, the end is a pin by construction (a free tip, or
+// a beam continuous over its end support). find_thresholds and sweep_beam
+// take it for such a beam whatever path is asked; a cantilever's scan starts
+// at S*L/EI = 0.01, its pinned root being a mechanism.
+stiffness_path single_joint_path();
+
 // The checks (ids and order as assess_beam) and the states of every
 // combination at one stiffness pair.
 struct point_evaluation {
@@ -78,6 +85,7 @@ struct boundary_point {
     stiffness start = stiffness::pinned(), end = stiffness::pinned();
     double fixity_start = 0, fixity_end = 0;
 };
+// A beam on two supports only (internal_error otherwise).
 // Points where the check changes state: on each line of constant start
 // fixity and of constant end fixity (fixity factors evenly spaced on [0, 1],
 // `points` of each), sorted by start fixity.

@@ -23,6 +23,14 @@
 //  with the same polynomials, and a spring root adds the rigid-body rotation
 //  theta_root = M_root / S about the root: w(x) += theta_root x
 //  (docs/method/layouts.md).
+//  An overhang (a beam on two supports running on, continuous, over the end
+//  support to a free tip at L + a) has one redundant, the start moment: the
+//  hogging moment over the end support follows from the statics of the
+//  overhang. The load state is the overhanging beam with a pinned start, and
+//  the unit state a unit hogging moment at the start, both integrated over the
+//  whole length with the end reaction as a point force at x = L and the
+//  rigid-body turn that restores w(L) = 0; the start spring is then a 1x1
+//  solve (the start row of the condensed system, docs/method/layouts.md).
 //  3. Every state is checked for equilibrium of vertical forces and of moments
 //     about the start, and by the shear and moment left over past the end
 //     support (for a cantilever: past the free tip) after integrating along the
@@ -63,6 +71,11 @@ struct beam_state {
     double max_deflection_at = 0;   // m from the start
     double rotation_start = 0;      // rad, positive as a simply supported beam under gravity (a cantilever: the root's)
     double rotation_end = 0;        // rad, same sense (a cantilever: at the tip, -theta(L))
+    // An overhang only (0 in the other layouts): the free tip at x = L + a.
+    // max_deflection is then the back span's (0 <= x <= L), rotation_end is at
+    // the end support and moment_end is the hogging moment over it.
+    double tip_deflection = 0;      // m, downward positive, w(L + a)
+    double rotation_tip = 0;        // rad, -theta(L + a): negative as the tip drops
 };
 
 // Polynomial in the local coordinate s of one element: c[0] + c[1] s + ... + c[5] s^5.
@@ -70,12 +83,19 @@ using element_polynomial = std::array<double, 6>;
 
 class beam_model {
 public:
-    // Throws std::invalid_argument for span <= 0, EI <= 0, non-finite values or
-    // a load outside [0, span] (the project loader reports these to the user
-    // with field names before a model is built).
-    beam_model(double span, double EI, std::vector<load> loads, beam_layout layout = beam_layout::two_supports);
+    // Throws std::invalid_argument for span <= 0, EI <= 0, non-finite values,
+    // a load outside [0, span] ([0, span + overhang] for an overhang), an
+    // overhang <= 0 on that layout or an overhang other than 0 on another (the
+    // project loader reports these to the user with field names before a model
+    // is built).
+    beam_model(double span, double EI, std::vector<load> loads, beam_layout layout = beam_layout::two_supports,
+               double overhang = 0.0);
 
+    // The span between the supports (a cantilever: root to tip); an
+    // overhang's length beyond the end support; the whole member's length.
     double span() const noexcept { return span_; }
+    double overhang() const noexcept { return overhang_; }
+    double length() const noexcept { return span_ + overhang_; }
     beam_layout layout() const noexcept { return layout_; }
     double EI() const noexcept { return EI_; }
     const std::vector<double>& nodes() const noexcept { return nodes_; }
@@ -149,9 +169,14 @@ private:
         std::vector<element_polynomial> w;  // deflection per element
         double reaction_start = 0, reaction_end = 0, rotation_start = 0, rotation_end = 0;
         double closure_shear = 0, closure_moment = 0;  // what is left past the end support
+        // An overhang: the tip's deflection and rotation, the hogging moment over the end support.
+        double tip_deflection = 0, rotation_tip = 0, support_moment = 0;
     };
     load_state integrate(const std::vector<load>& loads, double couple_start, double couple_end) const;
     load_state integrate_cantilever() const;
+    load_state integrate_overhang(const std::vector<load>& loads, double couple_start) const;
+    void set_up_overhang();
+    beam_state state_for_start_moment(double moment_start) const;
     struct element_run {
         double shear = 0, moment = 0, w = 0, slope = 0;  // just past the last node
     };
@@ -167,6 +192,9 @@ private:
     void check_equilibrium(const beam_state& s, double a, double b) const;
 
     double span_ = 0, EI_ = 0;
+    double overhang_ = 0;        // m beyond the end support (overhang layout)
+    std::size_t support_node_ = 0;  // an overhang: index of the node at x = span_
+    double support_moment_ = 0;  // an overhang: hogging moment over the end support, N*m (statics)
     beam_layout layout_ = beam_layout::two_supports;
     double root_moment_ = 0;  // a cantilever's hogging root moment, N*m
     std::vector<load> loads_;
@@ -178,6 +206,8 @@ private:
     std::array<double, 2> reaction0_{}, reaction_per_start_{}, reaction_per_end_{};
     double total_force_ = 0, total_moment_about_start_ = 0, load_scale_ = 0;
     std::array<double, 6> closure_{};  // shear and moment closure of the three states
+    // An overhang: the tip's deflection and rotation of the load state, and per unit start moment.
+    std::array<double, 2> tip0_{}, tip_per_start_{};
 };
 
 // Defined here so that a sweep over many stiffness pairs can inline them.
@@ -199,6 +229,14 @@ inline beam_model::condensed_row beam_model::row_for(int j, stiffness s) const n
 inline std::array<double, 2> beam_model::end_moments(stiffness start, stiffness end) const
 {
     if (layout_ == beam_layout::cantilever) return {root_moment_, 0.0};  // statics, whatever the root's stiffness
+    if (layout_ == beam_layout::overhang) {
+        // One redundant: the start row alone (flex_[0][1] = 0; the end support's
+        // moment is fixed by the overhang's statics).
+        (void)end;
+        const condensed_row r0 = row_for(0, start);
+        if (!(std::abs(r0.own) > 0.0) || !std::isfinite(r0.own)) throw internal_error("start-spring equation is singular");
+        return {r0.rhs / r0.own, support_moment_};
+    }
     const condensed_row r0 = row_for(0, start), r1 = row_for(1, end);
     const double det = r0.own * r1.own - r0.other * r1.other;
     if (!(std::abs(det) > 0.0) || !std::isfinite(det)) throw internal_error("end-spring system is singular");

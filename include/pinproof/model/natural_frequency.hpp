@@ -37,8 +37,12 @@ inline constexpr double standard_gravity = 9.80665;  // m/s^2
 // outside the span, an upward load (negative mass) or no mass at all.
 // A cantilever (beam_layout.hpp) holds only the root's deflection: its tip
 // is free (`end` must be a pin, `start` not: std::invalid_argument otherwise).
+// An overhang (`overhang` > 0, the length beyond the end support) is meshed
+// over span + overhang with the deflection held at the start and at x = span
+// (the beam continuous over it) and the tip free; `end` must be a pin; loads
+// lie within span + overhang.
 double first_natural_frequency(double span, double EI, const std::vector<load>& loads, stiffness start,
-                               stiffness end, beam_layout layout = beam_layout::two_supports);
+                               stiffness end, beam_layout layout = beam_layout::two_supports, double overhang = 0.0);
 
 // The engineers' estimate f = 18 / sqrt(delta), delta the largest deflection in mm
 // under the vibrating mass (f = 0.18 sqrt(g / delta) for a simply supported

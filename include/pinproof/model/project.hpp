@@ -29,11 +29,15 @@ struct deflection_limit {
 struct beam {
     std::string id;
     std::string description;
-    double span = 0;   // m (a cantilever: root to tip)
+    double span = 0;   // m (a cantilever: root to tip; an overhang: between the supports)
     // How the beam is supported (beam_layout.hpp). A cantilever's start joint
     // is its root; its end is a free tip whose joint is a pin by construction
     // (the file gives none).
     beam_layout layout = beam_layout::two_supports;
+    // An overhang: the length beyond the end support to the free tip (m); 0
+    // in the other layouts. Load positions run from the start over the whole
+    // length span + overhang.
+    double overhang = 0;
     double E = 0;      // Pa
     bool E_is_default = false;  // E was not given; the standard's value is used
     section sec;

@@ -1,7 +1,9 @@
 // Sign conventions of pinproof, stated once.
 //
 // The beam lies along x, from the start support (x = 0) to the end support
-// (x = L), drawn left to right in elevation. Gravity acts downwards.
+// (x = L), drawn left to right in elevation. Gravity acts downwards. An
+// overhang runs on past the end support to its free tip at x = L + a, every
+// position still measured from the start support (beam_layout.hpp).
 //
 //   Loads           positive downwards (point force P, line load w). A point
 //                   moment M is positive clockwise in that elevation.
