@@ -1,5 +1,7 @@
 #include "pinproof/report/beam_elevation.hpp"
 
+#include "report/svg_number.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <map>
@@ -24,14 +26,7 @@ constexpr double arrow_max = 70.0;       // the largest point load
 constexpr double arrow_min = 22.0;       // the smallest point load still reads as an arrow
 constexpr double font = 11.0;
 
-std::string num(double v)
-{
-    std::ostringstream s;
-    s.setf(std::ios::fixed);
-    s.precision(1);
-    s << (std::abs(v) < 0.05 ? 0.0 : v);
-    return s.str();
-}
+std::string num(double v) { return svg_number(v); }
 
 // Positions along the beam in m, or ft in US customary units (as the report).
 std::string position_text(double m, unit_system units)

@@ -1,5 +1,7 @@
 #include "pinproof/report/cantilever_elevation.hpp"
 
+#include "report/svg_number.hpp"
+
 #include <algorithm>
 #include <cmath>
 #include <sstream>
@@ -17,13 +19,7 @@ constexpr double y_beam = 130;               // px: the member's axis
 
 std::string esc(const std::string& s) { return xml_text(s); }
 
-std::string num(double v)
-{
-    std::ostringstream s;
-    s.precision(6);
-    s << (std::abs(v) < 1e-9 ? 0.0 : v);
-    return s.str();
-}
+std::string num(double v) { return svg_number(v); }
 
 double x_at(const beam& b, double x) { return x_root + (x_tip - x_root) * x / b.span; }
 

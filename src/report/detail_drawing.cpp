@@ -1,5 +1,7 @@
 #include "pinproof/report/detail_drawing.hpp"
 
+#include "report/svg_number.hpp"
+
 #include "pinproof/report/xml_text.hpp"
 
 #include <algorithm>
@@ -22,14 +24,7 @@ constexpr double max_draw_w = 620.0, max_draw_h = 520.0;
 
 std::string esc(const std::string& s) { return xml_text(s); }
 
-std::string num(double v)
-{
-    std::ostringstream s;
-    s.setf(std::ios::fixed);
-    s.precision(1);
-    s << (std::abs(v) < 0.05 ? 0.0 : v);
-    return s.str();
-}
+std::string num(double v) { return svg_number(v); }
 
 std::string rad(double r) { return format_number(r, 4) + " rad"; }
 

@@ -1,19 +1,14 @@
 #include "report/load_arrow.hpp"
 
+#include "report/svg_number.hpp"
+
 #include <cmath>
 #include <sstream>
 
 namespace pinproof {
 namespace {
 
-std::string num(double v)
-{
-    std::ostringstream s;
-    s.setf(std::ios::fixed);
-    s.precision(1);
-    s << (std::abs(v) < 0.05 ? 0.0 : v);
-    return s.str();
-}
+std::string num(double v) { return svg_number(v); }
 
 }  // namespace
 

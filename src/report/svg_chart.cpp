@@ -1,5 +1,7 @@
 #include "pinproof/report/svg_chart.hpp"
 
+#include "report/svg_number.hpp"
+
 #include "pinproof/report/xml_text.hpp"
 
 #include <algorithm>
@@ -30,13 +32,7 @@ double text_width(const std::string& s) { return char_width * static_cast<double
 
 std::string escape(const std::string& s) { return xml_text(s); }
 
-std::string num(double v)
-{
-    if (!std::isfinite(v)) throw internal_error("a chart coordinate is not finite");
-    char b[32];
-    std::snprintf(b, sizeof b, "%.2f", v);
-    return b;
-}
+std::string num(double v) { return svg_number(v, 2); }
 
 // A closed diamond path of half-width 5 px centred on (x, y), in pixels, so
 // that it keeps its shape whatever the axis scales.
