@@ -83,13 +83,15 @@ std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
     ch.x = {"joint stiffness S*L/EI (-), log scale; EI/L = " +
                 format_quantity(s.EI / s.span, dims::rotational_stiffness, p.units),
             true, 0.01, 1000.0};
-    ch.y = {cantilever ? "result / its value with a rigid root (-)" : "result / its pinned or fixed-end value (-)", false,
-            std::nullopt, std::nullopt};
+    ch.y = {cantilever ? "value with a rigid root / result (-): 1 where the root acts as fixed"
+                       : "result / its pinned or fixed-end value (-)",
+            false, std::nullopt, std::nullopt};
     struct normalised {
         double beam_state::*member;
         bool by_fixed;
         const char* label;
         bool dashed;
+        bool inverse = false;  // reference / result, not result / reference
     };
     const normalised list[] = {
         {&beam_state::moment_start, true, "end moment, start / fixed", false},
@@ -102,10 +104,13 @@ std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
         {&beam_state::reaction_end, false, "reaction, end / pinned", true},
     };
     // A cantilever: its root moment and reaction are statics (the same at every
-    // stiffness); the tip's deflection and rotation over their rigid-root values.
+    // stiffness); the tip's deflection and rotation, as their rigid-root values
+    // over them: 0 for a root that is a pin (a mechanism), 1 for a rigid one.
+    // The ratio the other way grows without bound as the root softens (400 at
+    // S L/EI = 0.01) and flattens the range that matters.
     const normalised cantilever_list[] = {
-        {&beam_state::max_deflection, true, "tip deflection / rigid root", false},
-        {&beam_state::rotation_end, true, "tip rotation / rigid root", true},
+        {&beam_state::max_deflection, true, "rigid root / tip deflection", false, true},
+        {&beam_state::rotation_end, true, "rigid root / tip rotation", true, true},
     };
     double y_top = 1.0;
     for (const auto& n : cantilever ? std::vector<normalised>(std::begin(cantilever_list), std::end(cantilever_list))
@@ -118,7 +123,9 @@ std::string sweep_svg(const project& p, const beam& b, const sweep_result& s)
         for (const auto& r : s.rows) {
             const stiffness k = s.settings.path.moving == moving_end::end ? r.at.end : r.at.start;
             if (k.is_rigid() || k.is_pinned()) continue;  // not on a log axis
-            cs.points.emplace_back(k.ratio(s.EI, s.span), r.state.*(n.member) / ref);
+            const double v = r.state.*(n.member);
+            if (n.inverse && !(std::abs(v) > 0)) continue;
+            cs.points.emplace_back(k.ratio(s.EI, s.span), n.inverse ? ref / v : v / ref);
             y_top = std::max(y_top, cs.points.back().second);
         }
         ch.series.push_back(cs);

@@ -191,6 +191,18 @@ TEST_CASE("cantilever sweep [issue]: the root alone from S*L/EI = 0.01 (no pinne
     // pinned holds the rigid root: a cantilever has no pinned state.
     CHECK(s.pinned.max_deflection == s.fixed.max_deflection);
     CHECK_FALSE(s.thresholds.empty());
+    // The chart plots the rigid root's tip deflection over the tip deflection,
+    // 1 / (1 + 4/kappa) under a UDL (Roark, 7th ed., Table 8.1, from memory,
+    // with the root spring's (wL^2/2)/S L derived in cantilever_checks_test.cpp):
+    // between 0 and 1, not growing without bound as the root softens.
+    for (const auto& r : s.rows) {
+        if (r.at.start.is_rigid()) continue;
+        const double kappa = r.at.start.ratio(b.EI(), b.span);
+        CHECK(s.fixed.max_deflection / r.state.max_deflection == doctest::Approx(1 / (1 + 4 / kappa)).epsilon(1e-9));
+    }
+    const std::string svg = sweep_svg(p, b, s);
+    CHECK(svg.find("rigid root / tip deflection") != std::string::npos);
+    CHECK(svg.find("1 where the root acts as fixed") != std::string::npos);
     settings.grid = true;
     try {
         sweep_beam(p, b, settings);
