@@ -727,7 +727,7 @@ std::optional<double> beam_closure(const closure& c, double support_rotation)
 
 // The state after closure in words: what was solved, and what each joint does in it.
 std::string closed_state_text(const project& p, const std::string& combination, const closed_state& r,
-                              const closing_joint (&cj)[2])
+                              const closing_joint (&cj)[2], bool start_only)
 {
     const formatter fmt{p.units};
     std::string text = "State after closure under " + combination +
@@ -735,6 +735,10 @@ std::string closed_state_text(const project& p, const std::string& combination, 
                        "lower bound where declared dependable, else none) until its gap closes; contact "
                        "frictionless, the bearing force normal to the touching surfaces.";
     for (beam_end k : {beam_end::start, beam_end::end}) {
+        if (start_only && k == beam_end::end) {
+            text += " End: the beam runs on, continuous, over its support (no joint).";
+            continue;
+        }
         const closing_joint& c = cj[k == beam_end::start ? 0 : 1];
         const joint_phase ph = k == beam_end::start ? r.start : r.end;
         text += " " + std::string(k == beam_end::start ? "Start" : "End") + " joint: ";
@@ -809,7 +813,7 @@ void assess_details(const project& p, const beam& b, beam_assessment& a, bool fi
         for (const auto& c : a.combinations)
             if (c.comb.name == ja.detail->strength_combination) governing = &c;
         if (!governing) continue;
-        const beam_model model(b.span, b.EI(), factored_loads(b.loads, governing->comb));
+        const beam_model model(b.span, b.EI(), factored_loads(b.loads, governing->comb), b.layout, b.overhang);
         closing_joint cj[2];
         for (beam_end k : {beam_end::start, beam_end::end}) {
             const joint& j = b.at(k);
@@ -827,7 +831,9 @@ void assess_details(const project& p, const beam& b, beam_assessment& a, bool fi
         }
         closure_consequence cc;
         cc.combination = governing->comb.name;
-        cc.result = solve_with_closure(model, cj[0], cj[1]);
+        // An overhang has its one joint at the start (the end runs on over its support).
+        cc.result = b.layout == beam_layout::overhang ? solve_with_closure_at_start(model, cj[0])
+                                                      : solve_with_closure(model, cj[0], cj[1]);
         const bool start = e == beam_end::start;
         const joint_phase phase = start ? cc.result.start : cc.result.end;
         const sense_check& sc = phase == joint_phase::closed_hogging ? ja.detail->gap.hogging : ja.detail->gap.sagging;
@@ -841,7 +847,7 @@ void assess_details(const project& p, const beam& b, beam_assessment& a, bool fi
         cc.lever_arm = sc.closing.contact ? sc.closing.contact->lever_arm : 0.0;
         if (phase != joint_phase::open && cc.lever_arm > 1e-9)
             cc.contact_force = std::abs(std::abs(M) - own) / cc.lever_arm;
-        cc.assumptions = closed_state_text(p, cc.combination, cc.result, cj);
+        cc.assumptions = closed_state_text(p, cc.combination, cc.result, cj, b.layout == beam_layout::overhang);
         ja.detail->consequence = cc;
     }
 }
@@ -974,7 +980,7 @@ void assess_cantilever(const project& p, const beam& b, beam_assessment& a)
 // start of a beam on two supports; the beam runs on over its end support, so
 // there is no end joint and nothing of it is checked; the back span's
 // deflection and the tip's are checked.
-void assess_overhang(const project& p, const beam& b, beam_assessment& a)
+void assess_overhang(const project& p, const beam& b, beam_assessment& a, const assessment_options& options)
 {
     const beam_end e = beam_end::start;
     a.checks.push_back(stiffness_class_check(p, a.start));
@@ -986,13 +992,23 @@ void assess_overhang(const project& p, const beam& b, beam_assessment& a)
     a.checks.push_back(support_moment_check(p, b, a.start));
     a.checks.push_back(moment_reversal_check(p, a.combinations, e));
     a.checks.push_back(rotation_demand_check(p, a.combinations, e, true));
+    a.checks.push_back(joint_shear_check(p, b, a.combinations, e));
+    a.checks.push_back(declared_resistance_check(p, b, e));
+    a.checks.push_back(ductile_hierarchy_check(p, b, e));
     a.checks.push_back(deflection_check(p, b, a.combinations));
     a.checks.push_back(overhang_tip_deflection_check(p, b, a.combinations));
     a.checks.push_back(frequency_check(p, b, a.combinations));
+    // The start joint's end gap, as on two supports; the end has no joint, so
+    // no detail (assess_details passes it by).
+    assess_details(p, b, a, options.find_min_gap);
+    a.checks.push_back(gap_closure_check(p, b, a.start));
+    if (a.start.detail)
+        for (const auto& f : a.start.detail->findings) a.checks.push_back(detailing_check(f, e, p));
     a.notes.push_back("Overhang: the beam runs on, continuous, over its end support to a free tip " +
                       format_quantity(b.overhang, dims::length, p.units) +
-                      " beyond it. The start joint is checked as on two supports; there is no end joint. The "
-                      "end-gap, detail and collapse checks are not run for an overhang (docs/method/layouts.md).");
+                      " beyond it. The start joint is checked as on two supports, its end gap included; there is no "
+                      "end joint. Moment-rotation laws and the collapse load are not worked out for an overhang "
+                      "(docs/method/layouts.md).");
 }
 
 // Assumptions and defaults applied to the beam, in words.
@@ -1031,7 +1047,7 @@ beam_assessment assess_beam(const project& p, const beam& b, const assessment_op
         return a;
     }
     if (b.layout == beam_layout::overhang) {
-        assess_overhang(p, b, a);
+        assess_overhang(p, b, a, options);
         add_notes(p, b, a);
         return a;
     }

@@ -121,4 +121,49 @@ closed_state solve_with_closure(const beam_model& model, const closing_joint& st
     throw internal_error("no consistent state found for the joints with gap closure");
 }
 
+closed_state solve_with_closure_at_start(const beam_model& model, const closing_joint& start)
+{
+    const double EI = model.EI(), L = model.span();
+    const beam_state pinned = model.solve(stiffness::pinned(), stiffness::pinned());
+    const double rot0 = pinned.rotation_start;
+    // The start's flexibility f (rotation per hogging moment), from a spring of EI/L.
+    const beam_state probe = model.solve(stiffness::spring(EI / L), stiffness::pinned());
+    if (!(std::abs(probe.moment_start) > 0)) throw internal_error("gap closure at the start: no moment from a spring");
+    const double f = (rot0 - probe.rotation_start) / probe.moment_start;
+    if (!(f > 0) || !std::isfinite(f)) throw internal_error("gap closure at the start: the flexibility is not positive");
+    const double rot_scale = std::abs(rot0) + 1e-300, m_scale = rot_scale / f;
+    for (joint_phase p : {joint_phase::open, joint_phase::closed_sagging, joint_phase::closed_hogging}) {
+        const std::optional<joint_row> row = row_for(start, p);
+        if (!row) continue;
+        double m = 0, rot = 0;
+        if (row->fixed_rotation) {
+            rot = row->target;  // rot0 - f m = target
+            m = (rot0 - rot) / f;
+        } else {
+            // m = k rot + b, rot = rot0 - f m
+            m = (row->k * rot0 + row->b) / (1.0 + row->k * f);
+            rot = rot0 - f * m;
+        }
+        if (!consistent(start, p, rot, m, 1e-12 * rot_scale, 1e-12 * m_scale)) continue;
+        closed_state out;
+        // The model at the spring that carries m at rot: a pin (m = 0), a rigid
+        // joint (rot = 0), else the secant m / rot.
+        const double tiny = 1e-14 * rot_scale;
+        stiffness at = std::abs(m) <= 1e-14 * m_scale ? stiffness::pinned()
+                       : std::abs(rot) <= tiny      ? stiffness::rigid()
+                                                    : stiffness::spring(m / rot);
+        if (!at.is_rigid() && !at.is_pinned() && !(at.value() > 0))
+            throw internal_error("gap closure at the start: a negative secant stiffness");
+        out.state = model.solve(at, stiffness::pinned());
+        if (std::abs(out.state.moment_start - m) > 1e-9 * m_scale + 1e-9 * std::abs(m))
+            throw internal_error("gap closure at the start: the state does not carry the moment found");
+        out.state.stiffness_start = start.before;
+        out.start = p;
+        out.end = joint_phase::open;
+        if (row->fixed_rotation) out.state.rotation_start = row->target;
+        return out;
+    }
+    throw internal_error("no consistent state found for the joint with gap closure");
+}
+
 }  // namespace pinproof

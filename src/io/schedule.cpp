@@ -746,13 +746,14 @@ schedule_row read_schedule_row(const schedule& s, std::size_t index, const detai
     else if (auto c = r.cell("overhang", false))
         r.add(*s.column("overhang"), "expected an empty cell: only a row with layout \"overhang\" has an overhang, "
                                      "found " + in_quotes(*c));
-    // An overhang's start detail: the end gap, a derived joint and a law are not worked out for an overhang yet.
+    // An overhang's start detail: its end gap is checked as on two supports; a
+    // derived stiffness or resistance and a law are not worked out for an overhang yet.
     if (overhanging && details[0] &&
-        (details[0]->geometry.is_object() || details[0]->stiffness_from_detail ||
-         details[0]->moment_resistance_from_detail || !details[0]->behaviour.is_null()))
-        r.add(*s.column("start"), "expected a start detail with a stated stiffness and resistance, no geometry and no "
-                                  "moment-rotation law: the end gap, \"from-detail\" and laws of an overhang's start "
-                                  "are not supported yet, found detail " + in_quotes(details[0]->id));
+        (details[0]->stiffness_from_detail || details[0]->moment_resistance_from_detail ||
+         !details[0]->behaviour.is_null()))
+        r.add(*s.column("start"), "expected a start detail with a stated stiffness and resistance and no "
+                                  "moment-rotation law: \"from-detail\" and laws of an overhang's start are not "
+                                  "supported yet, found detail " + in_quotes(details[0]->id));
     // A cantilever's root: a pin is a mechanism; a detail's geometry (the end gap) is not worked out for a root yet.
     if (cantilever && details[0]) {
         const catalogue_detail& d = *details[0];

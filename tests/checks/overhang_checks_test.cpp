@@ -16,6 +16,7 @@
 #include <string>
 
 #include "pinproof/checks/assessment.hpp"
+#include "pinproof/checks/gap_closure.hpp"
 #include "pinproof/io/project_input.hpp"
 #include "pinproof/model/project.hpp"
 
@@ -95,9 +96,10 @@ TEST_CASE("overhang assessment: the start joint's checks as on two supports - no
     const beam& b = p.beams.at(0);
     const auto a = assess_beam(p, b);
     for (const char* id : {"stiffness-class-start", "joint-moment-start", "strength-class-start", "support-moment-start",
-                           "moment-reversal-start", "rotation-demand-start", "deflection", "tip-deflection"})
+                           "moment-reversal-start", "rotation-demand-start", "deflection", "tip-deflection",
+                           "gap-closure-start", "joint-shear-start"})
         CHECK_MESSAGE(has(a, id), id);
-    for (const char* id : {"stiffness-class-end", "joint-moment-end", "gap-closure-start", "root-class"})
+    for (const char* id : {"stiffness-class-end", "joint-moment-end", "gap-closure-end", "root-class"})
         CHECK_FALSE_MESSAGE(has(a, id), id);
     // 4 EI/L is above 0.5 EI/L: not nominally pinned [EN].
     CHECK(find(a, "stiffness-class-start").status == check_status::fail);
@@ -117,7 +119,7 @@ TEST_CASE("overhang assessment: the start joint's checks as on two supports - no
     CHECK(sls->pinned->max_deflection_at <= 6.0);
 }
 
-TEST_CASE("overhang refusals at the input edge: no overhang - overhang on two supports - overhang 0 - a load beyond the tip - an end joint - a support rotation [the project's rules]")
+TEST_CASE("overhang refusals at the input edge: no overhang - overhang on two supports - overhang 0 - a load beyond the tip - an end joint - a rotation capacity [the project's rules]")
 {
     std::string missing = overhang("0", everywhere);
     replace_text(missing, R"("overhang": "1.8 m",)", "");
@@ -134,8 +136,56 @@ TEST_CASE("overhang refusals at the input edge: no overhang - overhang on two su
     replace_text(with_end, R"("moment_resistance": "20 kN*m"}})",
                  R"("moment_resistance": "20 kN*m"}, "end": {"stiffness": 0}})");
     refused(with_end, "/beams/0/joints/end", "continuous");
-    refused(overhang(R"(0, "support_rotation": "2 mrad")", everywhere), "/beams/0/joints/start/support_rotation",
+    refused(overhang(R"(0, "rotation_capacity": "30 mrad")", everywhere), "/beams/0/joints/start/rotation_capacity",
             "not supported yet for an overhang");
+}
+
+// The start joint's end gap on an overhang, as on two supports.
+//   [D1] The pinned start's rotation of a beam overhanging one support, UDL w
+//        over the whole length: theta_A = (w l^3/24 - M_B l/6)/EI with the
+//        hogging moment over the support M_B = w a^2/2 (the simply supported
+//        span's slope under its own load and under an end couple; any
+//        structural-analysis text, e.g. Roark 7th ed. Table 8.1, from memory).
+//   [D2] With the gap closed and the contact rigid, the start is held at its
+//        closure rotation theta_c: the joint takes M = (theta_A - theta_c) 3EI/l,
+//        l/(3EI) being the span's flexibility at the start under a start couple
+//        (the same text; the overhang beyond the support adds none).
+TEST_CASE("overhang start gap [D1] [D2]: the demand is the pinned start's rotation - a closed gap holds the start at closure - tol 1e-9")
+{
+    const std::string detail = R"(, "detail": {"type": "fin-plate", "support": "column-flange", "gap": "GAP",
+        "gap_tolerance": "1 mm", "plate_top": "40 mm", "plate_depth": "190 mm", "plate_thickness": "10 mm",
+        "bolt_diameter": "20 mm", "bolt_rows": 3, "bolt_pitch": "60 mm", "first_bolt": "35 mm", "bolt_line": "50 mm"})";
+    const auto with_gap = [&](const std::string& gap) {
+        std::string d = detail;
+        replace_text(d, "GAP", gap);
+        return overhang(R"({"min": "0.05 EI/L", "max": "0.3 EI/L"})" + d, everywhere);
+    };
+    const double w = 1.35 * 12e3, l = 6.0, a_len = 1.8;
+    {
+        const project p = parse_project(with_gap("10 mm"));
+        const beam& b = p.beams.at(0);
+        const auto as = assess_beam(p, b);
+        const check& c = find(as, "gap-closure-start");
+        const double theta_A = (w * l * l * l / 24 - w * a_len * a_len / 2 * l / 6) / b.EI();
+        CHECK(c.status == check_status::pass);
+        CHECK(*c.value == doctest::Approx(theta_A).epsilon(1e-9));
+        CHECK(has(as, "detailing-min-gap-start"));
+    }
+    {
+        const project p = parse_project(with_gap("1.5 mm"));
+        const beam& b = p.beams.at(0);
+        const auto as = assess_beam(p, b);
+        const check& c = find(as, "gap-closure-start");
+        REQUIRE(c.limit);
+        CHECK(c.status == check_status::fail);
+        REQUIRE(as.start.detail);
+        REQUIRE(as.start.detail->consequence);
+        const auto& cc = *as.start.detail->consequence;
+        const double theta_A = (w * l * l * l / 24 - w * a_len * a_len / 2 * l / 6) / b.EI();
+        CHECK(cc.result.start == joint_phase::closed_sagging);
+        CHECK(cc.result.state.rotation_start == doctest::Approx(*c.limit).epsilon(1e-12));
+        CHECK(cc.result.state.moment_start == doctest::Approx((theta_A - *c.limit) * 3 * b.EI() / l).epsilon(1e-9));
+    }
 }
 
 TEST_CASE("overhang frequency check: the range between the pinned- and fixed-start frequencies - no 18/sqrt(delta) estimate - against limits.frequency [the natural_frequency tests hold the values]")

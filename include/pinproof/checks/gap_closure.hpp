@@ -33,4 +33,15 @@ struct closed_state {
 // rotations lie in that phase's range. Throws internal_error if none is.
 closed_state solve_with_closure(const beam_model& model, const closing_joint& start, const closing_joint& end);
 
+// The same for a beam with one joint, at its start: an overhang (the beam runs
+// on over its end support, beam_layout::overhang). Its start rotation is
+// rot = rot0 - f m (hogging m), both read from the model itself: rot0 with a
+// pinned start, f from a second solve with a spring (L/(3EI) for a uniform
+// beam, whatever runs on beyond the end support). The three phases are each
+// one linear equation; the consistent one is taken, and the state is the
+// model's state at the secant stiffness m / rot, which reproduces that moment
+// and rotation exactly (the model is linear in its start moment). The end
+// phase is open. Throws internal_error if no phase is consistent.
+closed_state solve_with_closure_at_start(const beam_model& model, const closing_joint& start);
+
 }  // namespace pinproof
