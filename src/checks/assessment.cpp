@@ -39,6 +39,17 @@ std::string status_label(check_status s)
     return "?";
 }
 
+value_range corner_range(const combination_result& r, double beam_state::*member)
+{
+    if (r.corners.empty()) throw internal_error("a range with no corner state");
+    value_range out{r.corners.front().*member, r.corners.front().*member};
+    for (const auto& s : r.corners) {
+        out.min = std::min(out.min, s.*member);
+        out.max = std::max(out.max, s.*member);
+    }
+    return out;
+}
+
 const value_range& state_envelope::of(double beam_state::*member) const
 {
     const auto& f = result_fields();

@@ -98,7 +98,8 @@ check declared_resistance_check(const project& p, const beam& b, beam_end e)
         const std::string text = "the declared moment resistance " + fmt(p, *j.moment_resistance, dims::moment) +
                                  " against " + fmt(p, d.moment_resistance, dims::moment) + " derived (" +
                                  (d.tension_rows.empty() ? "the bolt group" : "the bolt rows in tension") + ", " +
-                                 d.moment_governing + " governing)";
+                                 d.moment_governing + " governing; the limit shown, " + fmt(p, *c.limit, dims::moment) +
+                                 ", is 10 % above it)";
         if (*j.moment_resistance > *c.limit)
             found.push_back(text + ": more than 10 % above it, so the joint may not carry what the declaration assumes");
         else

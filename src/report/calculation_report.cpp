@@ -610,12 +610,8 @@ void report_writer::tip_rows(const combination_result& r)
     } rows[] = {{"tip deflection (down +)", dims::length, &beam_state::tip_deflection},
                 {"tip rotation (-dw/dx)", dims::angle, &beam_state::rotation_tip}};
     for (const auto& row : rows) {
-        double lo = 0, hi = 0;
-        for (std::size_t i = 0; i < r.corners.size(); ++i) {
-            const double v = r.corners[i].*(row.member);
-            lo = i == 0 ? v : std::min(lo, v);
-            hi = i == 0 ? v : std::max(hi, v);
-        }
+        const value_range range = corner_range(r, row.member);
+        const double lo = range.min, hi = range.max;
         o_ << "<tr><td>" << esc(row.label) << "</td><td>" << esc(u_.sym(row.dim)) << "</td>"
            << (r.pinned ? "<td class=\"num\">" + u_.num((*r.pinned).*(row.member), row.dim) + "</td>" : std::string())
            << "<td class=\"num\">" << u_.num(lo, row.dim) << "</td><td class=\"num\">" << u_.num(hi, row.dim)

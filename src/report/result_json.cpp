@@ -229,14 +229,9 @@ void add_tip(json& c, json& corners, json& env, const combination_result& r)
     put(c["fixed"], r.fixed);
     for (std::size_t i = 0; i < corners.size(); ++i) put(corners[i], r.corners.at(i));
     for (double beam_state::*m : {&beam_state::tip_deflection, &beam_state::rotation_tip}) {
-        double lo = 0, hi = 0;
-        for (std::size_t i = 0; i < r.corners.size(); ++i) {
-            const double v = r.corners[i].*m;
-            lo = i == 0 ? v : std::min(lo, v);
-            hi = i == 0 ? v : std::max(hi, v);
-        }
-        env[m == &beam_state::tip_deflection ? "tip_deflection" : "rotation_tip"] = {{"min", number(lo)},
-                                                                                       {"max", number(hi)}};
+        const value_range range = corner_range(r, m);
+        env[m == &beam_state::tip_deflection ? "tip_deflection" : "rotation_tip"] = {{"min", number(range.min)},
+                                                                                       {"max", number(range.max)}};
     }
 }
 

@@ -285,12 +285,8 @@ void overhang_rows(std::ostringstream& o, const units_view& u, const combination
     } rows[] = {{"tip deflection (down +)", dims::length, &beam_state::tip_deflection},
                 {"tip rotation (-dw/dx)", dims::angle, &beam_state::rotation_tip}};
     for (const auto& row : rows) {
-        double lo = 0, hi = 0;
-        for (std::size_t i = 0; i < r.corners.size(); ++i) {
-            const double v = r.corners[i].*(row.member);
-            lo = i == 0 ? v : std::min(lo, v);
-            hi = i == 0 ? v : std::max(hi, v);
-        }
+        const value_range range = corner_range(r, row.member);
+        const double lo = range.min, hi = range.max;
         o << "    " << pad(row.label, 32) << pad(u.unit(row.dim), 10)
           << (r.pinned ? rpad(u.num(r.pinned.value().*(row.member), row.dim), 11) : std::string())
           << rpad(u.num(lo, row.dim), 12) << rpad(u.num(hi, row.dim), 12) << rpad(u.num(r.fixed.*(row.member), row.dim), 11)

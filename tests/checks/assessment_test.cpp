@@ -25,6 +25,7 @@
 #include <string>
 
 #include "pinproof/checks/assessment.hpp"
+#include "pinproof/core/errors.hpp"
 #include "pinproof/io/project_input.hpp"
 #include "pinproof/model/natural_frequency.hpp"
 #include "pinproof/model/project.hpp"
@@ -422,4 +423,21 @@ TEST_CASE("support demand of a pinned joint [4.7.7]: the eccentricity moment alo
     const check& c = find(a, "support-moment-start");
     CHECK(c.value == doctest::Approx(6e3).epsilon(1e-9));
     CHECK(c.status == check_status::pass);
+}
+
+// corner_range: the least and largest of a result over the corners (exact: a
+// min and a max of the stored values; the project's rules).
+TEST_CASE("corner_range: min and max over the four corners - no corner is an internal error - exact")
+{
+    combination_result r;
+    for (double v : {0.004, -0.002, 0.007, 0.001}) {
+        beam_state s;
+        s.tip_deflection = v;
+        r.corners.push_back(s);
+    }
+    const value_range range = corner_range(r, &beam_state::tip_deflection);
+    CHECK(range.min == -0.002);
+    CHECK(range.max == 0.007);
+    r.corners.clear();
+    CHECK_THROWS_AS(corner_range(r, &beam_state::tip_deflection), internal_error);
 }

@@ -52,6 +52,13 @@ struct state_envelope {
     const value_range& of(double beam_state::*member) const;
 };
 
+struct combination_result;
+
+// The least and largest of one result over the corners of the range box: the
+// envelope of a result linear in the joints' moments, such as an overhang's
+// tip deflection and rotation (not among result_fields()).
+value_range corner_range(const combination_result& r, double beam_state::*member);
+
 struct combination_result {
     combination comb;
     // The ideal bounds: both ends pinned, both fixed. A cantilever's "fixed"
